@@ -1,0 +1,3 @@
+from hubload.cli import main
+
+main()

@@ -1,0 +1,111 @@
+"""Read a load-case file into a :class:`~hubload.casefile.study.Study` (SI units)."""
+
+from __future__ import annotations
+
+import math
+import tomllib
+from pathlib import Path
+
+import numpy as np
+
+from hubload.casefile.study import Bearing, Cases, Pair, Study, Wheel
+from hubload.casefile.validate import validate_document
+from hubload.errors import InputError
+from hubload.model.iso281 import factors_from_contact_angle
+from hubload.model.kinematics import kmh_to_rpm
+from hubload.schema import FORMAT
+
+TIME_SUM_TOLERANCE_PERCENT = 0.5
+MM = 1e-3
+KN = 1e3
+
+
+def load_study(path: str | Path) -> Study:
+    """Parse, validate and convert the file at ``path``; raise InputError naming it."""
+    file = str(path)
+    try:
+        text = Path(path).read_text(encoding="utf-8")
+    except FileNotFoundError:
+        raise InputError("file not found", file=file) from None
+    except (OSError, UnicodeDecodeError) as error:
+        raise InputError(f"cannot read the file ({error})", file=file) from None
+    try:
+        document = tomllib.loads(text)
+    except tomllib.TOMLDecodeError as error:
+        raise InputError(f"TOML syntax error: {error}", file=file) from None
+    try:
+        return study_from_document(document, source=file)
+    except InputError as error:
+        raise error.located(file) from None
+
+
+def study_from_document(document: dict, source: str = "<document>") -> Study:
+    """Validate a parsed TOML document and convert it to a Study."""
+    data = validate_document(document, FORMAT)
+    wheel = read_wheel(data["wheel"])
+    pair = read_pair(data["pair"])
+    project = data.get("project", {})
+    return Study(
+        source=source,
+        title=project.get("title", Path(source).stem),
+        target_life_h=project.get("target_life_h"),
+        wheel=wheel,
+        pair=pair,
+        cases=read_cases(data["case"], wheel),
+    )
+
+
+def read_wheel(data: dict) -> Wheel:
+    loaded_m = data["loaded_radius_mm"] * MM
+    return Wheel(offset_m=data["offset_mm"] * MM, loaded_radius_m=loaded_m,
+                 rolling_radius_m=data.get("rolling_radius_mm", data["loaded_radius_mm"]) * MM)
+
+
+def read_pair(data: dict) -> Pair:
+    outboard = read_bearing(data["outboard"], "outboard")
+    inboard = read_bearing(data["inboard"], "inboard")
+    if outboard.position_m == inboard.position_m:
+        raise InputError("zero bearing spread: both bearings at the same position; "
+                         "expected the outboard bearing's load centre outboard of the inboard one",
+                         key_path="pair.outboard.position_mm")
+    if outboard.position_m < inboard.position_m:
+        raise InputError(f"expected the outboard bearing (nearer the wheel) at a larger position "
+                         f"than the inboard one ({inboard.position_m / MM:g} mm), "
+                         f"got {outboard.position_m / MM:g} mm", key_path="pair.outboard.position_mm")
+    return Pair(arrangement=data["arrangement"], outboard=outboard, inboard=inboard)
+
+
+def read_bearing(data: dict, label: str) -> Bearing:
+    if "contact_angle_deg" in data:
+        e, y, y0 = (float(v) for v in factors_from_contact_angle(
+            math.radians(data["contact_angle_deg"])))
+    else:
+        e, y, y0 = data["e"], data["Y"], data["Y0"]
+    return Bearing(label=data.get("name", label), position_m=data["position_mm"] * MM,
+                   dynamic_rating_n=data["C_kN"] * KN, static_rating_n=data["C0_kN"] * KN,
+                   e=e, y=y, y0=y0)
+
+
+def read_cases(blocks: list[dict], wheel: Wheel) -> Cases:
+    total_percent = sum(block["time_percent"] for block in blocks)
+    if abs(total_percent - 100.0) > TIME_SUM_TOLERANCE_PERCENT:
+        raise InputError(f"time shares add to {total_percent:g} %, expected 100 % "
+                         f"(within {TIME_SUM_TOLERANCE_PERCENT:g} %)", key_path="case[].time_percent")
+    def column(key: str) -> np.ndarray:
+        return np.array([block[key] for block in blocks], dtype=float)
+
+    return Cases(
+        names=tuple(block["name"] for block in blocks),
+        time_fraction=column("time_percent") / total_percent,
+        wheel_load_n=column("wheel_load_kN") * KN,
+        side_force_n=column("side_force_kN") * KN,
+        tractive_force_n=column("tractive_force_kN") * KN,
+        speed_rpm=np.array([case_speed_rpm(block, wheel) for block in blocks]),
+    )
+
+
+def case_speed_rpm(block: dict, wheel: Wheel) -> float:
+    if "speed_rpm" in block:
+        return block["speed_rpm"]
+    return kmh_to_rpm(block["speed_kmh"], wheel.rolling_radius_m)
+

@@ -1,0 +1,66 @@
+"""Typed, SI-unit view of a load-case file (what the engine computes on).
+
+Scalars may be replaced by numpy arrays that broadcast against the case axis
+(the last one); parameter studies use that to evaluate many variants at once.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+ArrayLike = float | np.ndarray
+
+
+@dataclass(frozen=True)
+class Wheel:
+    offset_m: ArrayLike
+    loaded_radius_m: ArrayLike
+    rolling_radius_m: ArrayLike
+
+
+@dataclass(frozen=True)
+class Bearing:
+    label: str
+    position_m: ArrayLike
+    dynamic_rating_n: ArrayLike
+    static_rating_n: ArrayLike
+    e: ArrayLike
+    y: ArrayLike
+    y0: ArrayLike
+
+
+@dataclass(frozen=True)
+class Pair:
+    arrangement: str
+    outboard: Bearing
+    inboard: Bearing
+
+    def bearings(self) -> dict[str, Bearing]:
+        return {"outboard": self.outboard, "inboard": self.inboard}
+
+
+@dataclass(frozen=True)
+class Cases:
+    """The duty spectrum, one array element per case, in file order."""
+
+    names: tuple[str, ...]
+    time_fraction: np.ndarray
+    wheel_load_n: np.ndarray
+    side_force_n: np.ndarray
+    tractive_force_n: np.ndarray
+    speed_rpm: np.ndarray
+
+    def __len__(self) -> int:
+        return len(self.names)
+
+
+@dataclass(frozen=True)
+class Study:
+    source: str
+    title: str
+    target_life_h: float | None
+    wheel: Wheel
+    pair: Pair
+    cases: Cases

@@ -1,0 +1,58 @@
+"""Command-line interface: a thin click layer that parses options and hands them on.
+
+Bad input raises :class:`hubload.errors.InputError`; it is printed as one line
+and the command exits with status 2, never with a traceback.
+"""
+
+from __future__ import annotations
+
+import functools
+import sys
+
+import click
+
+from hubload.errors import InputError
+
+INPUT_ERROR_STATUS = 2
+
+
+def reports_input_errors(command):
+    """Turn InputError into one line on stderr and exit status 2."""
+    @functools.wraps(command)
+    def wrapper(*args, **kwargs):
+        try:
+            return command(*args, **kwargs)
+        except InputError as error:
+            click.echo(f"error: {error}", err=True)
+            sys.exit(INPUT_ERROR_STATUS)
+    return wrapper
+
+
+@click.group()
+@click.version_option(package_name="hubload")
+def main():
+    """Bearing and shaft life of hydraulic wheel-hub motors from load-case files."""
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@reports_input_errors
+def check(file, as_json):
+    """Loads, ISO 281 lives, damage shares and static safety for FILE."""
+    from hubload import commands
+    commands.check(file, as_json=as_json)
+
+
+@main.command()
+def schema():
+    """Print the load-case file format as a JSON Schema (for editors)."""
+    from hubload import commands
+    commands.schema()
+
+
+@main.command()
+def template():
+    """Print a commented starting load-case file."""
+    from hubload import commands
+    commands.template()

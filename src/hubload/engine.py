@@ -1,0 +1,146 @@
+"""Orchestrates a study: cases -> bearing loads -> lives -> damage -> verdict.
+
+Everything is numpy-vectorised over the case axis (the last one). Study
+parameters may be arrays that broadcast against it, which is how parameter
+studies evaluate many variants in one call.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+
+import numpy as np
+
+from hubload.casefile.study import Bearing, Study
+from hubload.model import iso281, statics, tapered_pair
+from hubload.model.kinematics import distance_km
+
+STATIC_SAFETY_WARNING = 2.0
+
+
+@dataclass(frozen=True)
+class BearingResult:
+    """One bearing over the spectrum; per-case arrays end in the case axis."""
+
+    radial_n: np.ndarray
+    axial_n: np.ndarray
+    equivalent_n: np.ndarray
+    static_equivalent_n: np.ndarray
+    case_life_h: np.ndarray
+    damage_share: np.ndarray
+    life_h: np.ndarray
+    life_km: np.ndarray
+    static_safety: np.ndarray
+
+
+@dataclass(frozen=True)
+class Result:
+    study: Study
+    bearings: dict[str, BearingResult]
+    system_life_h: np.ndarray
+    system_life_km: np.ndarray
+    system_damage_share: np.ndarray
+    mean_speed_rpm: np.ndarray
+    warnings: list[str] = field(default_factory=list)
+
+    @property
+    def dominant_case(self) -> int:
+        """Index of the case with the largest share of the pair's damage."""
+        return int(np.argmax(self.system_damage_share, axis=-1))
+
+
+def bearing_forces(study: Study) -> dict[str, tuple[np.ndarray, np.ndarray]]:
+    """Radial and axial load [N] of each bearing per case (ISO 281 rule for the pair)."""
+    cases, wheel, pair = study.cases, study.wheel, study.pair
+    radial_o, radial_i = statics.radial_loads(
+        cases.wheel_load_n, cases.side_force_n, cases.tractive_force_n, wheel.offset_m,
+        wheel.loaded_radius_m, pair.outboard.position_m, pair.inboard.position_m)
+    axial_o, axial_i = tapered_pair.axial_loads(
+        radial_o, pair.outboard.y, radial_i, pair.inboard.y,
+        statics.external_axial_force_n(cases.side_force_n), pair.arrangement)
+    return {"outboard": (radial_o, axial_o), "inboard": (radial_i, axial_i)}
+
+
+def mean_speed_rpm(study: Study) -> np.ndarray:
+    """Time-weighted mean wheel speed [r/min] of the spectrum."""
+    return np.sum(study.cases.time_fraction * study.cases.speed_rpm, axis=-1)
+
+
+def bearing_result(bearing: Bearing, radial_n, axial_n, study: Study,
+                   mean_rpm) -> BearingResult:
+    cases = study.cases
+    equivalent = iso281.equivalent_dynamic_load_n(radial_n, axial_n, bearing.e, bearing.y)
+    static_equivalent = iso281.equivalent_static_load_n(radial_n, axial_n, bearing.y0)
+    case_life_h = iso281.life_hours(
+        iso281.basic_rating_life_mrev(bearing.dynamic_rating_n, equivalent), cases.speed_rpm)
+    damage = iso281.damage_rate_per_hour(cases.time_fraction, case_life_h)
+    life_h = iso281.spectrum_life_h(damage)
+    return BearingResult(
+        radial_n=radial_n, axial_n=axial_n, equivalent_n=equivalent,
+        static_equivalent_n=static_equivalent, case_life_h=case_life_h,
+        damage_share=iso281.damage_shares(damage), life_h=life_h,
+        life_km=distance_km(life_h, mean_rpm, study.wheel.rolling_radius_m),
+        static_safety=iso281.static_safety(bearing.static_rating_n,
+                                           np.max(static_equivalent, axis=-1)))
+
+
+def system_damage_share(bearings: dict[str, BearingResult]) -> np.ndarray:
+    """Each case's share of the pair's damage.
+
+    The bearings' shares are weighted by their contribution L^-e to the pair's
+    failure probability (the terms of the system-life sum, iso281.system_life).
+    """
+    weights = {label: np.power(result.life_h, -iso281.WEIBULL_SLOPE_ROLLER)
+               for label, result in bearings.items()}
+    total = sum(weights.values())
+    safe_total = np.where(total > 0, total, 1.0)
+    return sum(np.where(total > 0, weight / safe_total, 0.0)[..., None]
+               * bearings[label].damage_share for label, weight in weights.items())
+
+
+def evaluate(study: Study) -> Result:
+    """Loads, ISO 281 lives, damage shares and static safety of the pair."""
+    mean_rpm = mean_speed_rpm(study)
+    bearings = {
+        label: bearing_result(study.pair.bearings()[label], radial, axial, study, mean_rpm)
+        for label, (radial, axial) in bearing_forces(study).items()}
+    system_h = iso281.system_life(*(b.life_h for b in bearings.values()))
+    return Result(
+        study=study, bearings=bearings, system_life_h=system_h,
+        system_life_km=distance_km(system_h, mean_rpm, study.wheel.rolling_radius_m),
+        system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
+        warnings=collect_warnings(study, bearings) if np.ndim(system_h) == 0 else [])
+
+
+def collect_warnings(study: Study, bearings: dict[str, BearingResult]) -> list[str]:
+    """Plain-language warnings for a single study (no parameter arrays)."""
+    warnings = []
+    if not np.any(study.cases.speed_rpm > 0):
+        warnings.append("Every case is at standstill: no fatigue life can be computed; "
+                        "only the static safety applies.")
+    for label, result in bearings.items():
+        s0 = float(result.static_safety)
+        if s0 < STATIC_SAFETY_WARNING:
+            worst = study.cases.names[int(np.argmax(result.static_equivalent_n))]
+            warnings.append(
+                f"Static safety s0 = {s0:.2f} of the {label} bearing under case '{worst}' is "
+                f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings "
+                f"with shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''}).")
+    return warnings
+
+
+@dataclass(frozen=True)
+class Verdict:
+    life_name: str
+    life_h: float
+    target_h: float
+    passed: bool
+
+
+def verdict(result: Result) -> Verdict | None:
+    """System life against the project's target life, or None without a target."""
+    target = result.study.target_life_h
+    if target is None:
+        return None
+    life = float(result.system_life_h)
+    return Verdict(life_name="L10", life_h=life, target_h=target, passed=life >= target)

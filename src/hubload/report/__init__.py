@@ -1,0 +1,1 @@
+"""Output: terminal tables (rich), JSON, files and plots. Computes nothing."""

@@ -1,0 +1,85 @@
+"""Machine-readable results (the JSON contract of docs/json-output.md).
+
+Infinite lives (and undefined values) are written as null.
+"""
+
+from __future__ import annotations
+
+import json
+import math
+from typing import Any
+
+import numpy as np
+
+from hubload.engine import Result, verdict
+from hubload.report.cautions import CAUTIONS
+
+KN = 1e3
+
+
+def number(value: Any) -> float | None:
+    """A finite float, or None for inf/NaN (JSON has neither)."""
+    value = float(value)
+    return value if math.isfinite(value) else None
+
+
+def case_entries(result: Result) -> list[dict]:
+    cases = result.study.cases
+    entries = []
+    for index, name in enumerate(cases.names):
+        bearings = {}
+        for label, bearing in result.bearings.items():
+            bearings[label] = {
+                "fr_kN": number(bearing.radial_n[index] / KN),
+                "fa_kN": number(bearing.axial_n[index] / KN),
+                "p_kN": number(bearing.equivalent_n[index] / KN),
+                "p0_kN": number(bearing.static_equivalent_n[index] / KN),
+                "l10_h": number(bearing.case_life_h[index]),
+                "damage_share": number(bearing.damage_share[index]),
+            }
+        entries.append({
+            "name": name,
+            "time_fraction": number(cases.time_fraction[index]),
+            "speed_rpm": number(cases.speed_rpm[index]),
+            "bearings": bearings,
+            "system_damage_share": number(result.system_damage_share[index]),
+        })
+    return entries
+
+
+def bearing_summaries(result: Result) -> dict:
+    pair = result.study.pair.bearings()
+    return {label: {
+        "name": pair[label].label,
+        "l10_h": number(bearing.life_h),
+        "l10_km": number(bearing.life_km),
+        "s0": number(bearing.static_safety),
+    } for label, bearing in result.bearings.items()}
+
+
+def result_document(result: Result) -> dict:
+    """The whole result as plain JSON-ready data."""
+    study = result.study
+    found = verdict(result)
+    dominant = result.dominant_case
+    return {
+        "title": study.title,
+        "source": study.source,
+        "method": "iso281",
+        "cases": case_entries(result),
+        "bearings": bearing_summaries(result),
+        "system": {"l10_h": number(result.system_life_h),
+                   "l10_km": number(result.system_life_km)},
+        "mean_speed_rpm": number(result.mean_speed_rpm),
+        "dominant_case": {"index": dominant, "name": study.cases.names[dominant]}
+        if np.any(result.system_damage_share > 0) else None,
+        "verdict": None if found is None else {
+            "life": found.life_name, "life_h": number(found.life_h),
+            "target_h": found.target_h, "passed": found.passed},
+        "warnings": list(result.warnings),
+        "cautions": CAUTIONS,
+    }
+
+
+def to_json(result: Result) -> str:
+    return json.dumps(result_document(result), indent=2)

@@ -1,0 +1,92 @@
+"""Rich tables for ``hubload check``."""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+from rich.console import Console
+from rich.table import Table
+
+from hubload.engine import Result, verdict
+from hubload.report.cautions import CAUTIONS
+
+KN = 1e3
+
+
+def hours(value) -> str:
+    value = float(value)
+    if not math.isfinite(value):
+        return "infinite"
+    return f"{value:,.0f}" if value >= 10 else f"{value:.3g}"
+
+
+def share(value) -> str:
+    return f"{100 * float(value):.1f} %"
+
+
+def case_table(result: Result) -> Table:
+    cases = result.study.cases
+    table = Table(title="Load cases: bearing loads and ISO 281 basic life", title_justify="left")
+    table.add_column("case")
+    table.add_column("time", justify="right")
+    table.add_column("n r/min", justify="right")
+    table.add_column("bearing")
+    for heading in ("Fr kN", "Fa kN", "P kN", "P0 kN", "L10 h", "damage"):
+        table.add_column(heading, justify="right")
+    for index, name in enumerate(cases.names):
+        for row, (label, bearing) in enumerate(result.bearings.items()):
+            lead = ([name, share(cases.time_fraction[index]), f"{cases.speed_rpm[index]:.1f}"]
+                    if row == 0 else ["", "", ""])
+            table.add_row(*lead, label,
+                          f"{bearing.radial_n[index] / KN:.2f}", f"{bearing.axial_n[index] / KN:.2f}",
+                          f"{bearing.equivalent_n[index] / KN:.2f}",
+                          f"{bearing.static_equivalent_n[index] / KN:.2f}",
+                          hours(bearing.case_life_h[index]), share(bearing.damage_share[index]),
+                          end_section=row == len(result.bearings) - 1)
+    return table
+
+
+def summary_table(result: Result) -> Table:
+    pair = result.study.pair.bearings()
+    table = Table(title="Spectrum lives (Palmgren-Miner)", title_justify="left")
+    for heading, justify in (("bearing", "left"), ("name", "left"), ("L10 h", "right"),
+                             ("L10 km", "right"), ("s0", "right")):
+        table.add_column(heading, justify=justify)
+    for label, bearing in result.bearings.items():
+        table.add_row(label, pair[label].label, hours(bearing.life_h), hours(bearing.life_km),
+                      f"{float(bearing.static_safety):.2f}")
+    table.add_row("pair (system)", "", hours(result.system_life_h),
+                  hours(result.system_life_km), "", style="bold")
+    return table
+
+
+def verdict_line(result: Result) -> str:
+    found = verdict(result)
+    if found is None:
+        return "No target life given ([project] target_life_h): no verdict."
+    if found.passed:
+        return (f"[green]PASS[/]: system {found.life_name} = {hours(found.life_h)} h "
+                f">= target {hours(found.target_h)} h")
+    return (f"[red]FAIL[/]: system {found.life_name} = {hours(found.life_h)} h "
+            f"< target {hours(found.target_h)} h")
+
+
+def dominant_line(result: Result) -> str:
+    if not np.any(result.system_damage_share > 0):
+        return "No case adds fatigue damage."
+    index = result.dominant_case
+    return (f"Dominant case: '{result.study.cases.names[index]}' "
+            f"({share(result.system_damage_share[index])} of the pair's damage).")
+
+
+def render(result: Result, console: Console) -> None:
+    """Print the full check report."""
+    console.print(f"[bold]{result.study.title}[/]  ({result.study.source})")
+    console.print(case_table(result))
+    console.print(summary_table(result))
+    console.print(dominant_line(result))
+    console.print(verdict_line(result))
+    for warning in result.warnings:
+        console.print(f"[yellow]Warning:[/] {warning}")
+    console.print(f"[dim]Caution: {CAUTIONS}[/]")
