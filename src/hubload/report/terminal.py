@@ -25,25 +25,33 @@ def share(value) -> str:
     return f"{100 * float(value):.1f} %"
 
 
-def case_table(result: Result) -> Table:
+def cases_table(result: Result) -> Table:
     cases = result.study.cases
-    table = Table(title="Load cases: bearing loads and ISO 281 basic life", title_justify="left")
+    table = Table(title="Duty spectrum", title_justify="left")
+    table.add_column("#", justify="right")
     table.add_column("case")
     table.add_column("time", justify="right")
     table.add_column("n r/min", justify="right")
-    table.add_column("bearing")
+    table.add_column("pair damage", justify="right")
+    for index, name in enumerate(cases.names):
+        table.add_row(str(index), name, share(cases.time_fraction[index]),
+                      f"{cases.speed_rpm[index]:.1f}", share(result.system_damage_share[index]))
+    return table
+
+
+def bearing_table(result: Result, label: str) -> Table:
+    bearing = result.bearings[label]
+    name = result.study.pair.bearings()[label].label
+    title = f"{label.capitalize()} bearing" + (f" ({name})" if name != label else "")
+    table = Table(title=f"{title}: loads and ISO 281 basic life per case", title_justify="left")
+    table.add_column("#", justify="right")
     for heading in ("Fr kN", "Fa kN", "P kN", "P0 kN", "L10 h", "damage"):
         table.add_column(heading, justify="right")
-    for index, name in enumerate(cases.names):
-        for row, (label, bearing) in enumerate(result.bearings.items()):
-            lead = ([name, share(cases.time_fraction[index]), f"{cases.speed_rpm[index]:.1f}"]
-                    if row == 0 else ["", "", ""])
-            table.add_row(*lead, label,
-                          f"{bearing.radial_n[index] / KN:.2f}", f"{bearing.axial_n[index] / KN:.2f}",
-                          f"{bearing.equivalent_n[index] / KN:.2f}",
-                          f"{bearing.static_equivalent_n[index] / KN:.2f}",
-                          hours(bearing.case_life_h[index]), share(bearing.damage_share[index]),
-                          end_section=row == len(result.bearings) - 1)
+    for index in range(len(result.study.cases)):
+        table.add_row(str(index), f"{bearing.radial_n[index] / KN:.2f}",
+                      f"{bearing.axial_n[index] / KN:.2f}", f"{bearing.equivalent_n[index] / KN:.2f}",
+                      f"{bearing.static_equivalent_n[index] / KN:.2f}",
+                      hours(bearing.case_life_h[index]), share(bearing.damage_share[index]))
     return table
 
 
@@ -54,7 +62,8 @@ def summary_table(result: Result) -> Table:
                              ("L10 km", "right"), ("s0", "right")):
         table.add_column(heading, justify=justify)
     for label, bearing in result.bearings.items():
-        table.add_row(label, pair[label].label, hours(bearing.life_h), hours(bearing.life_km),
+        name = pair[label].label if pair[label].label != label else ""
+        table.add_row(label, name, hours(bearing.life_h), hours(bearing.life_km),
                       f"{float(bearing.static_safety):.2f}")
     table.add_row("pair (system)", "", hours(result.system_life_h),
                   hours(result.system_life_km), "", style="bold")
@@ -83,7 +92,9 @@ def dominant_line(result: Result) -> str:
 def render(result: Result, console: Console) -> None:
     """Print the full check report."""
     console.print(f"[bold]{result.study.title}[/]  ({result.study.source})")
-    console.print(case_table(result))
+    console.print(cases_table(result))
+    for label in result.bearings:
+        console.print(bearing_table(result, label))
     console.print(summary_table(result))
     console.print(dominant_line(result))
     console.print(verdict_line(result))
