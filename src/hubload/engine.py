@@ -115,6 +115,8 @@ def evaluate(study: Study) -> Result:
 def collect_warnings(study: Study, bearings: dict[str, BearingResult]) -> list[str]:
     """Plain-language warnings for a single study (no parameter arrays)."""
     warnings = []
+    if study.cases.operating is not None:
+        warnings.extend(study.cases.operating.warnings(study.cases.names))
     if not np.any(study.cases.speed_rpm > 0):
         warnings.append("Every case is at standstill: no fatigue life can be computed; "
                         "only the static safety applies.")

@@ -8,11 +8,12 @@ from pathlib import Path
 
 import numpy as np
 
+from hubload.casefile.operating_points import (Motor, Vehicle, derive_cases, read_motor,
+                                               read_vehicle)
 from hubload.casefile.study import Bearing, Cases, Pair, Study, Wheel
 from hubload.casefile.validate import validate_document
 from hubload.errors import InputError
 from hubload.model.iso281 import factors_from_contact_angle
-from hubload.model.kinematics import kmh_to_rpm
 from hubload.schema import FORMAT
 
 TIME_SUM_TOLERANCE_PERCENT = 0.5
@@ -45,20 +46,24 @@ def study_from_document(document: dict, source: str = "<document>") -> Study:
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})
+    motor, vehicle = read_motor(data.get("motor")), read_vehicle(data.get("vehicle"))
     return Study(
         source=source,
         title=project.get("title", Path(source).stem),
         target_life_h=project.get("target_life_h"),
         wheel=wheel,
         pair=pair,
-        cases=read_cases(data["case"], wheel),
+        cases=read_cases(data["case"], wheel, motor, vehicle),
+        motor=motor,
+        vehicle=vehicle,
     )
 
 
 def read_wheel(data: dict) -> Wheel:
     loaded_m = data["loaded_radius_mm"] * MM
     return Wheel(offset_m=data["offset_mm"] * MM, loaded_radius_m=loaded_m,
-                 rolling_radius_m=data.get("rolling_radius_mm", data["loaded_radius_mm"]) * MM)
+                 rolling_radius_m=data.get("rolling_radius_mm", data["loaded_radius_mm"]) * MM,
+                 adhesion_mu=data["adhesion_mu"])
 
 
 def read_pair(data: dict) -> Pair:
@@ -86,26 +91,19 @@ def read_bearing(data: dict, label: str) -> Bearing:
                    e=e, y=y, y0=y0)
 
 
-def read_cases(blocks: list[dict], wheel: Wheel) -> Cases:
+def read_cases(blocks: list[dict], wheel: Wheel, motor: Motor | None = None,
+               vehicle: Vehicle | None = None) -> Cases:
     total_percent = sum(block["time_percent"] for block in blocks)
     if abs(total_percent - 100.0) > TIME_SUM_TOLERANCE_PERCENT:
         raise InputError(f"time shares add to {total_percent:g} %, expected 100 % "
                          f"(within {TIME_SUM_TOLERANCE_PERCENT:g} %)", key_path="case[].time_percent")
-    def column(key: str) -> np.ndarray:
-        return np.array([block[key] for block in blocks], dtype=float)
-
+    points = derive_cases(blocks, wheel, motor, vehicle)
     return Cases(
         names=tuple(block["name"] for block in blocks),
-        time_fraction=column("time_percent") / total_percent,
-        wheel_load_n=column("wheel_load_kN") * KN,
-        side_force_n=column("side_force_kN") * KN,
-        tractive_force_n=column("tractive_force_kN") * KN,
-        speed_rpm=np.array([case_speed_rpm(block, wheel) for block in blocks]),
+        time_fraction=np.array([block["time_percent"] for block in blocks]) / total_percent,
+        wheel_load_n=points.wheel_load_n,
+        side_force_n=points.side_force_n,
+        tractive_force_n=points.tractive_force_n,
+        speed_rpm=points.speed_rpm,
+        operating=points,
     )
-
-
-def case_speed_rpm(block: dict, wheel: Wheel) -> float:
-    if "speed_rpm" in block:
-        return block["speed_rpm"]
-    return kmh_to_rpm(block["speed_kmh"], wheel.rolling_radius_m)
-

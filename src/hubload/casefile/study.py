@@ -10,6 +10,9 @@ from dataclasses import dataclass
 
 import numpy as np
 
+from hubload.casefile.operating_points import Motor, OperatingPoints, Vehicle
+from hubload.schema.fileformat import DEFAULT_ADHESION_MU
+
 ArrayLike = float | np.ndarray
 
 
@@ -18,6 +21,7 @@ class Wheel:
     offset_m: ArrayLike
     loaded_radius_m: ArrayLike
     rolling_radius_m: ArrayLike
+    adhesion_mu: ArrayLike = DEFAULT_ADHESION_MU
 
 
 @dataclass(frozen=True)
@@ -51,6 +55,7 @@ class Cases:
     side_force_n: np.ndarray
     tractive_force_n: np.ndarray
     speed_rpm: np.ndarray
+    operating: OperatingPoints | None = None  # how each case was built, with its flags
 
     def __len__(self) -> int:
         return len(self.names)
@@ -64,3 +69,5 @@ class Study:
     wheel: Wheel
     pair: Pair
     cases: Cases
+    motor: Motor | None = None
+    vehicle: Vehicle | None = None

@@ -16,6 +16,11 @@ def kmh_to_rpm(speed_kmh, rolling_radius_m):
     return np.asarray(speed_kmh) / 3.6 * 60.0 / (2.0 * np.pi * rolling_radius_m)
 
 
+def rpm_to_kmh(speed_rpm, rolling_radius_m):
+    """Vehicle speed [km/h] from wheel speed [r/min] and rolling radius [m] [1]."""
+    return np.asarray(speed_rpm) * 2.0 * np.pi * rolling_radius_m / 60.0 * 3.6
+
+
 def distance_km(life_h, mean_speed_rpm, rolling_radius_m):
     """Distance [km] covered in ``life_h`` [h] at a mean wheel speed [r/min] [1].
 

@@ -13,6 +13,7 @@ import numpy as np
 
 from hubload.engine import Result, verdict
 from hubload.report.cautions import CAUTIONS
+from hubload.report.operating import case_entry
 
 KN = 1e3
 
@@ -43,6 +44,7 @@ def case_entries(result: Result) -> list[dict]:
             "speed_rpm": number(cases.speed_rpm[index]),
             "bearings": bearings,
             "system_damage_share": number(result.system_damage_share[index]),
+            **case_entry(cases, index),
         })
     return entries
 

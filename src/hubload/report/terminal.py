@@ -10,6 +10,7 @@ from rich.table import Table
 
 from hubload.engine import Result, verdict
 from hubload.report.cautions import CAUTIONS
+from hubload.report.operating import operating_table
 
 KN = 1e3
 
@@ -93,6 +94,8 @@ def render(result: Result, console: Console) -> None:
     """Print the full check report."""
     console.print(f"[bold]{result.study.title}[/]  ({result.study.source})")
     console.print(cases_table(result))
+    if (operating := operating_table(result.study)) is not None:
+        console.print(operating)
     for label in result.bearings:
         console.print(bearing_table(result, label))
     console.print(summary_table(result))

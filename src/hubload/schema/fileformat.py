@@ -8,6 +8,8 @@ from __future__ import annotations
 
 from hubload.schema.spec import Choice, Field, Table
 
+DEFAULT_ADHESION_MU = 0.6
+
 PROJECT = Table(
     name="project",
     doc="What the file is about and what it must reach.",
@@ -31,6 +33,47 @@ WHEEL = Table(
               required=True, exclusive_minimum=0, example=330),
         Field("rolling_radius_mm", "number", "Rolling radius [mm], used for km/h <-> r/min and "
               "for distances (default: loaded_radius_mm).", exclusive_minimum=0),
+        Field("adhesion_mu", "number", "Tyre-ground adhesion coefficient: a tractive or braking "
+              "force above adhesion_mu x wheel load is capped there and the case flagged "
+              "(0.6: common practice for tyres on dry ground; see docs/operating-points.md).",
+              default=DEFAULT_ADHESION_MU, exclusive_minimum=0, maximum=2),
+    ),
+)
+
+MOTOR = Table(
+    name="motor",
+    doc="The hydraulic wheel motor: needed by cases given as pressure_bar and flow_lpm.",
+    required=False,
+    fields=(
+        Field("displacement_cc", "number", "Displacement per revolution in full mode [cm3].",
+              required=True, exclusive_minimum=0, example=750),
+        Field("half_mode", "boolean", "The motor can switch to half displacement (two-speed "
+              "motor): cases may then give mode = \"half\".", default=False),
+        Field("efficiency_volumetric", "number", "Volumetric efficiency (speed = flow x "
+              "efficiency / displacement; default 1: ideal).", default=1.0,
+              exclusive_minimum=0, maximum=1, example=0.96),
+        Field("efficiency_mechanical", "number", "Hydraulic-mechanical efficiency (torque = "
+              "pressure x displacement x efficiency / 2 pi; default 1: ideal).", default=1.0,
+              exclusive_minimum=0, maximum=1, example=0.92),
+        Field("max_pressure_bar", "number", "Rated pressure difference [bar]; cases above it "
+              "are flagged.", exclusive_minimum=0, example=350),
+        Field("max_speed_rpm", "number", "Rated speed [r/min]; cases above it are flagged.",
+              exclusive_minimum=0, example=200),
+    ),
+)
+
+VEHICLE = Table(
+    name="vehicle",
+    doc="The axle that carries this wheel: lets cases give lateral_accel_g instead of "
+        "wheel_load_kN and side_force_kN (steady-state lateral load transfer).",
+    required=False,
+    fields=(
+        Field("axle_load_kN", "number", "Static load on this wheel's axle [kN] (both wheels).",
+              required=True, exclusive_minimum=0, example=30),
+        Field("track_mm", "number", "Track width of the axle, tyre centre to tyre centre [mm].",
+              required=True, exclusive_minimum=0, example=1550),
+        Field("cog_height_mm", "number", "Height of the centre of gravity above the ground [mm].",
+              required=True, minimum=0, example=900),
     ),
 )
 
@@ -84,22 +127,38 @@ CASE = Table(
         Field("name", "string", "Name of the case.", required=True, example="straight travel"),
         Field("time_percent", "number", "Share of operating time [%]; all cases add to 100.",
               required=True, minimum=0, maximum=100, example=100),
-        Field("wheel_load_kN", "number", "Vertical force of the ground on the tyre [kN].",
-              required=True, minimum=0, example=25),
+        Field("wheel_load_kN", "number", "Vertical force of the ground on the tyre [kN]; "
+              "required unless a [vehicle] block derives it from lateral_accel_g.",
+              minimum=0, example=25),
         Field("side_force_kN", "number", "Force of the ground on the tyre along the axle [kN], "
-              "positive towards the vehicle centreline (inboard).", default=0.0, example=0),
+              "positive towards the vehicle centreline (inboard); default 0, or wheel load x "
+              "lateral_accel_g.", example=0),
         Field("tractive_force_kN", "number", "Longitudinal force at the tyre [kN], "
-              "+ driving, - braking.", default=0.0, example=5),
+              "+ driving, - braking (default 0).", example=5),
         Field("speed_rpm", "number", "Wheel speed [r/min] (0: standstill).", minimum=0),
         Field("speed_kmh", "number", "Vehicle speed [km/h], converted with the rolling radius.",
               minimum=0, example=8),
+        Field("pressure_bar", "number", "Pressure difference across the motor [bar]: + drives "
+              "the wheel, - brakes it (the motor pumps). Needs a [motor] block."),
+        Field("flow_lpm", "number", "Flow through the motor [l/min]; gives the speed.",
+              minimum=0),
+        Field("mode", "string", "Motor displacement in use (default full; half needs "
+              "[motor] half_mode = true).", choices=("full", "half")),
+        Field("lateral_accel_g", "number", "Steady lateral acceleration [g], + when this wheel "
+              "is on the outside of the turn; gives the side force (and, with a [vehicle] block, "
+              "the wheel load)."),
     ),
-    choices=(Choice("speed", groups=(("speed_rpm",), ("speed_kmh",)),
-                    doc="Give exactly one of speed_rpm or speed_kmh."),),
+    choices=(Choice("speed", groups=(("speed_rpm",), ("speed_kmh",), ("pressure_bar", "flow_lpm")),
+                    doc="Give exactly one of speed_rpm or speed_kmh (a force case), or "
+                        "pressure_bar with flow_lpm (a hydraulic case)."),
+             Choice("tractive force source", groups=(("tractive_force_kN",), ("pressure_bar",)),
+                    required=False,
+                    doc="A hydraulic case derives its tractive force from pressure_bar; "
+                        "do not give tractive_force_kN too.")),
 )
 
 FORMAT = Table(
     name="",
     doc="A hubload load-case file.",
-    tables=(PROJECT, WHEEL, PAIR, CASE),
+    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, CASE),
 )
