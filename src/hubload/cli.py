@@ -56,3 +56,32 @@ def template():
     """Print a commented starting load-case file."""
     from hubload import commands
     commands.template()
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--vary", "specs", multiple=True, metavar="KEY=START:STOP:COUNT",
+              help="Key path of FILE and its evenly spaced values, e.g. "
+                   "wheel.offset_mm=60:160:11 or case[3].side_force_kN=0:8:9 (repeatable: grid).")
+@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write a chart (.png or .svg): lines for one key, a life map for two.")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@reports_input_errors
+def sweep(file, specs, as_json, plot, force):
+    """Lives and safeties of FILE over a range (or grid) of values of its numeric keys."""
+    from hubload import commands
+    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force)
+
+
+@main.command()
+@click.argument("files", nargs=-1, required=True, type=click.Path(dir_okay=False))
+@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write a chart of lives and damage shares (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@reports_input_errors
+def compare(files, as_json, plot, force):
+    """Several load-case FILES side by side: lives, ratios to the first, dominant cases."""
+    from hubload import commands
+    commands.compare(files, as_json=as_json, plot=plot, force=force)

@@ -9,6 +9,7 @@ from rich.console import Console
 
 from hubload.casefile import load_study
 from hubload.engine import evaluate
+from hubload.errors import InputError
 from hubload.report import jsonout, terminal
 from hubload.schema import FORMAT
 from hubload.schema.export import json_schema, template_text
@@ -28,3 +29,53 @@ def schema() -> None:
 
 def template() -> None:
     click.echo(template_text(FORMAT), nl=False)
+
+
+def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
+          force: bool = False) -> None:
+    from hubload.report import sweep_out
+    from hubload.report.files import checked_output
+    from hubload.report.progress import LateProgress
+    from hubload.studies.sweep import run_sweep
+
+    if plot is not None:
+        checked_output(plot, force, (".png", ".svg"))
+        if len(specs) not in (1, 2):
+            raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}",
+                             file=plot)
+    with LateProgress("sweep") as progress:
+        found = run_sweep(file, specs, on_progress=progress)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+
+        figure = sweep_line_figure(found) if len(specs) == 1 else sweep_contour_figure(found)
+        save(figure, plot, force)
+    if as_json:
+        click.echo(sweep_out.to_json(found))
+    else:
+        sweep_out.render(found, Console())
+        if plot is not None:
+            Console().print(f"Plot written to {plot}")
+
+
+def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
+            force: bool = False) -> None:
+    from hubload.report import compare_out
+    from hubload.report.files import checked_output
+    from hubload.studies.compare import run_compare
+
+    if plot is not None:
+        checked_output(plot, force, (".png", ".svg"))
+    found = run_compare(files)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.spectrum import compare_figure
+
+        save(compare_figure(found), plot, force)
+    if as_json:
+        click.echo(compare_out.to_json(found))
+    else:
+        compare_out.render(found, Console())
+        if plot is not None:
+            Console().print(f"Plot written to {plot}")

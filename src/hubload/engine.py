@@ -7,10 +7,11 @@ studies evaluate many variants in one call.
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 
 import numpy as np
 
+from hubload.casefile.batch import pick, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
 from hubload.model.kinematics import distance_km
@@ -79,9 +80,15 @@ def bearing_result(bearing: Bearing, radial_n, axial_n, study: Study,
         radial_n=radial_n, axial_n=axial_n, equivalent_n=equivalent,
         static_equivalent_n=static_equivalent, case_life_h=case_life_h,
         damage_share=iso281.damage_shares(damage), life_h=life_h,
-        life_km=distance_km(life_h, mean_rpm, study.wheel.rolling_radius_m),
-        static_safety=iso281.static_safety(bearing.static_rating_n,
-                                           np.max(static_equivalent, axis=-1)))
+        life_km=per_study_km(life_h, mean_rpm, study),
+        static_safety=iso281.static_safety(
+            bearing.static_rating_n, np.max(static_equivalent, axis=-1, keepdims=True))[..., 0])
+
+
+def per_study_km(life_h, mean_rpm, study: Study) -> np.ndarray:
+    """Distance [km] of per-study lives; the rolling radius of a batched study is (..., 1)."""
+    return distance_km(np.expand_dims(life_h, -1), np.expand_dims(mean_rpm, -1),
+                       study.wheel.rolling_radius_m)[..., 0]
 
 
 def system_damage_share(bearings: dict[str, BearingResult]) -> np.ndarray:
@@ -107,9 +114,23 @@ def evaluate(study: Study) -> Result:
     system_h = iso281.system_life(*(b.life_h for b in bearings.values()))
     return Result(
         study=study, bearings=bearings, system_life_h=system_h,
-        system_life_km=distance_km(system_h, mean_rpm, study.wheel.rolling_radius_m),
+        system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
         warnings=collect_warnings(study, bearings) if np.ndim(system_h) == 0 else [])
+
+
+def evaluate_many(studies: list[Study]) -> list[Result]:
+    """Evaluate variants of a study in one batched call (casefile.batch stacks them).
+
+    The variants must share their structure (case count, choices); each returned
+    Result is the point's own, with its study and warnings, as from evaluate().
+    """
+    batched = evaluate(stack_studies(studies))
+    results = []
+    for index, study in enumerate(studies):
+        point = pick(batched, index, len(studies), studies)
+        results.append(replace(point, warnings=collect_warnings(study, point.bearings)))
+    return results
 
 
 def collect_warnings(study: Study, bearings: dict[str, BearingResult]) -> list[str]:

@@ -24,6 +24,16 @@ KN = 1e3
 def load_study(path: str | Path) -> Study:
     """Parse, validate and convert the file at ``path``; raise InputError naming it."""
     file = str(path)
+    document = read_document(path)
+    try:
+        return study_from_document(document, source=file)
+    except InputError as error:
+        raise error.located(file) from None
+
+
+def read_document(path: str | Path) -> dict:
+    """The parsed TOML of the file at ``path`` (not yet validated); InputError naming it."""
+    file = str(path)
     try:
         text = Path(path).read_text(encoding="utf-8")
     except FileNotFoundError:
@@ -34,10 +44,7 @@ def load_study(path: str | Path) -> Study:
         document = tomllib.loads(text)
     except tomllib.TOMLDecodeError as error:
         raise InputError(f"TOML syntax error: {error}", file=file) from None
-    try:
-        return study_from_document(document, source=file)
-    except InputError as error:
-        raise error.located(file) from None
+    return document
 
 
 def study_from_document(document: dict, source: str = "<document>") -> Study:

@@ -1,0 +1,123 @@
+"""Many studies as one: stacking Study variants along a leading point axis, and back.
+
+The engine and the model broadcast over leading axes with the case axis last,
+so P variants of a study evaluate in one call once their parameters are
+stacked: a scalar becomes shape (P, 1), a per-case array (P, N). Stacking is
+derived from the dataclasses themselves, so fields added to the Study later
+stack without changes here:
+
+- floats (and 0-d arrays) always stack to (P, 1), so every result carries the
+  point axis first;
+- arrays and integers stack when they differ between points, else stay shared;
+- labels (names, titles, sources) keep the first point's value: they name
+  things and never enter the physics;
+- anything else (strings, booleans, None) must be equal in every point, else
+  :class:`StackError`.
+
+:func:`pick` takes one point back out of a batched result.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+from collections.abc import Sequence
+from typing import Any
+
+import numpy as np
+
+from hubload.casefile.study import Study
+
+LABEL_FIELDS = frozenset({"source", "title", "names", "label", "name"})
+
+
+class StackError(ValueError):
+    """The studies differ in something that cannot be stacked (a choice, a count)."""
+
+
+def stack_studies(studies: Sequence[Study]) -> Study:
+    """One Study whose parameters carry a leading point axis of length len(studies)."""
+    if not studies:
+        raise StackError("nothing to stack")
+    return stack_values(list(studies), "study")
+
+
+def stack_values(values: list, name: str) -> Any:
+    first = values[0]
+    if dataclasses.is_dataclass(first) and not isinstance(first, type):
+        if any(type(value) is not type(first) for value in values):
+            raise StackError(f"{name}: different types")
+        return dataclasses.replace(first, **{
+            field.name: stack_values([getattr(value, field.name) for value in values],
+                                     field.name)
+            for field in dataclasses.fields(first) if field.init})
+    if name in LABEL_FIELDS:
+        return first
+    if isinstance(first, dict):
+        if any(value.keys() != first.keys() for value in values):
+            raise StackError(f"{name}: different keys")
+        return {key: stack_values([value[key] for value in values], str(key)) for key in first}
+    if is_float_scalar(first):
+        if not all(is_float_scalar(value) for value in values):
+            raise StackError(f"{name}: numbers mixed with other values")
+        return np.array(values, dtype=float)[:, None]
+    if isinstance(first, (list, tuple)) and not all_equal(values):
+        if any(not isinstance(value, type(first)) or len(value) != len(first)
+               for value in values):
+            raise StackError(f"{name}: different lengths")
+        return type(first)(stack_values([value[i] for value in values], name)
+                           for i in range(len(first)))
+    if isinstance(first, np.ndarray) or is_integer(first):
+        return stack_arrays(values, name)
+    if not all_equal(values):
+        raise StackError(f"{name}: differs between the studies ({first!r}, ...)")
+    return first
+
+
+def stack_arrays(values: list, name: str) -> Any:
+    arrays = [np.asarray(value) for value in values]
+    if all(array.shape == arrays[0].shape and np.array_equal(array, arrays[0])
+           for array in arrays):
+        return values[0]
+    if any(array.shape != arrays[0].shape for array in arrays):
+        raise StackError(f"{name}: different shapes")
+    stacked = np.stack(arrays)
+    return stacked[:, None] if stacked.ndim == 1 else stacked
+
+
+def is_float_scalar(value: Any) -> bool:
+    return (isinstance(value, (float, np.floating))
+            or (isinstance(value, np.ndarray) and value.ndim == 0
+                and np.issubdtype(value.dtype, np.floating)))
+
+
+def is_integer(value: Any) -> bool:
+    return isinstance(value, (int, np.integer)) and not isinstance(value, bool)
+
+
+def all_equal(values: list) -> bool:
+    first = values[0]
+    try:
+        return all(bool(value == first) for value in values[1:])
+    except (ValueError, TypeError):
+        return False
+
+
+def pick(batched: Any, index: int, count: int, studies: Sequence[Study]) -> Any:
+    """Point ``index`` of a batched object of ``count`` points.
+
+    Arrays whose first axis has the point count are indexed; Study instances are
+    replaced by the original point study; containers are walked; the rest is shared.
+    """
+    if isinstance(batched, Study):
+        return studies[index]
+    if dataclasses.is_dataclass(batched) and not isinstance(batched, type):
+        return dataclasses.replace(batched, **{
+            field.name: pick(getattr(batched, field.name), index, count, studies)
+            for field in dataclasses.fields(batched) if field.init})
+    if isinstance(batched, dict):
+        return {key: pick(value, index, count, studies) for key, value in batched.items()}
+    if isinstance(batched, (list, tuple)):
+        return type(batched)(pick(value, index, count, studies) for value in batched)
+    if isinstance(batched, np.ndarray) and batched.ndim >= 1 and batched.shape[0] == count:
+        return batched[index]
+    return batched

@@ -1,0 +1,119 @@
+"""Comparison output: rich tables and the JSON document of ``hubload compare``."""
+
+from __future__ import annotations
+
+import json
+
+from rich.console import Console
+from rich.table import Table
+
+from hubload.report.cautions import CAUTIONS
+from hubload.report.jsonout import number
+from hubload.report.series import all_series
+from hubload.report.terminal import hours, share
+from hubload.studies.compare import Comparison
+
+# Keys of the check's JSON left out per file: the case table (summarised as damage shares)
+# and the cautions (written once).
+PER_CASE_KEYS = ("cases", "cautions")
+
+
+def damage_shares(document: dict) -> list[dict]:
+    return [{"case": case["name"], "share": case["system_damage_share"]}
+            for case in document["cases"]]
+
+
+def compare_document(comparison: Comparison) -> dict:
+    series = comparison.life_series()
+    ratios = {item.label: comparison.ratios(item) for item in series}
+    files = []
+    for index, entry in enumerate(comparison.entries):
+        files.append({
+            **{key: value for key, value in entry.document.items()
+               if key not in PER_CASE_KEYS},
+            "damage_shares": damage_shares(entry.document),
+            "ratio_to_first": {label: None if values[index] is None else number(values[index])
+                               for label, values in ratios.items()},
+        })
+    return {"files": files, "cautions": CAUTIONS}
+
+
+def to_json(comparison: Comparison) -> str:
+    return json.dumps(compare_document(comparison), indent=2)
+
+
+def ratio_text(value: float | None) -> str:
+    return "-" if value is None else f"x{value:.2f}"
+
+
+def file_lines(comparison: Comparison) -> list[str]:
+    return [f"#{i}: [bold]{e.document['title']}[/] ({e.document['source']})"
+            for i, e in enumerate(comparison.entries, start=1)]
+
+
+def lives_table(comparison: Comparison) -> Table:
+    """Quantities in rows, files in columns (ratios against file #1 in brackets)."""
+    entries = comparison.entries
+    table = Table(title="Side by side (ratio against #1)", title_justify="left")
+    table.add_column("")
+    for index in range(1, len(entries) + 1):
+        table.add_column(f"#{index}", justify="right")
+    for item in comparison.life_series():
+        values = item.values(e.document for e in entries)
+        ratios = comparison.ratios(item)
+        table.add_row(f"{item.label} h", *(
+            hours(value) + ("" if index == 0 else f" ({ratio_text(ratios[index])})")
+            for index, value in enumerate(values)))
+    table.add_row("worst s0", *(worst_safety(e.document) for e in entries))
+    table.add_row("verdict", *(verdict_text(e.document) for e in entries))
+    table.add_row("dominant case", *(dominant_text(e.document) for e in entries))
+    return table
+
+
+def worst_safety(document: dict) -> str:
+    safeties = [s.values([document])[0] for s in all_series(document) if s.label.endswith(" s0")]
+    return f"{min(safeties):.2f}" if safeties else "-"
+
+
+def verdict_text(document: dict) -> str:
+    verdict = document.get("verdict")
+    if verdict is None:
+        return "no target"
+    return (f"[green]pass[/] ({verdict['life']})" if verdict["passed"]
+            else f"[red]FAIL[/] ({verdict['life']})")
+
+
+def dominant_text(document: dict) -> str:
+    dominant = document.get("dominant_case")
+    if dominant is None:
+        return "none"
+    value = document["cases"][dominant["index"]]["system_damage_share"]
+    return f"{dominant['name']} ({share(value)})"
+
+
+def shares_table(index: int, document: dict) -> Table:
+    table = Table(title=f"#{index}: damage shares of the pair by case", title_justify="left")
+    for heading, justify in (("case", "left"), ("share", "right"), ("", "left")):
+        table.add_column(heading, justify=justify)
+    dominant = (document.get("dominant_case") or {}).get("index")
+    for position, item in enumerate(damage_shares(document)):
+        style = "bold" if position == dominant else None
+        table.add_row(item["case"], share(item["share"] or 0.0), bar(item["share"]), style=style)
+    return table
+
+
+def bar(value: float | None, width: int = 20) -> str:
+    filled = round((value or 0.0) * width)
+    return "[cyan]" + "█" * filled + "[/]" + "·" * (width - filled)
+
+
+def render(comparison: Comparison, console: Console) -> None:
+    for line in file_lines(comparison):
+        console.print(line)
+    console.print(lives_table(comparison))
+    for index, entry in enumerate(comparison.entries, start=1):
+        console.print(shares_table(index, entry.document))
+    for entry in comparison.entries:
+        for warning in entry.document.get("warnings", []):
+            console.print(f"[yellow]Warning[/] ({entry.document['title']}): {warning}")
+    console.print(f"[dim]Caution: {CAUTIONS}[/]")

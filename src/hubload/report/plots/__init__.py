@@ -1,0 +1,64 @@
+"""Charts (matplotlib, Agg canvas: no display needed): sweeps, comparisons, damage shares.
+
+Figures are built with matplotlib's object API (no pyplot state) and written as
+PNG or SVG by the file name's extension, or returned as inline SVG text for the
+HTML report. Every chart carries the cautions in its footer.
+"""
+
+from __future__ import annotations
+
+import functools
+import io
+import textwrap
+
+import matplotlib
+from matplotlib.backends.backend_agg import FigureCanvasAgg
+from matplotlib.figure import Figure
+
+from hubload.report.cautions import CAUTIONS
+from hubload.report.files import checked_output
+
+PLOT_SUFFIXES = (".png", ".svg")
+STYLE = {"svg.fonttype": "path", "svg.hashsalt": "hubload", "font.size": 9,
+         "axes.grid": True, "grid.alpha": 0.3, "axes.spines.top": False,
+         "axes.spines.right": False}
+TARGET_COLOUR = "#c0392b"
+SYSTEM_COLOUR = "#111111"
+BEARING_COLOURS = ("#1f77b4", "#ff7f0e", "#2ca02c", "#9467bd")
+
+
+def styled(build):
+    """Run a figure builder with the house style in effect (rc settings apply at build time)."""
+    @functools.wraps(build)
+    def wrapper(*args, **kwargs):
+        with matplotlib.rc_context(STYLE):
+            return build(*args, **kwargs)
+    return wrapper
+
+
+def new_figure(width_in: float, height_in: float) -> Figure:
+    figure = Figure(figsize=(width_in, height_in), dpi=110, layout="constrained")
+    FigureCanvasAgg(figure)
+    return figure
+
+
+def add_caution(figure: Figure) -> None:
+    wrapped = "\n".join(textwrap.wrap("Caution: " + CAUTIONS, width=150))
+    figure.get_layout_engine().set(rect=(0, 0.06, 1, 0.94))
+    figure.text(0.01, 0.005, wrapped, fontsize=6, color="#555555", va="bottom")
+
+
+def save(figure: Figure, path: str, force: bool) -> None:
+    """Write ``figure`` as PNG or SVG (by extension); never over a file without ``force``."""
+    target = checked_output(path, force, PLOT_SUFFIXES)
+    with matplotlib.rc_context(STYLE):
+        figure.savefig(target, format=target.suffix.lower().lstrip("."))
+
+
+def svg_text(figure: Figure) -> str:
+    """The figure as an inline <svg> element (no XML prolog, text drawn as paths)."""
+    buffer = io.StringIO()
+    with matplotlib.rc_context(STYLE):
+        figure.savefig(buffer, format="svg")
+    text = buffer.getvalue()
+    return text[text.index("<svg"):]

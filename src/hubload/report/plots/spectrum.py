@@ -1,0 +1,111 @@
+"""Damage-share bars of one file, and the comparison chart of several files."""
+
+from __future__ import annotations
+
+import numpy as np
+from matplotlib.figure import Figure
+
+from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
+                                  new_figure, styled)
+from hubload.report.series import all_series
+from hubload.studies.compare import Comparison
+
+DOMINANT_COLOUR = "#c0392b"
+SHARE_COLOUR = "#4c78a8"
+
+
+def draw_shares(axes, document: dict, with_bearings: bool, largest: float | None = None) -> None:
+    """Horizontal bars: each case's share of the pair's damage (dominant case in red)."""
+    cases = document["cases"]
+    names = [case["name"] for case in cases]
+    positions = np.arange(len(cases))
+    system = np.array([case["system_damage_share"] or 0.0 for case in cases]) * 100
+    dominant = (document.get("dominant_case") or {}).get("index")
+    colours = [DOMINANT_COLOUR if i == dominant else SHARE_COLOUR for i in positions]
+    height = 0.8 / (3 if with_bearings else 1)
+    axes.barh(positions, system, height=height, color=colours, label="pair (system)")
+    if with_bearings:
+        for k, label in enumerate(cases[0]["bearings"]):
+            shares = [(case["bearings"][label]["damage_share"] or 0.0) * 100 for case in cases]
+            axes.barh(positions + (k + 1) * height, shares, height=height, alpha=0.55,
+                      color=BEARING_COLOURS[k % len(BEARING_COLOURS)], label=label)
+    for y, value in zip(positions, system):
+        axes.annotate(f"{value:.1f} %", (value, y), xytext=(3, -3), textcoords="offset points",
+                      fontsize=7)
+    axes.set_yticks(positions + (height if with_bearings else 0), names)
+    axes.invert_yaxis()
+    drawn = list(system)
+    if with_bearings:
+        drawn += [(case["bearings"][label]["damage_share"] or 0.0) * 100
+                  for case in cases for label in case["bearings"]]
+    largest = max(drawn, default=0.0) if largest is None else largest
+    axes.set_xlim(0, min(100.0, largest * 1.2 + 5))
+    axes.set_xlabel("share of fatigue damage [%]")
+    axes.grid(axis="y", visible=False)
+
+
+@styled
+def damage_share_figure(document: dict) -> Figure:
+    """Each case's share of the damage, for the pair and each bearing (check results)."""
+    figure = new_figure(8.0, 1.6 + 0.45 * len(document["cases"]))
+    axes = figure.subplots()
+    draw_shares(axes, document, with_bearings=True)
+    axes.set_title(f"{document['title']}: damage shares by case", loc="left")
+    axes.legend(fontsize=7, loc="lower right")
+    add_caution(figure)
+    return figure
+
+
+@styled
+def compare_figure(comparison: Comparison) -> Figure:
+    """Lives of each file (grouped bars, log scale, target) over damage-share bars per file."""
+    documents = [entry.document for entry in comparison.entries]
+    case_rows = [len(d["cases"]) for d in documents]
+    figure = new_figure(8.5, 3.2 + sum(0.32 * n + 0.5 for n in case_rows))
+    grid = figure.add_gridspec(1 + len(documents), 1,
+                               height_ratios=[max(case_rows) * 0.9, *case_rows])
+    draw_lives(figure.add_subplot(grid[0]), comparison)
+    largest = max((100 * (case["system_damage_share"] or 0.0) for d in documents
+                   for case in d["cases"]), default=0.0)
+    for row, document in enumerate(documents, start=1):
+        axes = figure.add_subplot(grid[row])
+        draw_shares(axes, document, with_bearings=False, largest=largest)
+        axes.set_title(f"{document['title']}: damage shares of the pair", loc="left",
+                       fontsize=9)
+    add_caution(figure)
+    return figure
+
+
+def draw_lives(axes, comparison: Comparison) -> None:
+    series = comparison.life_series()
+    documents = [entry.document for entry in comparison.entries]
+    width = 0.8 / max(len(series), 1)
+    positions = np.arange(len(documents))
+    bearing_index: dict[str, int] = {}
+    lowest = []
+    for k, item in enumerate(series):
+        values = np.array(item.values(documents), dtype=float)
+        shown = np.where(np.isfinite(values), values, np.nan)
+        lowest += [v for v in shown if np.isfinite(v)]
+        colour = SYSTEM_COLOUR if item.system else BEARING_COLOURS[
+            bearing_index.setdefault(item.label.split()[0], len(bearing_index))
+            % len(BEARING_COLOURS)]
+        bars = axes.bar(positions + k * width, shown, width=width, label=item.label + " h",
+                        color=colour, alpha=0.5 if item.modified else 0.9)
+        ratios = comparison.ratios(item)
+        axes.bar_label(bars, labels=["" if r is None else f"x{r:.2f}" for r in ratios],
+                       fontsize=6)
+    for index, document in enumerate(documents):
+        verdict = document.get("verdict")
+        if verdict is not None:
+            axes.hlines(verdict["target_h"], index - width / 2, index + 0.8 - width / 2,
+                        color=TARGET_COLOUR, linestyle=":", linewidth=2,
+                        label="target" if index == 0 else None)
+            lowest.append(verdict["target_h"])
+    axes.set_yscale("log")
+    if lowest:
+        axes.set_ylim(bottom=min(lowest) / 3)
+    axes.set_ylabel("life [h]")
+    axes.set_xticks(positions + 0.4 - width / 2, [d["title"] for d in documents], fontsize=8)
+    axes.set_title("Lives (bar labels: ratio against the first file)", loc="left")
+    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))

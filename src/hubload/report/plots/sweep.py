@@ -1,0 +1,173 @@
+"""Sweep charts: lives and safeties against one key, or a life map over two keys."""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+from matplotlib.colors import LogNorm
+from matplotlib.figure import Figure
+
+from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
+                                  new_figure, styled)
+from hubload.report.series import all_series
+from hubload.studies.sweep import Sweep
+
+SAFETY_GUIDE = 2.0  # s0 >= 2: common practice for roller bearings with shock loads
+
+
+def finite_or_nan(values) -> np.ndarray:
+    array = np.asarray(values, dtype=float)
+    return np.where(np.isfinite(array), array, np.nan)
+
+
+def target_values(sweep: Sweep) -> np.ndarray | None:
+    verdicts = [p.document.get("verdict") for p in sweep.points]
+    if verdicts[0] is None:
+        return None
+    return np.array([v["target_h"] for v in verdicts], dtype=float)
+
+
+def line_style(series, bearing_index: dict[str, int]) -> dict:
+    style = {"linestyle": "--" if series.modified else "-"}
+    if series.system:
+        return {**style, "color": SYSTEM_COLOUR, "linewidth": 2.4}
+    label = series.label.split()[0]
+    colour = BEARING_COLOURS[bearing_index.setdefault(label, len(bearing_index))
+                             % len(BEARING_COLOURS)]
+    return {**style, "color": colour, "linewidth": 1.4}
+
+
+@styled
+def sweep_line_figure(sweep: Sweep) -> Figure:
+    """Lives (log scale) and safeties against the one varied key, target and crossings drawn."""
+    axis = sweep.axes[0]
+    documents = [p.document for p in sweep.points]
+    series = all_series(documents[0])
+    safety = [s for s in series if s.kind == "safety"]
+    figure = new_figure(8.0, 7.0 if safety else 5.0)
+    axes = figure.subplots(2 if safety else 1, 1, sharex=True, squeeze=False,
+                           height_ratios=[2, 1] if safety else [1])[:, 0]
+    lives_axes = axes[0]
+    x = axis.values
+    colours: dict[str, int] = {}
+    for item in (s for s in series if s.kind == "life"):
+        values = finite_or_nan(item.values(documents))
+        if np.all(np.isnan(values)):
+            continue
+        lives_axes.plot(x, values, label=item.label + " h", **line_style(item, colours))
+    targets = target_values(sweep)
+    if targets is not None:
+        lives_axes.plot(x, targets, color=TARGET_COLOUR, linestyle=":", linewidth=2,
+                        label=f"target ({sweep.governing_life_name})")
+        mark_crossings(lives_axes, sweep, targets)
+    mark_file_value(axes, sweep)
+    lives_axes.set_yscale("log")
+    lives_axes.set_ylabel("life [h]")
+    lives_axes.set_title(f"{sweep.title}: lives against {axis.key}", loc="left")
+    lives_axes.legend(fontsize=7, loc="best")
+    if safety:
+        plot_safeties(axes[1], x, documents, safety, colours)
+    axes[-1].set_xlabel(axis.key)
+    add_caution(figure)
+    return figure
+
+
+def mark_crossings(axes, sweep: Sweep, targets: np.ndarray) -> None:
+    x = sweep.axes[0].values
+    for _, crossings in sweep.crossings():
+        for crossing in crossings:
+            level = float(np.interp(crossing.value, x, targets))
+            axes.plot([crossing.value], [level], marker="o", color=TARGET_COLOUR, zorder=5)
+            word = "falls below" if crossing.falls_below else "reaches"
+            axes.annotate(f"{word} target\nat {crossing.value:.4g}", (crossing.value, level),
+                          textcoords="offset points", xytext=(6, 8), fontsize=7,
+                          color=TARGET_COLOUR)
+
+
+def mark_file_value(axes, sweep: Sweep) -> None:
+    value = sweep.file_values.get(sweep.axes[0].key)
+    if value is None:
+        return
+    for each in axes:
+        each.axvline(value, color="#777777", linestyle="-.", linewidth=1)
+    axes[0].annotate("file", (value, 1), xycoords=("data", "axes fraction"), fontsize=7,
+                     color="#555555", xytext=(3, -10), textcoords="offset points")
+
+
+def plot_safeties(axes, x, documents, safety, colours) -> None:
+    for item in safety:
+        values = finite_or_nan(item.values(documents))
+        style = {"color": SYSTEM_COLOUR, "linewidth": 2} if item.label.startswith("shaft") \
+            else line_style(item, colours)
+        axes.plot(x, values, label=item.label, **{**style, "linestyle": "-"})
+    axes.axhline(1.0, color=TARGET_COLOUR, linewidth=1.2, label="1 (limit)")
+    axes.axhline(SAFETY_GUIDE, color=TARGET_COLOUR, linewidth=1, linestyle=":",
+                 label=f"s0 = {SAFETY_GUIDE:g} (common practice)")
+    axes.set_ylabel("safety factor [-]")
+    axes.set_ylim(bottom=0)
+    axes.legend(fontsize=7, loc="best")
+
+
+@styled
+def sweep_contour_figure(sweep: Sweep) -> Figure:
+    """Map of the governing system life over two keys, with the target contour."""
+    rows, columns = sweep.axes[0], sweep.axes[1]
+    lives = np.array([math.inf if p.governing_life_h is None else p.governing_life_h
+                      for p in sweep.points], dtype=float).reshape(sweep.shape)
+    finite = lives[np.isfinite(lives)]
+    figure = new_figure(8.0, 6.0)
+    axes = figure.subplots()
+    name = sweep.governing_life_name
+    if finite.size:
+        low, high = finite.min(), finite.max()
+        shown = np.clip(np.where(np.isfinite(lives), lives, high), low, high)
+        if high > low:
+            levels = nice_levels(low, high)
+            filled = axes.contourf(columns.values, rows.values, shown, levels=levels,
+                                   norm=LogNorm(levels[0], levels[-1]), cmap="viridis")
+            figure.colorbar(filled, ax=axes, label=f"system {name} [h]", ticks=levels,
+                            format=hours_label)
+            lines = axes.contour(columns.values, rows.values, shown, levels=levels,
+                                 colors="white", linewidths=0.5, alpha=0.6)
+            axes.clabel(lines, fontsize=6, fmt=lambda v: hours_label(v) + " h")
+        draw_target_contour(axes, sweep, shown)
+    axes.grid(False)
+    mark_file_point(axes, sweep)
+    axes.set_xlabel(columns.key)
+    axes.set_ylabel(rows.key)
+    axes.set_title(f"{sweep.title}\nsystem {name} over {rows.key} and {columns.key}", loc="left")
+    add_caution(figure)
+    return figure
+
+
+def nice_levels(low: float, high: float) -> list[float]:
+    """1-2-5 steps per decade that enclose [low, high] (for log-scaled life maps)."""
+    steps = [m * 10.0 ** k for k in range(math.floor(math.log10(low)) - 1,
+                                          math.ceil(math.log10(high)) + 1) for m in (1, 2, 5)]
+    below = max(v for v in steps if v <= low)
+    above = min(v for v in steps if v >= high)
+    return [v for v in steps if below <= v <= above]
+
+
+def hours_label(value: float, _position=None) -> str:
+    return f"{value:,.0f}" if value >= 10 else f"{value:.2g}"
+
+
+def draw_target_contour(axes, sweep: Sweep, lives: np.ndarray) -> None:
+    targets = target_values(sweep)
+    if targets is None:
+        return
+    ratio = lives / targets.reshape(sweep.shape)
+    if np.nanmin(ratio) < 1 < np.nanmax(ratio):
+        contour = axes.contour(sweep.axes[1].values, sweep.axes[0].values, np.log(ratio),
+                               levels=[0.0], colors=TARGET_COLOUR, linewidths=2.2)
+        axes.clabel(contour, fmt={0.0: f"target {sweep.governing_life_name}"}, fontsize=8)
+
+
+def mark_file_point(axes, sweep: Sweep) -> None:
+    row, column = (sweep.file_values.get(a.key) for a in sweep.axes[:2])
+    if row is not None and column is not None:
+        axes.plot([column], [row], marker="X", markersize=9, color="white",
+                  markeredgecolor="black", label="file")
+        axes.legend(fontsize=7, loc="upper right")

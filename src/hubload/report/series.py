@@ -1,0 +1,79 @@
+"""Named quantities read from the check's JSON documents (the contract keys).
+
+Sweeps, comparisons and the HTML report draw from these, so a quantity shows up
+wherever a file's results carry it (the modified life L10m with a lubrication
+block, the shaft's minimum safety with a shaft block) and is left out elsewhere.
+"""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Callable, Iterable
+from dataclasses import dataclass
+
+MISSING = object()
+
+
+def lookup(document: dict, dotted: str):
+    """The value at ``dotted`` (e.g. ``system.l10m_h``), or MISSING when the key is absent."""
+    node = document
+    for key in dotted.split("."):
+        if not isinstance(node, dict) or key not in node:
+            return MISSING
+        node = node[key]
+    return node
+
+
+def shaft_min_safety(document: dict):
+    """Lowest ``min_safety`` over ``shaft.sections[]`` (None when not finite), MISSING without a shaft."""
+    sections = lookup(document, "shaft.sections")
+    if sections is MISSING or not isinstance(sections, list) or not sections:
+        return MISSING
+    values = [s.get("min_safety") for s in sections if isinstance(s, dict)]
+    finite = [v for v in values if isinstance(v, (int, float))]
+    return min(finite) if finite else None
+
+
+@dataclass(frozen=True)
+class Series:
+    """One plotted/tabulated quantity: a label, its kind (life or safety) and a reader."""
+
+    label: str
+    kind: str  # "life" [h] or "safety" [-]
+    read: Callable[[dict], object]
+    system: bool = False
+    modified: bool = False
+
+    def values(self, documents: Iterable[dict]) -> list[float]:
+        """Values per document; a null life is infinite, a missing value NaN."""
+        out = []
+        for document in documents:
+            value = self.read(document)
+            if value is MISSING:
+                out.append(math.nan)
+            elif value is None:
+                out.append(math.inf)
+            else:
+                out.append(float(value))
+        return out
+
+
+def reader(dotted: str) -> Callable[[dict], object]:
+    return lambda document: lookup(document, dotted)
+
+
+def all_series(document: dict) -> list[Series]:
+    """The quantities this document carries, lives first (system, then each bearing)."""
+    bearings = lookup(document, "bearings")
+    labels = list(bearings) if isinstance(bearings, dict) else []
+    candidates = [Series("system L10", "life", reader("system.l10_h"), system=True),
+                  Series("system L10m", "life", reader("system.l10m_h"), system=True,
+                         modified=True)]
+    for label in labels:
+        candidates += [Series(f"{label} L10", "life", reader(f"bearings.{label}.l10_h")),
+                       Series(f"{label} L10m", "life", reader(f"bearings.{label}.l10m_h"),
+                              modified=True)]
+    candidates += [Series(f"{label} s0", "safety", reader(f"bearings.{label}.s0"))
+                   for label in labels]
+    candidates.append(Series("shaft min safety", "safety", shaft_min_safety))
+    return [series for series in candidates if series.read(document) is not MISSING]

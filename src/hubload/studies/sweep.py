@@ -1,0 +1,164 @@
+"""Parameter sweeps: any numeric key of a file over evenly spaced values, on a grid.
+
+The file is read once; each point sets the varied keys in the parsed document and
+converts it to a Study (cheap), and the points are evaluated by the engine in
+batches (``engine.evaluate_many``), never file by file.
+"""
+
+from __future__ import annotations
+
+import itertools
+import math
+from collections.abc import Callable, Sequence
+from dataclasses import dataclass
+
+import numpy as np
+
+from hubload.casefile.load import read_document, study_from_document
+from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_study
+from hubload.engine import Result, evaluate_many
+from hubload.errors import InputError
+from hubload.report.jsonout import result_document
+from hubload.studies.crossing import Crossing, target_crossings
+
+MAX_POINTS = 100_000
+BATCH_POINTS = 1024
+# Keys of the check's JSON that describe the file, not a point: written once per sweep.
+FILE_LEVEL_KEYS = ("title", "source", "method", "cases", "cautions")
+
+
+@dataclass(frozen=True)
+class Axis:
+    """One varied key and its evenly spaced values."""
+
+    path: KeyPath
+    values: np.ndarray
+
+    @property
+    def key(self) -> str:
+        return self.path.text
+
+
+@dataclass(frozen=True)
+class SweepPoint:
+    values: dict[str, float]
+    result: Result
+    document: dict
+
+    @property
+    def governing_life_h(self) -> float | None:
+        """The life the verdict uses (L10, or L10m when given), else the system L10; None = inf."""
+        verdict = self.document.get("verdict")
+        if verdict is not None:
+            return verdict["life_h"]
+        return self.document["system"]["l10_h"]
+
+
+@dataclass(frozen=True)
+class Sweep:
+    title: str
+    source: str
+    axes: tuple[Axis, ...]
+    points: tuple[SweepPoint, ...]
+    target_life_h: float | None
+    file_values: dict[str, float | None]
+
+    @property
+    def shape(self) -> tuple[int, ...]:
+        return tuple(len(axis.values) for axis in self.axes)
+
+    @property
+    def governing_life_name(self) -> str:
+        verdict = self.points[0].document.get("verdict")
+        return verdict["life"] if verdict else "L10"
+
+    def crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
+        """Target crossings along the last axis, for each value of the others.
+
+        Works on life / target per point, so a varied target life is followed too.
+        """
+        if self.points[0].document.get("verdict") is None:
+            return []
+        ratios = np.array([ratio_to_target(p.document) for p in self.points]).reshape(self.shape)
+        found = []
+        for fixed in itertools.product(*(range(n) for n in self.shape[:-1])):
+            where = {axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)}
+            found.append((where, target_crossings(self.axes[-1].values, ratios[fixed], 1.0)))
+        return found
+
+
+def ratio_to_target(document: dict) -> float:
+    """Governing life / target life of a point (inf for an infinite life)."""
+    verdict = document["verdict"]
+    return math.inf if verdict["life_h"] is None else verdict["life_h"] / verdict["target_h"]
+
+
+def parse_vary(spec: str, document: dict, file: str) -> Axis:
+    """``KEY=START:STOP:COUNT`` -> Axis; InputError (naming the file and key) when malformed."""
+    key, equals, span = spec.partition("=")
+    key = key.strip()
+    parts = span.split(":")
+    if not equals or not key or len(parts) != 3:
+        raise InputError(f"--vary expects KEY=START:STOP:COUNT (e.g. wheel.offset_mm=60:140:9), "
+                         f"got {spec!r}", file=file)
+    try:
+        path = parse_key_path(key, document)
+    except InputError as error:
+        raise error.located(file) from None
+    try:
+        start, stop = float(parts[0]), float(parts[1])
+        count = int(parts[2])
+    except ValueError:
+        raise InputError(f"expected numbers START:STOP and a whole COUNT, got {span!r}",
+                         file=file, key_path=key) from None
+    if not (math.isfinite(start) and math.isfinite(stop)) or count < 2 or start == stop:
+        raise InputError(f"expected finite START != STOP and COUNT >= 2, got {span!r}",
+                         file=file, key_path=key)
+    values = np.linspace(start, stop, count)
+    if path.integer:
+        if not np.allclose(values, np.round(values), rtol=0, atol=1e-9):
+            raise InputError(f"'{path.field.key}' is a whole number: choose START, STOP and "
+                             f"COUNT so that every step is whole, got {span!r}",
+                             file=file, key_path=key)
+        values = np.round(values)
+    return Axis(path=path, values=values)
+
+
+def run_sweep(file: str, specs: Sequence[str],
+              on_progress: Callable[[int, int], None] | None = None) -> Sweep:
+    """Evaluate the grid of every ``--vary`` spec (the first key varies slowest)."""
+    document = read_document(file)
+    try:
+        base = study_from_document(document, source=file)
+    except InputError as error:
+        raise error.located(file) from None
+    if not specs:
+        raise InputError("give at least one --vary KEY=START:STOP:COUNT", file=file)
+    axes = tuple(parse_vary(spec, document, file) for spec in specs)
+    keys = [axis.key for axis in axes]
+    if len(set(keys)) != len(keys):
+        raise InputError(f"each key may be varied once, got {', '.join(keys)}", file=file)
+    total = math.prod(len(axis.values) for axis in axes)
+    if total > MAX_POINTS:
+        raise InputError(f"the grid has {total:,} points; at most {MAX_POINTS:,} are allowed",
+                         file=file)
+    grid = list(itertools.product(*(axis.values for axis in axes)))
+    points: list[SweepPoint] = []
+    for start in range(0, total, BATCH_POINTS):
+        chunk = [{axis.path: float(v) for axis, v in zip(axes, values)}
+                 for values in grid[start:start + BATCH_POINTS]]
+        studies = [variant_study(document, values, file) for values in chunk]
+        for values, result in zip(chunk, evaluate_many(studies)):
+            points.append(SweepPoint(values={path.text: v for path, v in values.items()},
+                                     result=result, document=point_document(result)))
+        if on_progress is not None:
+            on_progress(len(points), total)
+    return Sweep(title=base.title, source=file, axes=axes, points=tuple(points),
+                 target_life_h=base.target_life_h,
+                 file_values={axis.key: current_value(document, axis.path) for axis in axes})
+
+
+def point_document(result: Result) -> dict:
+    """The check's JSON document of one point, without the keys that describe the file."""
+    document = result_document(result)
+    return {key: value for key, value in document.items() if key not in FILE_LEVEL_KEYS}
