@@ -115,10 +115,30 @@ def test_sweep_json_has_values_and_the_checks_objects_per_point():
         [30, 40, 50, 60, 70, 80, 90, 100]
     assert {"bearings", "system"} <= set(document["points"][0])
     assert document["cautions"]
-    # The file's target (4000 h) is crossed between 50 and 60 kN: L(C) of the outboard
-    # bearing follows C^(10/3), and the interpolation lands between the two points.
-    (crossing,) = document["crossings"]
-    assert 50 < crossing["value"] < 60 and not crossing["falls_below"]
+
+
+def test_target_crossing_lands_on_the_closed_form_rating(tmp_path):
+    # Basic-life file (no lubrication block): the outboard life follows (C/C_file)^(10/3)
+    # (ISO 281:2007, 7.1) and the pair's life (L_o^-e + L_i^-e)^(-1/e), e = 9/8
+    # (Lundberg-Palmgren system life), so the system reaches the target T exactly at
+    # C* = C_file (L_o* / L_o)^(3/10) with L_o* = (T^-e - L_i^-e)^(-1/e).
+    document = read_toml(YARD_LOADER)
+    for key in [k for k in document if k not in ("project", "wheel", "pair", "case")]:
+        del document[key]
+    file = write_toml(document, tmp_path / "basic.toml")
+    check = json.loads(CliRunner().invoke(main, ["check", str(file), "--json"]).output)
+    life_o, life_i = (check["bearings"][b]["l10_h"] for b in ("outboard", "inboard"))
+    e, target = 9 / 8, 0.5 * life_i  # reachable: below the inboard bearing's own life
+    document["project"]["target_life_h"] = target
+    write_toml(document, file)
+    needed_o = (target ** -e - life_i ** -e) ** (-1 / e)
+    c_star = document["pair"]["outboard"]["C_kN"] * (needed_o / life_o) ** 0.3
+    swept = json.loads(CliRunner().invoke(main, [
+        "sweep", str(file), "--vary", f"pair.outboard.C_kN={0.6 * c_star}:{1.6 * c_star}:41",
+        "--json"]).output)
+    (crossing,) = swept["crossings"]
+    assert not crossing["falls_below"]
+    assert crossing["value"] == pytest.approx(c_star, rel=2e-3)
 
 
 def test_compare_ratios_and_dominant_cases_match_separate_checks(tmp_path):
