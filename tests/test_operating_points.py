@@ -79,8 +79,8 @@ def test_half_mode_case_turns_twice_as_fast_with_half_the_torque():
 
 
 @settings(max_examples=40, deadline=None)
-@given(pressure=st.floats(-300, 400), flow=st.floats(0, 120), wheel=st.floats(5, 80),
-       side=st.floats(-20, 20))
+@given(pressure=st.floats(-300, 400), flow=st.one_of(st.just(0.0), st.floats(0.1, 120)),
+       wheel=st.floats(5, 80), side=st.floats(-20, 20))
 def test_hydraulic_case_loads_the_bearings_like_the_force_case_it_stands_for(
         pressure, flow, wheel, side):
     motor = {"displacement_cc": 1200, "efficiency_mechanical": 0.92,
