@@ -85,3 +85,18 @@ def compare(files, as_json, plot, force):
     """Several load-case FILES side by side: lives, ratios to the first, dominant cases."""
     from hubload import commands
     commands.compare(files, as_json=as_json, plot=plot, force=force)
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--out", type=click.Path(dir_okay=False),
+              help="Write the Markdown sheet to this file (default: print it).")
+@click.option("--force", is_flag=True, help="Overwrite an existing --out file.")
+@click.option("--s0", "required_s0", type=float, default=None,
+              help="Static safety s0 the required static ratings must reach "
+                   "(default 2, the check's warning level).")
+@reports_input_errors
+def brief(file, out, force, required_s0):
+    """A supplier brief for FILE: required ratings and open questions (Markdown)."""
+    from hubload import commands
+    commands.brief(file, out=out, force=force, required_s0=required_s0)

@@ -3,12 +3,13 @@
 from __future__ import annotations
 
 import json
+import math
 
 import click
 from rich.console import Console
 
 from hubload.casefile import load_study
-from hubload.engine import evaluate
+from hubload.engine import STATIC_SAFETY_WARNING, evaluate
 from hubload.errors import InputError
 from hubload.report import jsonout, terminal
 from hubload.schema import FORMAT
@@ -79,3 +80,23 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
         compare_out.render(found, Console())
         if plot is not None:
             Console().print(f"Plot written to {plot}")
+
+
+def brief(file: str, out: str | None = None, force: bool = False,
+          required_s0: float | None = None) -> None:
+    from hubload.casefile.load import read_document
+    from hubload.report.brief_md import brief_markdown
+    from hubload.report.files import checked_output, write_text
+    from hubload.studies.requirements import requirements_of
+
+    required_s0 = STATIC_SAFETY_WARNING if required_s0 is None else required_s0
+    if not (required_s0 > 0 and math.isfinite(required_s0)):
+        raise InputError(f"--s0 expects a positive number, got {required_s0:g}")
+    if out is not None:
+        checked_output(out, force)
+    text = brief_markdown(requirements_of(load_study(file), required_s0), read_document(file))
+    if out is None:
+        click.echo(text, nl=False)
+    else:
+        write_text(out, text, force)
+        click.echo(f"Brief written to {out}")

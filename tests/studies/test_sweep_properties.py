@@ -60,7 +60,8 @@ def test_no_life_rises_as_a_wheel_load_grows_without_side_force(tmp_path_factory
 
 
 def test_two_keys_make_a_grid_with_the_first_key_slowest():
-    sweep = run_sweep(str(YARD_LOADER), ["wheel.offset_mm=60:120:3", "pair.outboard.C_kN=150:190:5"])
+    sweep = run_sweep(str(YARD_LOADER), ["wheel.offset_mm=60:120:3",
+                                         "pair.outboard.C_kN=150:190:5"])
     assert sweep.shape == (3, 5)
     assert [p.values["wheel.offset_mm"] for p in sweep.points[:5]] == [60.0] * 5
     assert [p.values["pair.outboard.C_kN"] for p in sweep.points[:5]] == [150, 160, 170, 180, 190]

@@ -1,0 +1,219 @@
+"""The supplier brief as Markdown: requirement summary and open questions, each tied to a number."""
+
+from __future__ import annotations
+
+import math
+
+from hubload.report.cautions import CAUTIONS
+from hubload.report.series import MISSING, lookup, shaft_min_safety
+from hubload.studies.requirements import BearingNeeds, Requirements, Solve
+
+KN = 1e3
+MM = 1e-3
+
+
+def kn(newtons: float) -> str:
+    return f"{newtons / KN:,.2f} kN"
+
+
+def hours(value) -> str:
+    if value is None or (isinstance(value, float) and math.isinf(value)):
+        return "infinite"
+    return f"{value:,.0f} h"
+
+
+def life_label(needs: Requirements) -> str:
+    return needs.life_key.removesuffix("_h").upper().replace("M", "m")
+
+
+def rating(solve: Solve, given_n: float) -> str:
+    if solve.factor is None:
+        return f"- ({solve.note})"
+    return f"{kn(solve.factor * given_n)} (x{solve.factor:.3f}, {solve.method})"
+
+
+def speed_text(needs: Requirements, rpm: float) -> str:
+    return f"{rpm:.1f} r/min ({needs.rpm_to_kmh(rpm):.1f} km/h)"
+
+
+def duty_section(needs: Requirements) -> list[str]:
+    study, pair = needs.study, needs.study.pair
+    spread_mm = (pair.outboard.position_m - pair.inboard.position_m) / MM
+    target = ("not given ([project] target_life_h)" if needs.target_h is None else
+              f"{hours(needs.target_h)} ({life_label(needs)} of the pair, system life)")
+    rows = [("target life", target),
+            ("arrangement", f"{pair.arrangement}, bearing spread {spread_mm:g} mm (load centres "
+                            f"at {pair.outboard.position_m / MM:g} mm and "
+                            f"{pair.inboard.position_m / MM:g} mm from the mounting face)"),
+            ("wheel", f"offset {study.wheel.offset_m / MM:g} mm from the mounting face, loaded "
+                      f"radius {study.wheel.loaded_radius_m / MM:g} mm, rolling radius "
+                      f"{study.wheel.rolling_radius_m / MM:g} mm"),
+            ("load cases", f"{len(study.cases)}: " + "; ".join(
+                f"'{name}' {100 * share:.3g} %" for name, share in
+                zip(study.cases.names, study.cases.time_fraction)))]
+    if needs.speed_max is not None:
+        rows.append(("speed range", f"{speed_text(needs, needs.speed_min.value)} to "
+                                    f"{speed_text(needs, needs.speed_max.value)}"))
+    mean = needs.document["mean_speed_rpm"] or 0.0
+    rows.append(("mean speed (time-weighted)", speed_text(needs, mean)))
+    rows.append(("standstill", f"{100 * needs.standstill_share:.1f} % of the time "
+                               "(static loads only)"))
+    return ["## 1. Duty", "", "| item | value |", "| --- | --- |",
+            *(f"| {name} | {value} |" for name, value in rows), ""]
+
+
+def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
+    def each(text) -> list[str]:
+        return [text(b) for b in needs.bearings]
+
+    life = life_label(needs)
+    mean = needs.document["mean_speed_rpm"] or 0.0
+    s0 = f"{needs.required_s0:g}"
+    return [
+        ("bearing", each(lambda b: b.name)),
+        ("max radial load Fr", each(lambda b: f"{kn(b.max_radial.value)} ({b.max_radial.case})")),
+        ("max axial load Fa", each(lambda b: f"{kn(b.max_axial.value)} ({b.max_axial.case})")),
+        (f"equivalent load of the spectrum Pm at the mean speed {mean:.1f} r/min",
+         each(lambda b: kn(b.equivalent_load_n))),
+        (f"{life} now", each(lambda b: hours(b.life_h))),
+        ("dynamic rating C given", each(lambda b: kn(b.dynamic_rating_n))),
+        (f"C for the pair's {life} = target (both C scaled by one factor)",
+         each(lambda b: rating(b.both, b.dynamic_rating_n))),
+        (f"C for the pair's {life} = target (the other bearing as given)",
+         each(lambda b: rating(b.this_only, b.dynamic_rating_n))),
+        (f"C for this bearing's own {life} = target",
+         each(lambda b: rating(b.alone, b.dynamic_rating_n))),
+        ("max static equivalent load P0", each(lambda b: f"{kn(b.max_static.value)} "
+                                                          f"({b.max_static.case})")),
+        ("static rating C0 given (s0 now)", each(lambda b: f"{kn(b.static_rating_n)} "
+                                                           f"(s0 = {b.static_safety:.2f})")),
+        (f"C0 for s0 >= {s0}", each(lambda b: kn(b.required_static_rating_n))),
+    ]
+
+
+def bearing_section(needs: Requirements) -> list[str]:
+    labels = [b.label for b in needs.bearings]
+    lines = ["## 2. Loads and required ratings per bearing", "",
+             "| | " + " | ".join(labels) + " |", "| --- |" + " --- |" * len(labels)]
+    lines += [f"| {name} | " + " | ".join(cells) + " |" for name, cells in bearing_rows(needs)]
+    lines += ["", "Pm is the constant load that does the spectrum's damage at the mean speed "
+              "(revolution-weighted 10/3-mean of P; standstill cases turn no revolutions). "
+              "Required C values are solved on the same calculation as `hubload check`: "
+              "closed form C (L_target / L)^(3/10) when the engine confirms it, else a root "
+              "search (brentq).", ""]
+    shaft = shaft_min_safety(needs.document)
+    if shaft is not MISSING:
+        lines += [f"Shaft: lowest fatigue safety factor over its sections "
+                  f"{'infinite' if shaft is None else f'{shaft:.2f}'} (see `hubload check`).", ""]
+    return lines
+
+
+def moment_section(needs: Requirements) -> list[str]:
+    wheel = needs.study.wheel
+    return ["## 3. Wheel moment at the mounting face", "",
+            f"Largest bending moment of the tyre forces about the mounting face (x = 0): "
+            f"**{needs.moment.value / KN:,.2f} kN m** in case '{needs.moment.case}' "
+            f"(wheel offset {wheel.offset_m / MM:g} mm, loaded radius "
+            f"{wheel.loaded_radius_m / MM:g} mm; wheel load, side force and tractive force "
+            "combined; the drive torque about the axis is not included).", ""]
+
+
+def lubrication_section(needs: Requirements, inputs: dict) -> list[str]:
+    lines = ["## 4. Lubrication assumptions", ""]
+    given = inputs.get("lubrication")
+    if isinstance(given, dict):
+        lines.append("As given in the file's [lubrication] table: " + ", ".join(
+            f"{key} = {value}" for key, value in given.items()) + ".")
+        kappa = lowest_kappa(needs.document)
+        if kappa is not None:
+            value, case, label, outside = kappa
+            lines.append(f"Lowest viscosity ratio: kappa = {value:.3g} ({label} bearing, "
+                         f"case '{case}')" + (", outside ISO 281's scope (kappa < 0.1)."
+                                              if outside else "."))
+    else:
+        lines.append("No [lubrication] table: lives are basic ratings L10, as if the oil film "
+                     "separated the surfaces and the oil were of normal cleanliness (aISO = 1). "
+                     "At the low speeds of a wheel drive this is not assured.")
+    return [*lines, ""]
+
+
+def lowest_kappa(document: dict):
+    found = [(entry["kappa"], case["name"], label, bool(entry.get("kappa_outside_scope")))
+             for case in document["cases"] for label, entry in case["bearings"].items()
+             if isinstance(entry.get("kappa"), (int, float))]
+    return min(found) if found else None
+
+
+def worst(bearings: tuple[BearingNeeds, ...], key) -> BearingNeeds:
+    return max(bearings, key=key)
+
+
+def questions(needs: Requirements) -> list[str]:
+    axial = worst(needs.bearings, lambda b: b.max_axial.value)
+    items = []
+    if needs.speed_min is not None:
+        kappa = lowest_kappa(needs.document)
+        film = "" if kappa is None else f"; kappa = {kappa[0]:.3g} ({kappa[2]}, '{kappa[1]}')"
+        slow = needs.speed_min
+        items.append(("Low-speed lubrication", f"lowest speed {speed_text(needs, slow.value)} "
+                      f"in '{slow.case}'{film}",
+                      "Which oil film and which life factor do you expect at this speed in the "
+                      "motor's hydraulic oil? Is surface distress or wear, not fatigue, the "
+                      "limit?"))
+    items.append(("Bearing setting", f"max axial load {kn(axial.max_axial.value)} on the "
+                  f"{axial.label} bearing in '{axial.max_axial.case}'",
+                  "The pair rule used here assumes a line-to-line setting. Which end play or "
+                  "preload do you set at assembly, with which tolerance, and how does the life "
+                  "change over that range?"))
+    utilisation = max((c.get("permissible_utilisation") for c in needs.document["cases"]
+                       if isinstance(c.get("permissible_utilisation"), (int, float))),
+                      default=None)
+    used = "" if utilisation is None else f"; {100 * utilisation:.0f} % of the curve in the file"
+    items.append(("Permissible load curve", f"wheel moment {needs.moment.value / KN:,.2f} kN m at "
+                  f"the mounting face in '{needs.moment.case}', wheel offset "
+                  f"{needs.study.wheel.offset_m / MM:g} mm{used}",
+                  "Please send the motor's permissible radial load against load position and "
+                  "confirm that every case lies inside it."))
+    if needs.speed_max is not None:
+        items.append(("Seals", f"highest speed {speed_text(needs, needs.speed_max.value)} in "
+                      f"'{needs.speed_max.case}'; {100 * needs.standstill_share:.1f} % standstill",
+                      "Which shaft seal suits this speed, the motor's case pressure and a dirty, "
+                      "wet site? What is its expected life, and does it need a dust lip?"))
+    items += rating_questions(needs)
+    return [f"{n}. **{topic}** (raised by: {number}). {question}"
+            for n, (topic, number, question) in enumerate(items, start=1)]
+
+
+def rating_questions(needs: Requirements) -> list[tuple[str, str, str]]:
+    items = []
+    short = [b for b in needs.bearings if b.both.factor is not None and b.both.factor > 1]
+    if short:
+        items.append(("Dynamic rating", "; ".join(
+            f"{b.label} C {kn(b.both.factor * b.dynamic_rating_n)} needed, "
+            f"{kn(b.dynamic_rating_n)} given" for b in short),
+            "Is a bearing with this rating available in the same envelope?"))
+    static = worst(needs.bearings, lambda b: b.required_static_rating_n / b.static_rating_n)
+    items.append(("Static capacity", f"P0 up to {kn(static.max_static.value)} on the "
+                  f"{static.label} bearing in '{static.max_static.case}', s0 = "
+                  f"{static.static_safety:.2f}",
+                  f"Is s0 >= {needs.required_s0:g} enough for shocks on site, and do the ratings "
+                  "C and C0 hold as mounted (housing, shaft hardness)?"))
+    return items
+
+
+def brief_markdown(needs: Requirements, inputs: dict) -> str:
+    """The whole sheet; ``inputs`` is the file's parsed TOML (for the tables it quotes)."""
+    lines = [f"# Supplier brief: {needs.study.title}", "",
+             f"From `{needs.study.source}` by hubload ({needs.document.get('method', 'iso281')} "
+             f"method). Loads are those of the ground on the tyre on this wheel; signs as in "
+             "hubload's docs/conventions.md.", "",
+             f"> **Caution.** {CAUTIONS} This sheet is an input to the supplier's own "
+             "calculation, not a replacement for it.", ""]
+    lines += duty_section(needs) + bearing_section(needs) + moment_section(needs)
+    lines += lubrication_section(needs, inputs)
+    lines += ["## 5. Open questions for the supplier", "", *questions(needs), ""]
+    warnings = lookup(needs.document, "warnings")
+    if warnings and warnings is not MISSING:
+        lines += ["## 6. Warnings from the check", "", *(f"- {w}" for w in warnings), ""]
+    lines += ["## Cautions", "", CAUTIONS, ""]
+    return "\n".join(lines)

@@ -1,0 +1,183 @@
+"""The numbers of a supplier brief, from one file's check results.
+
+Required dynamic ratings are solved inversely on the engine itself, for whichever
+life the verdict uses (L10, or L10m when lubrication is given): the closed form
+C (L_target / L)^(3/10) is tried first and kept when the engine confirms it hits
+the target; otherwise (a life that is not a pure power of C) scipy's brentq finds
+the rating factor on the engine's life.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+import math
+from dataclasses import dataclass
+
+import numpy as np
+from scipy.optimize import brentq
+
+from hubload.casefile.study import Study
+from hubload.engine import Result, evaluate
+from hubload.model import requirements
+from hubload.model.kinematics import kmh_to_rpm
+from hubload.report.jsonout import result_document
+
+CLOSED_FORM_RTOL = 1e-9
+BRACKET_STEPS = 40
+
+
+@dataclass(frozen=True)
+class Solve:
+    """A rating factor k on C and how it was found; None when the target is out of reach."""
+
+    factor: float | None
+    method: str
+    note: str = ""
+
+
+def governing_key(document: dict) -> str:
+    """JSON key of the life the verdict uses: l10_h, or l10m_h when lubrication is given."""
+    verdict = document.get("verdict")
+    name = verdict["life"] if verdict else ("L10m" if "l10m_h" in document["system"] else "L10")
+    return f"{name.lower()}_h"
+
+
+def scaled(study: Study, factors: dict[str, float]) -> Study:
+    """The study with each named bearing's dynamic rating C multiplied by its factor."""
+    bearings = {label: dataclasses.replace(bearing, dynamic_rating_n=bearing.dynamic_rating_n
+                                           * factors.get(label, 1.0))
+                for label, bearing in study.pair.bearings().items()}
+    return dataclasses.replace(study, pair=dataclasses.replace(study.pair, **bearings))
+
+
+def life_at(study: Study, factors: dict[str, float], key: str, whose: str) -> float:
+    """Life [h] (``whose`` = "system" or a bearing label) with the ratings scaled."""
+    document = result_document(evaluate(scaled(study, factors)))
+    node = document["system"] if whose == "system" else document["bearings"][whose]
+    return math.inf if node.get(key) is None else float(node[key])
+
+
+def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
+                 target_h: float) -> Solve:
+    """Factor k on the C of ``labels`` so that the life of ``whose`` equals ``target_h``."""
+    def life(k: float) -> float:
+        return life_at(study, {label: k for label in labels}, key, whose)
+
+    now = life(1.0)
+    if math.isinf(now) or now <= 0:
+        return Solve(None, "none", "no fatigue damage: every rating meets the target")
+    guess = (target_h / now) ** (1.0 / requirements.LIFE_EXPONENT_ROLLER)
+    if math.isclose(life(guess), target_h, rel_tol=CLOSED_FORM_RTOL):
+        return Solve(guess, "closed form")
+
+    def excess(k: float) -> float:
+        value = life(k)
+        return math.inf if math.isinf(value) else math.log(value / target_h)
+
+    low, high = guess, guess
+    for _ in range(BRACKET_STEPS):
+        if excess(low) < 0 < excess(high):
+            return Solve(brentq(excess, low, high, xtol=1e-14, rtol=4 * np.finfo(float).eps),
+                         "brentq")
+        low, high = low / 2, high * 2
+    return Solve(None, "none", "the target is out of reach by this rating alone")
+
+
+@dataclass(frozen=True)
+class Extreme:
+    value: float
+    case: str
+
+
+def extreme(values, names) -> Extreme:
+    """The largest value and the name of its case."""
+    index = int(np.argmax(values))
+    return Extreme(float(values[index]), names[index])
+
+
+def least(values, names) -> Extreme:
+    """The smallest value and the name of its case."""
+    index = int(np.argmin(values))
+    return Extreme(float(values[index]), names[index])
+
+
+@dataclass(frozen=True)
+class BearingNeeds:
+    label: str
+    name: str
+    max_radial: Extreme
+    max_axial: Extreme
+    equivalent_load_n: float
+    life_h: float | None
+    dynamic_rating_n: float
+    alone: Solve
+    both: Solve
+    this_only: Solve
+    max_static: Extreme
+    static_rating_n: float
+    static_safety: float
+    required_static_rating_n: float
+
+
+@dataclass(frozen=True)
+class Requirements:
+    study: Study
+    result: Result
+    document: dict
+    life_key: str
+    target_h: float | None
+    required_s0: float
+    bearings: tuple[BearingNeeds, ...]
+    moment: Extreme
+    speed_min: Extreme | None
+    speed_max: Extreme | None
+    standstill_share: float
+
+    def rpm_to_kmh(self, rpm: float) -> float:
+        return rpm / float(kmh_to_rpm(1.0, self.study.wheel.rolling_radius_m))
+
+
+def bearing_needs(study: Study, result: Result, document: dict, label: str, key: str,
+                  target_h: float | None, required_s0: float) -> BearingNeeds:
+    bearing, found, names = study.pair.bearings()[label], result.bearings[label], \
+        study.cases.names
+    others = tuple(other for other in result.bearings if other != label)
+    unsolved = Solve(None, "none", "no target life given")
+    solve = (lambda labels, whose: solve_factor(study, labels, whose, key, target_h)) \
+        if target_h is not None else (lambda labels, whose: unsolved)
+    max_static = extreme(found.static_equivalent_n, names)
+    return BearingNeeds(
+        label=label, name=bearing.label,
+        max_radial=extreme(found.radial_n, names), max_axial=extreme(found.axial_n, names),
+        equivalent_load_n=float(requirements.spectrum_equivalent_load_n(
+            study.cases.time_fraction, study.cases.speed_rpm, found.equivalent_n)),
+        life_h=document["bearings"][label].get(key),
+        dynamic_rating_n=float(bearing.dynamic_rating_n),
+        alone=solve((label,), label), both=solve((label, *others), "system"),
+        this_only=solve((label,), "system"),
+        max_static=max_static, static_rating_n=float(bearing.static_rating_n),
+        static_safety=float(found.static_safety),
+        required_static_rating_n=float(requirements.required_static_rating_n(
+            max_static.value, required_s0)))
+
+
+def requirements_of(study: Study, required_s0: float) -> Requirements:
+    result = evaluate(study)
+    document = result_document(result)
+    key = governing_key(document)
+    target = study.target_life_h
+    cases = study.cases
+    moments = requirements.wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
+                                           cases.tractive_force_n, study.wheel.offset_m,
+                                           study.wheel.loaded_radius_m)
+    turning = cases.speed_rpm > 0
+    names_turning = [name for name, turns in zip(cases.names, turning) if turns]
+    return Requirements(
+        study=study, result=result, document=document, life_key=key, target_h=target,
+        required_s0=required_s0,
+        bearings=tuple(bearing_needs(study, result, document, label, key, target, required_s0)
+                       for label in result.bearings),
+        moment=extreme(moments, cases.names),
+        speed_min=least(cases.speed_rpm[turning], names_turning) if any(turning) else None,
+        speed_max=extreme(cases.speed_rpm, cases.names) if any(turning) else None,
+        standstill_share=float(np.sum(cases.time_fraction[~turning])))
