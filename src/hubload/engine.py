@@ -11,6 +11,7 @@ from dataclasses import dataclass, field, replace
 
 import numpy as np
 
+from hubload import modified_life
 from hubload.casefile.batch import pick, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
@@ -43,6 +44,8 @@ class Result:
     system_damage_share: np.ndarray
     mean_speed_rpm: np.ndarray
     warnings: list[str] = field(default_factory=list)
+    a1: np.ndarray | float = 1.0                       # ISO 281 a1, per study
+    modified: modified_life.ModifiedLife | None = None  # with [lubrication] only
 
     @property
     def dominant_case(self) -> int:
@@ -92,17 +95,9 @@ def per_study_km(life_h, mean_rpm, study: Study) -> np.ndarray:
 
 
 def system_damage_share(bearings: dict[str, BearingResult]) -> np.ndarray:
-    """Each case's share of the pair's damage.
-
-    The bearings' shares are weighted by their contribution L^-e to the pair's
-    failure probability (the terms of the system-life sum, iso281.system_life).
-    """
-    weights = {label: np.power(result.life_h, -iso281.WEIBULL_SLOPE_ROLLER)
-               for label, result in bearings.items()}
-    total = sum(weights.values())
-    safe_total = np.where(total > 0, total, 1.0)
-    return sum(np.where(total > 0, weight / safe_total, 0.0)[..., None]
-               * bearings[label].damage_share for label, weight in weights.items())
+    """Each case's share of the pair's damage (iso281.system_damage_shares)."""
+    return iso281.system_damage_shares([b.life_h for b in bearings.values()],
+                                       [b.damage_share for b in bearings.values()])
 
 
 def evaluate(study: Study) -> Result:
@@ -112,11 +107,18 @@ def evaluate(study: Study) -> Result:
         label: bearing_result(study.pair.bearings()[label], radial, axial, study, mean_rpm)
         for label, (radial, axial) in bearing_forces(study).items()}
     system_h = iso281.system_life(*(b.life_h for b in bearings.values()))
+    modified = modified_life.evaluate_modified(
+        study, {label: b.equivalent_n for label, b in bearings.items()},
+        {label: b.case_life_h for label, b in bearings.items()},
+        lambda life_h: per_study_km(life_h, mean_rpm, study))
+    single = np.ndim(system_h) == 0 and (modified is None or np.ndim(modified.system_life_h) == 0)
     return Result(
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
-        warnings=collect_warnings(study, bearings) if np.ndim(system_h) == 0 else [])
+        warnings=collect_warnings(study, bearings, modified) if single else [],
+        a1=modified_life.per_study(modified_life.reliability_life_factor(study)),
+        modified=modified)
 
 
 def evaluate_many(studies: list[Study]) -> list[Result]:
@@ -129,11 +131,13 @@ def evaluate_many(studies: list[Study]) -> list[Result]:
     results = []
     for index, study in enumerate(studies):
         point = pick(batched, index, len(studies), studies)
-        results.append(replace(point, warnings=collect_warnings(study, point.bearings)))
+        results.append(replace(point, warnings=collect_warnings(study, point.bearings,
+                                                                 point.modified)))
     return results
 
 
-def collect_warnings(study: Study, bearings: dict[str, BearingResult]) -> list[str]:
+def collect_warnings(study: Study, bearings: dict[str, BearingResult],
+                     modified: modified_life.ModifiedLife | None = None) -> list[str]:
     """Plain-language warnings for a single study (no parameter arrays)."""
     warnings = []
     if study.cases.operating is not None:
@@ -149,6 +153,7 @@ def collect_warnings(study: Study, bearings: dict[str, BearingResult]) -> list[s
                 f"Static safety s0 = {s0:.2f} of the {label} bearing under case '{worst}' is "
                 f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings "
                 f"with shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''}).")
+    warnings.extend(modified_life.warnings(modified, study.cases.names))
     return warnings
 
 
@@ -158,12 +163,18 @@ class Verdict:
     life_h: float
     target_h: float
     passed: bool
+    basis: str = ""
 
 
 def verdict(result: Result) -> Verdict | None:
-    """System life against the project's target life, or None without a target."""
+    """System life against the project's target life, or None without a target.
+
+    The modified life when lubrication is given, else a1 L10 (L10 at 90 %).
+    """
     target = result.study.target_life_h
     if target is None:
         return None
-    life = float(result.system_life_h)
-    return Verdict(life_name="L10", life_h=life, target_h=target, passed=life >= target)
+    name, life, basis = modified_life.verdict_life(result.study, result.modified,
+                                                   result.a1 * result.system_life_h)
+    return Verdict(life_name=name, life_h=float(life), target_h=target,
+                   passed=float(life) >= target, basis=basis)

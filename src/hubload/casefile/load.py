@@ -8,6 +8,7 @@ from pathlib import Path
 
 import numpy as np
 
+from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import (Motor, Vehicle, derive_cases, read_motor,
                                                read_vehicle)
 from hubload.casefile.study import Bearing, Cases, Pair, Study, Wheel
@@ -63,6 +64,8 @@ def study_from_document(document: dict, source: str = "<document>") -> Study:
         cases=read_cases(data["case"], wheel, motor, vehicle),
         motor=motor,
         vehicle=vehicle,
+        lubrication=read_lubrication(data.get("lubrication"), data["case"], pair),
+        reliability_percent=project.get("reliability_percent", 90.0),
     )
 
 
@@ -93,9 +96,19 @@ def read_bearing(data: dict, label: str) -> Bearing:
             math.radians(data["contact_angle_deg"])))
     else:
         e, y, y0 = data["e"], data["Y"], data["Y0"]
+    if data.get("Cu_kN", 0.0) >= data["C0_kN"]:
+        raise InputError(f"expected the fatigue load limit Cu below C0 ({data['C0_kN']:g} kN; "
+                         f"typically C0 / 8), got {data['Cu_kN']:g} kN",
+                         key_path=f"pair.{label}.Cu_kN")
     return Bearing(label=data.get("name", label), position_m=data["position_mm"] * MM,
                    dynamic_rating_n=data["C_kN"] * KN, static_rating_n=data["C0_kN"] * KN,
-                   e=e, y=y, y0=y0)
+                   e=e, y=y, y0=y0,
+                   mean_diameter_m=optional_scaled(data, "mean_diameter_mm", MM),
+                   fatigue_limit_n=optional_scaled(data, "Cu_kN", KN))
+
+
+def optional_scaled(data: dict, key: str, factor: float) -> float | None:
+    return data[key] * factor if key in data else None
 
 
 def read_cases(blocks: list[dict], wheel: Wheel, motor: Motor | None = None,

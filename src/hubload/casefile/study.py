@@ -33,6 +33,8 @@ class Bearing:
     e: ArrayLike
     y: ArrayLike
     y0: ArrayLike
+    mean_diameter_m: ArrayLike | None = None
+    fatigue_limit_n: ArrayLike | None = None     # Cu; None: estimate from C0 (ISO 281 annex B)
 
 
 @dataclass(frozen=True)
@@ -62,6 +64,23 @@ class Cases:
 
 
 @dataclass(frozen=True)
+class Lubrication:
+    """Oil or grease of the bearings (ISO 281 modified life).
+
+    ``cleanliness`` is the ISO 4406 code as given (oil) or the grease level;
+    ``code_6um``/``code_14um`` are the code's last two scale numbers (oil only).
+    """
+
+    viscosity_40c_m2_s: ArrayLike
+    viscosity_100c_m2_s: ArrayLike
+    temperature_k: np.ndarray        # per case (case axis last)
+    method: str
+    cleanliness: str
+    code_6um: int | None = None
+    code_14um: int | None = None
+
+
+@dataclass(frozen=True)
 class Study:
     source: str
     title: str
@@ -71,3 +90,5 @@ class Study:
     cases: Cases
     motor: Motor | None = None
     vehicle: Vehicle | None = None
+    lubrication: Lubrication | None = None
+    reliability_percent: float = 90.0

@@ -93,6 +93,19 @@ def system_life(*lives, weibull_slope=WEIBULL_SLOPE_ROLLER):
         return np.power(inverse_sum, -1.0 / weibull_slope)
 
 
+def system_damage_shares(lives_h, damage_shares_, weibull_slope=WEIBULL_SLOPE_ROLLER):
+    """Each case's share of the damage of bearings in series [4].
+
+    The bearings' per-case shares (case axis last) are weighted by their term
+    L^-e of the system-life sum, i.e. their part of the system's failure probability.
+    """
+    weights = [np.power(np.asarray(life, dtype=float), -weibull_slope) for life in lives_h]
+    total = sum(weights)
+    safe_total = np.where(total > 0, total, 1.0)
+    return sum(np.where(total > 0, weight / safe_total, 0.0)[..., None] * share
+               for weight, share in zip(weights, damage_shares_))
+
+
 def static_safety(static_rating_n, max_static_load_n):
     """Static safety factor s0 = C0 / P0,max [2]; inf when unloaded."""
     with np.errstate(divide="ignore"):

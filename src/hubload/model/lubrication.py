@@ -155,12 +155,11 @@ class Iso4406Match:
     @property
     def note(self) -> str:
         if self.exact:
-            return f"ISO 4406 row {self.level.label} of ISO 281 annex A"
+            return f"row {self.level.label} of ISO 281 annex A"
         if self.level is BEYOND_TABLE:
-            return ("ISO 4406 code dirtier than the dirtiest row of ISO 281 annex A (-/21/18): "
-                    "eC = 0 taken, which gives the lowest aISO (0.1)")
-        return (f"ISO 4406 code between rows of ISO 281 annex A: the dirtier row "
-                f"{self.level.label} is used")
+            return ("dirtier than the dirtiest row of ISO 281 annex A (-/21/18): eC = 0 taken, "
+                    "which gives the lowest aISO (0.1)")
+        return f"between rows of ISO 281 annex A: the dirtier row {self.level.label} is used"
 
 
 def iso4406_level(method: str, code_6um: int, code_14um: int) -> Iso4406Match:

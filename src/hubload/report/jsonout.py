@@ -13,6 +13,7 @@ import numpy as np
 
 from hubload.engine import Result, verdict
 from hubload.report.cautions import CAUTIONS
+from hubload.report.modified_json import add_modified_life
 from hubload.report.operating import case_entry
 
 KN = 1e3
@@ -64,7 +65,7 @@ def result_document(result: Result) -> dict:
     study = result.study
     found = verdict(result)
     dominant = result.dominant_case
-    return {
+    return add_modified_life({
         "title": study.title,
         "source": study.source,
         "method": "iso281",
@@ -77,10 +78,10 @@ def result_document(result: Result) -> dict:
         if np.any(result.system_damage_share > 0) else None,
         "verdict": None if found is None else {
             "life": found.life_name, "life_h": number(found.life_h),
-            "target_h": found.target_h, "passed": found.passed},
+            "target_h": found.target_h, "passed": found.passed, "basis": found.basis},
         "warnings": list(result.warnings),
         "cautions": CAUTIONS,
-    }
+    }, result)
 
 
 def to_json(result: Result) -> str:

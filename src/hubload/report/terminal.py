@@ -10,6 +10,9 @@ from rich.table import Table
 
 from hubload.engine import Result, verdict
 from hubload.report.cautions import CAUTIONS
+from hubload.report.modified_terminal import (modified_bearing_table, modified_summary_cells,
+                                              modified_summary_headings, notes, oil_cells,
+                                              oil_headings)
 from hubload.report.operating import operating_table
 
 KN = 1e3
@@ -34,9 +37,12 @@ def cases_table(result: Result) -> Table:
     table.add_column("time", justify="right")
     table.add_column("n r/min", justify="right")
     table.add_column("pair damage", justify="right")
+    for heading in oil_headings(result):
+        table.add_column(heading, justify="right")
     for index, name in enumerate(cases.names):
         table.add_row(str(index), name, share(cases.time_fraction[index]),
-                      f"{cases.speed_rpm[index]:.1f}", share(result.system_damage_share[index]))
+                      f"{cases.speed_rpm[index]:.1f}", share(result.system_damage_share[index]),
+                      *oil_cells(result, index))
     return table
 
 
@@ -62,12 +68,15 @@ def summary_table(result: Result) -> Table:
     for heading, justify in (("bearing", "left"), ("name", "left"), ("L10 h", "right"),
                              ("L10 km", "right"), ("s0", "right")):
         table.add_column(heading, justify=justify)
+    for heading in modified_summary_headings(result):
+        table.add_column(heading, justify="right")
     for label, bearing in result.bearings.items():
         name = pair[label].label if pair[label].label != label else ""
         table.add_row(label, name, hours(bearing.life_h), hours(bearing.life_km),
-                      f"{float(bearing.static_safety):.2f}")
+                      f"{float(bearing.static_safety):.2f}", *modified_summary_cells(result, label))
     table.add_row("pair (system)", "", hours(result.system_life_h),
-                  hours(result.system_life_km), "", style="bold")
+                  hours(result.system_life_km), "", *modified_summary_cells(result, None),
+                  style="bold")
     return table
 
 
@@ -75,11 +84,12 @@ def verdict_line(result: Result) -> str:
     found = verdict(result)
     if found is None:
         return "No target life given ([project] target_life_h): no verdict."
+    basis = f" ({found.basis})" if found.basis else ""
     if found.passed:
         return (f"[green]PASS[/]: system {found.life_name} = {hours(found.life_h)} h "
-                f">= target {hours(found.target_h)} h")
+                f">= target {hours(found.target_h)} h{basis}")
     return (f"[red]FAIL[/]: system {found.life_name} = {hours(found.life_h)} h "
-            f"< target {hours(found.target_h)} h")
+            f"< target {hours(found.target_h)} h{basis}")
 
 
 def dominant_line(result: Result) -> str:
@@ -98,7 +108,11 @@ def render(result: Result, console: Console) -> None:
         console.print(operating)
     for label in result.bearings:
         console.print(bearing_table(result, label))
+        if result.modified is not None:
+            console.print(modified_bearing_table(result, label))
     console.print(summary_table(result))
+    for line in notes(result):
+        console.print(f"Note: {line}")
     console.print(dominant_line(result))
     console.print(verdict_line(result))
     for warning in result.warnings:

@@ -19,6 +19,9 @@ PROJECT = Table(
               example="Yard loader, front left wheel"),
         Field("target_life_h", "number", "Required system life of the bearing pair [h].",
               exclusive_minimum=0, example=5000),
+        Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
+              "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
+              minimum=90, maximum=99.95, example=90),
     ),
 )
 
@@ -91,6 +94,10 @@ BEARING_FIELDS = (
     Field("contact_angle_deg", "number", "Contact angle [deg]; gives e = 1.5 tan a, "
           "Y = 0.4 cot a, Y0 = 0.22 cot a when e, Y, Y0 are not given.",
           exclusive_minimum=0, exclusive_maximum=60),
+    Field("mean_diameter_mm", "number", "Mean diameter dm = (d + D) / 2 [mm] (bore d, outside "
+          "diameter D); required with [lubrication].", exclusive_minimum=0),
+    Field("Cu_kN", "number", "Fatigue load limit Cu [kN] from the bearing's data (default: "
+          "estimated from C0 by ISO 281 annex B).", exclusive_minimum=0),
 )
 
 BEARING_FACTORS = Choice(
@@ -100,7 +107,8 @@ BEARING_FACTORS = Choice(
 
 def bearing_table(name: str, doc: str, position_mm: float) -> Table:
     examples = {"position_mm": position_mm, "C_kN": 160 if name == "outboard" else 140,
-                "C0_kN": 200 if name == "outboard" else 175, "e": 0.4, "Y": 1.5, "Y0": 0.8}
+                "C0_kN": 200 if name == "outboard" else 175, "e": 0.4, "Y": 1.5, "Y0": 0.8,
+                "mean_diameter_mm": 85 if name == "outboard" else 77}
     fields = tuple(Field(**{**f.__dict__, "example": examples.get(f.key, f.example)})
                    for f in BEARING_FIELDS)
     return Table(name=name, doc=doc, fields=fields, choices=(BEARING_FACTORS,))
@@ -147,6 +155,8 @@ CASE = Table(
         Field("lateral_accel_g", "number", "Steady lateral acceleration [g], + when this wheel "
               "is on the outside of the turn; gives the side force (and, with a [vehicle] block, "
               "the wheel load)."),
+        Field("temperature_C", "number", "Bearing operating temperature in this case [C] "
+              "(default: [lubrication] temperature_C).", minimum=-40, maximum=150),
     ),
     choices=(Choice("speed", groups=(("speed_rpm",), ("speed_kmh",), ("pressure_bar", "flow_lpm")),
                     doc="Give exactly one of speed_rpm or speed_kmh (a force case), or "
@@ -157,8 +167,32 @@ CASE = Table(
                         "do not give tractive_force_kN too.")),
 )
 
+LUBRICATION = Table(
+    name="lubrication",
+    doc="How the bearings are lubricated; gives the ISO 281 modified life L10m = a1 aISO L10.",
+    required=False,
+    fields=(
+        Field("viscosity_40C_cSt", "number", "Kinematic viscosity at 40 C [mm2/s] from the oil's "
+              "data sheet (Walther/ASTM D341 holds down to 2 mm2/s).", required=True, minimum=2,
+              example=46),
+        Field("viscosity_100C_cSt", "number", "Kinematic viscosity at 100 C [mm2/s] from the data "
+              "sheet; below the 40 C value.", required=True, minimum=2, example=7.8),
+        Field("temperature_C", "number", "Bearing operating temperature [C] (a case may "
+              "override it).", required=True, minimum=-40, maximum=150, example=60),
+        Field("method", "string", "oil-filtered: oil with on-line filtration; oil-unfiltered: "
+              "no or off-line filtration; grease.", required=True,
+              choices=("oil-filtered", "oil-unfiltered", "grease"), example="oil-filtered"),
+        Field("iso4406", "string", 'Oil cleanliness code "R4/R6/R14" or "-/R6/R14" (ISO 4406); '
+              "R6/R14 select the row of ISO 281 annex A.", example="18/16/13"),
+        Field("grease_cleanliness", "string", "Cleanliness level for grease (ISO 281 annex A).",
+              choices=("high", "normal", "slight-to-typical", "severe", "very-severe")),
+    ),
+    choices=(Choice("cleanliness", groups=(("iso4406",), ("grease_cleanliness",)),
+                    doc="Give iso4406 for the oil methods or grease_cleanliness for grease."),),
+)
+
 FORMAT = Table(
     name="",
     doc="A hubload load-case file.",
-    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, CASE),
+    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, LUBRICATION, CASE),
 )

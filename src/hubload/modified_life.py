@@ -1,0 +1,178 @@
+"""Orchestrates the ISO 281 modified rating life: oil -> kappa -> eC, aISO -> L10m -> damage.
+
+Part of the engine layer (computes with hubload.model, no I/O). Per-case arrays
+end in the case axis; study parameters may carry leading batch axes.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+from hubload.casefile.study import Bearing, Lubrication, Study
+from hubload.model import iso281
+from hubload.model import lubrication as lub
+
+
+@dataclass(frozen=True)
+class ModifiedBearing:
+    """One bearing's modified life; per-case arrays end in the case axis.
+
+    Standstill cases have no kappa, eC or aISO (NaN) and an infinite life.
+    """
+
+    reference_viscosity_m2_s: np.ndarray
+    kappa: np.ndarray
+    kappa_outside_scope: np.ndarray
+    e_c: np.ndarray
+    a_iso: np.ndarray
+    case_life_h: np.ndarray          # L10m (Lnm for R other than 90 %) per case
+    damage_share: np.ndarray
+    life_h: np.ndarray
+    life_km: np.ndarray
+    fatigue_limit_n: np.ndarray
+    fatigue_limit_estimated: bool
+
+
+@dataclass(frozen=True)
+class ModifiedLife:
+    reliability_percent: np.ndarray  # per study (batched studies: leading axes)
+    a1: np.ndarray
+    viscosity_m2_s: np.ndarray       # per case, at the case's temperature
+    contamination: lub.ContaminationLevel
+    contamination_note: str
+    bearings: dict[str, ModifiedBearing]
+    system_life_h: np.ndarray
+    system_life_km: np.ndarray
+    system_damage_share: np.ndarray
+
+    @property
+    def symbol(self) -> str:
+        """Life symbol, e.g. L10m or L1m (single studies)."""
+        return lub.life_symbol(float(self.reliability_percent))
+
+    def outside_scope(self) -> list[tuple[int, str, float]]:
+        """(case index, bearing, kappa) wherever kappa < 0.1 (single studies only)."""
+        return [(int(index), label, float(bearing.kappa[index]))
+                for label, bearing in self.bearings.items()
+                for index in np.flatnonzero(bearing.kappa_outside_scope)]
+
+
+def contamination_level(lubrication: Lubrication) -> tuple[lub.ContaminationLevel, str]:
+    """The ISO 281 annex A row for the lubrication, and a note saying which one."""
+    levels = lub.CONTAMINATION_LEVELS[lubrication.method]
+    if lubrication.method == "grease":
+        level = next(level for level in levels if level.label == lubrication.cleanliness)
+        return level, f"grease, {level.label} cleanliness (ISO 281 annex A)"
+    match = lub.iso4406_level(lubrication.method, lubrication.code_6um, lubrication.code_14um)
+    return match.level, f"ISO 4406 {lubrication.cleanliness}: {match.note}"
+
+
+def fatigue_limit(bearing: Bearing) -> tuple[np.ndarray, bool]:
+    """Cu [N] as given, or estimated from C0 by ISO 281 annex B; and whether estimated."""
+    if bearing.fatigue_limit_n is not None:
+        return np.asarray(bearing.fatigue_limit_n, dtype=float), False
+    return lub.fatigue_load_limit_n(bearing.static_rating_n, bearing.mean_diameter_m), True
+
+
+def per_study(value) -> np.ndarray:
+    """A per-study value from one that broadcasts over cases: (..., 1) -> (...)."""
+    value = np.asarray(value, dtype=float)
+    return value[..., 0] if value.ndim else value
+
+
+def modified_bearing(bearing: Bearing, equivalent_n, basic_case_life_h, viscosity_m2_s,
+                     level: lub.ContaminationLevel, a1, study: Study, to_km) -> ModifiedBearing:
+    speed = study.cases.speed_rpm
+    moving = speed > 0
+    nu1 = lub.reference_viscosity_m2_s(speed, bearing.mean_diameter_m)
+    kappa = np.where(moving, lub.viscosity_ratio(viscosity_m2_s, nu1), np.nan)
+    e_c = np.where(moving, lub.contamination_factor(kappa, bearing.mean_diameter_m, level), np.nan)
+    cu_n, estimated = fatigue_limit(bearing)
+    a_iso = np.where(moving, lub.life_modification_factor(kappa, e_c, cu_n, equivalent_n), np.nan)
+    case_life_h = np.where(np.isfinite(basic_case_life_h), a1 * a_iso * basic_case_life_h, np.inf)
+    damage = iso281.damage_rate_per_hour(study.cases.time_fraction, case_life_h)
+    life_h = iso281.spectrum_life_h(damage)
+    return ModifiedBearing(
+        reference_viscosity_m2_s=nu1, kappa=kappa,
+        kappa_outside_scope=lub.kappa_outside_scope(kappa),
+        e_c=e_c, a_iso=a_iso, case_life_h=case_life_h,
+        damage_share=iso281.damage_shares(damage), life_h=life_h,
+        life_km=to_km(life_h), fatigue_limit_n=per_study(cu_n),
+        fatigue_limit_estimated=estimated)
+
+
+def evaluate_modified(study: Study, equivalent_n: dict, basic_case_life_h: dict,
+                      to_km) -> ModifiedLife | None:
+    """The modified life of each bearing and of the pair, or None without lubrication.
+
+    ``equivalent_n`` and ``basic_case_life_h`` map bearing labels to per-case P [N]
+    and basic L10 [h] (ISO 281:2007, 9.1: Lnm = a1 aISO L10); ``to_km`` turns a
+    per-study life [h] into a distance [km].
+    """
+    lubrication = study.lubrication
+    if lubrication is None:
+        return None
+    viscosity = lub.oil_viscosity_m2_s(lubrication.temperature_k, lubrication.viscosity_40c_m2_s,
+                                       lubrication.viscosity_100c_m2_s)
+    level, note = contamination_level(lubrication)
+    a1 = reliability_life_factor(study)
+    bearings = {label: modified_bearing(bearing, equivalent_n[label], basic_case_life_h[label],
+                                        viscosity, level, a1, study, to_km)
+                for label, bearing in study.pair.bearings().items()}
+    system_h = iso281.system_life(*(b.life_h for b in bearings.values()))
+    return ModifiedLife(
+        reliability_percent=per_study(study.reliability_percent), a1=per_study(a1),
+        viscosity_m2_s=viscosity,
+        contamination=level, contamination_note=note, bearings=bearings,
+        system_life_h=system_h, system_life_km=to_km(system_h),
+        system_damage_share=iso281.system_damage_shares(
+            [b.life_h for b in bearings.values()], [b.damage_share for b in bearings.values()]))
+
+
+def warnings(modified: ModifiedLife | None, case_names) -> list[str]:
+    """Plain-language warnings of a single study's modified life."""
+    if modified is None:
+        return []
+    found = []
+    flagged = modified.outside_scope()
+    if flagged:
+        by_case: dict[int, list[str]] = {}
+        for index, label, kappa in flagged:
+            by_case.setdefault(index, []).append(f"{label} {kappa:.3g}")
+        where = "; ".join(f"'{case_names[index]}': {', '.join(values)}"
+                          for index, values in sorted(by_case.items()))
+        found.append(
+            f"kappa < 0.1, outside the scope of ISO 281's aISO, in {where}. aISO and eC are "
+            f"evaluated at kappa = 0.1 as a bounding estimate. At such a low viscosity ratio no "
+            f"separating oil film forms: surface distress and wear, rather than the subsurface "
+            f"fatigue that the rating life describes, may limit the bearing's life. Ask the "
+            f"bearing and motor supplier about operation at these low speeds.")
+    thin = np.asarray(modified.viscosity_m2_s) < lub.WALTHER_LOWEST_VISCOSITY_M2_S
+    if np.any(thin):
+        found.append("The oil's viscosity at the operating temperature is below 2 mm2/s, where "
+                     "the Walther (ASTM D341) form with the 0.7 constant loses accuracy: check "
+                     "the viscosity with the oil supplier.")
+    return found
+
+
+def reliability_life_factor(study: Study) -> np.ndarray:
+    """a1 of the study's reliability (ISO 281:2007, 9.2); broadcasts like the study."""
+    return lub.reliability_factor(study.reliability_percent)
+
+
+def verdict_life(study: Study, modified: ModifiedLife | None, basic_life_h) -> tuple[str, float, str]:
+    """(symbol, system life [h], what it is) that the verdict compares with the target.
+
+    ``basic_life_h`` is a1 times the system's basic L10 (used without lubrication).
+    """
+    reliability = f"reliability {study.reliability_percent:g} %"
+    if modified is not None:
+        return (modified.symbol, modified.system_life_h,
+                f"ISO 281 modified rating life a1 aISO L10, {reliability}, with lubrication "
+                f"and contamination")
+    if study.reliability_percent == 90.0:
+        return "L10", basic_life_h, "ISO 281 basic rating life (no [lubrication] given)"
+    return (lub.life_symbol(study.reliability_percent, modified=False), basic_life_h,
+            f"a1 L10, {reliability}; aISO not applied (no [lubrication] given)")

@@ -1,0 +1,71 @@
+"""The modified-life keys of the JSON output (docs/json-output.md; a contract).
+
+Without [lubrication] only ``a1``, ``reliability_percent`` and ``lubrication: null``
+are written: a missing modified life must not read as an infinite one (null).
+"""
+
+from __future__ import annotations
+
+import math
+
+from hubload.engine import Result
+from hubload.model.lubrication import CELSIUS_ZERO_K
+
+KN = 1e3
+CST = 1e-6
+MM = 1e-3
+
+
+def number(value) -> float | None:
+    value = float(value)
+    return value if math.isfinite(value) else None
+
+
+def add_modified_life(document: dict, result: Result) -> dict:
+    """``document`` (the result_document) with the modified-life keys added in place."""
+    document["reliability_percent"] = result.study.reliability_percent
+    document["a1"] = number(result.a1)
+    modified = result.modified
+    if modified is None:
+        document["lubrication"] = None
+        return document
+    document["lubrication"] = lubrication_entry(result)
+    for index, case in enumerate(document["cases"]):
+        case["temperature_C"] = number(result.study.lubrication.temperature_k[index]
+                                       - CELSIUS_ZERO_K)
+        case["viscosity_cSt"] = number(modified.viscosity_m2_s[index] / CST)
+        case["system_damage_share_modified"] = number(modified.system_damage_share[index])
+        for label, bearing in modified.bearings.items():
+            case["bearings"][label].update({
+                "nu1_cSt": number(bearing.reference_viscosity_m2_s[index] / CST),
+                "kappa": number(bearing.kappa[index]),
+                "kappa_outside_scope": bool(bearing.kappa_outside_scope[index]),
+                "e_c": number(bearing.e_c[index]),
+                "a_iso": number(bearing.a_iso[index]),
+                "l10m_h": number(bearing.case_life_h[index]),
+                "damage_share_modified": number(bearing.damage_share[index]),
+            })
+    pair = result.study.pair.bearings()
+    for label, bearing in modified.bearings.items():
+        document["bearings"][label].update({
+            "l10m_h": number(bearing.life_h), "l10m_km": number(bearing.life_km),
+            "mean_diameter_mm": number(pair[label].mean_diameter_m / MM),
+            "cu_kN": number(bearing.fatigue_limit_n / KN),
+            "cu_estimated": bearing.fatigue_limit_estimated,
+        })
+    document["system"].update({"l10m_h": number(modified.system_life_h),
+                               "l10m_km": number(modified.system_life_km)})
+    return document
+
+
+def lubrication_entry(result: Result) -> dict:
+    lubrication, modified = result.study.lubrication, result.modified
+    return {
+        "method": lubrication.method,
+        "cleanliness": lubrication.cleanliness,
+        "contamination_row": modified.contamination.label,
+        "contamination_note": modified.contamination_note,
+        "viscosity_40C_cSt": number(lubrication.viscosity_40c_m2_s / CST),
+        "viscosity_100C_cSt": number(lubrication.viscosity_100c_m2_s / CST),
+        "life_symbol": modified.symbol,
+    }
