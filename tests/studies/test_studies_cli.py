@@ -125,6 +125,8 @@ def test_target_crossing_lands_on_the_closed_form_rating(tmp_path):
     document = read_toml(YARD_LOADER)
     for key in [k for k in document if k not in ("project", "wheel", "pair", "case")]:
         del document[key]
+    for case in document["case"]:
+        case.pop("temperature_C", None)   # needs the removed [lubrication]
     file = write_toml(document, tmp_path / "basic.toml")
     check = json.loads(CliRunner().invoke(main, ["check", str(file), "--json"]).output)
     life_o, life_i = (check["bearings"][b]["l10_h"] for b in ("outboard", "inboard"))
