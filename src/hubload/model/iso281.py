@@ -51,9 +51,12 @@ def equivalent_static_load_n(radial_n, axial_n, y0_factor):
 
 
 def basic_rating_life_mrev(dynamic_rating_n, equivalent_load_n):
-    """Basic rating life L10 [10^6 revolutions] = (C/P)^(10/3) [1, 7.1]; inf for P = 0."""
+    """Basic rating life L10 [10^6 revolutions] = (C/P)^(10/3) [1, 7.1].
+
+    Infinite for P = 0, and where the power leaves the float range (a vanishing load).
+    """
     load = np.asarray(equivalent_load_n, dtype=float)
-    with np.errstate(divide="ignore"):
+    with np.errstate(divide="ignore", over="ignore"):
         return np.where(load > 0, (dynamic_rating_n / np.where(load > 0, load, 1.0))
                         ** LIFE_EXPONENT_ROLLER, np.inf)
 
