@@ -37,11 +37,16 @@ def main():
 @main.command()
 @click.argument("file", type=click.Path(dir_okay=False))
 @click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@click.option("--report", type=click.Path(dir_okay=False),
+              help="Also write a self-contained HTML report (inputs, results, charts, cautions).")
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Also write the damage-share chart (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite existing --report/--plot files.")
 @reports_input_errors
-def check(file, as_json):
+def check(file, as_json, report, plot, force):
     """Loads, ISO 281 lives, damage shares and static safety for FILE."""
     from hubload import commands
-    commands.check(file, as_json=as_json)
+    commands.check(file, as_json=as_json, report=report, plot=plot, force=force)
 
 
 @main.command()

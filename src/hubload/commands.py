@@ -16,12 +16,35 @@ from hubload.schema import FORMAT
 from hubload.schema.export import json_schema, template_text
 
 
-def check(file: str, as_json: bool = False) -> None:
+def check(file: str, as_json: bool = False, report: str | None = None,
+          plot: str | None = None, force: bool = False) -> None:
+    from hubload.report import files
+
+    for path, suffixes in ((report, (".html", ".htm")), (plot, (".png", ".svg"))):
+        if path is not None:
+            files.checked_output(path, force, suffixes)
     result = evaluate(load_study(file))
+    write_check_files(file, result, report, plot, force)
     if as_json:
         click.echo(jsonout.to_json(result))
     else:
         terminal.render(result, Console())
+
+
+def write_check_files(file: str, result, report: str | None, plot: str | None,
+                      force: bool) -> None:
+    if report is not None:
+        from hubload.casefile.load import read_document
+        from hubload.report.files import write_text
+        from hubload.report.html import report_html
+
+        write_text(report, report_html(result, read_document(file)), force)
+    if plot is not None:
+        from hubload.report.jsonout import result_document
+        from hubload.report.plots import save
+        from hubload.report.plots.spectrum import damage_share_figure
+
+        save(damage_share_figure(result_document(result)), plot, force)
 
 
 def schema() -> None:

@@ -57,6 +57,31 @@ def damage_share_figure(document: dict) -> Figure:
 
 
 @styled
+def loads_figure(document: dict) -> Figure:
+    """Radial and axial load of each bearing per case (grouped bars, check results)."""
+    cases = document["cases"]
+    labels = list(cases[0]["bearings"])
+    figure = new_figure(8.0, 1.8 + 0.5 * len(cases))
+    axes = figure.subplots()
+    positions = np.arange(len(cases))
+    height = 0.8 / (2 * len(labels))
+    for k, label in enumerate(labels):
+        colour = BEARING_COLOURS[k % len(BEARING_COLOURS)]
+        for j, (key, name, alpha) in enumerate((("fr_kN", "Fr", 0.95), ("fa_kN", "Fa", 0.5))):
+            values = [case["bearings"][label][key] or 0.0 for case in cases]
+            axes.barh(positions + (2 * k + j) * height, values, height=height, color=colour,
+                      alpha=alpha, label=f"{label} {name}")
+    axes.set_yticks(positions + 0.4 - height / 2, [case["name"] for case in cases])
+    axes.invert_yaxis()
+    axes.set_xlabel("bearing load [kN]")
+    axes.grid(axis="y", visible=False)
+    axes.set_title(f"{document['title']}: bearing loads by case", loc="left")
+    axes.legend(fontsize=7, loc="lower right")
+    add_caution(figure)
+    return figure
+
+
+@styled
 def compare_figure(comparison: Comparison) -> Figure:
     """Lives of each file (grouped bars, log scale, target) over damage-share bars per file."""
     documents = [entry.document for entry in comparison.entries]
