@@ -105,3 +105,31 @@ def brief(file, out, force, required_s0):
     """A supplier brief for FILE: required ratings and open questions (Markdown)."""
     from hubload import commands
     commands.brief(file, out=out, force=force, required_s0=required_s0)
+
+
+@main.command()
+@click.argument("log", type=click.Path())
+@click.option("--case-file", required=True, type=click.Path(dir_okay=False),
+              help="Load-case file describing the wheel and pair (its [[case]] blocks are ignored).")
+@click.option("--out", type=click.Path(), help="Write the classed spectrum as a load-case file "
+              "(for a folder of logs: a folder with one file per log and combined.toml).")
+@click.option("--force", is_flag=True, help="Overwrite existing output files.")
+@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@click.option("--column", "columns", multiple=True, metavar="KEY=HEADER",
+              help="Read channel KEY from column HEADER (repeatable).")
+@click.option("--classes", multiple=True, metavar="N|CHANNEL=N",
+              help="Classes per channel: N for all, or e.g. side_force_kN=48 (repeatable).")
+@click.option("--gaps", type=click.Choice(["error", "drop", "interpolate"]), default="error",
+              show_default=True, help="What to do with empty samples and gaps in the time stamps.")
+@click.option("--max-gap-s", type=float, help="Longest regular step between time stamps [s] "
+              "(default: 10 x the median step).")
+@click.option("--jobs", type=click.IntRange(min=1), help="Worker processes for a folder of logs "
+              "(default: all cores).")
+@click.option("--cluster", metavar="ADDRESS", help="Run the logs on a Dask distributed "
+              "scheduler, e.g. tcp://scheduler-host:8786.")
+@click.option("--skip-bad", is_flag=True, help="In a folder, leave out logs that cannot be used.")
+@reports_input_errors
+def spectrum(**options):
+    """Duty spectrum and direct damage of a measured LOG (CSV/Parquet file or folder)."""
+    from hubload import commands
+    commands.spectrum(**options)

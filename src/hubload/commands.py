@@ -123,3 +123,8 @@ def brief(file: str, out: str | None = None, force: bool = False,
     else:
         write_text(out, text, force)
         click.echo(f"Brief written to {out}")
+
+
+def spectrum(**options) -> None:
+    from hubload.logs.run import Request, spectrum as run_spectrum
+    run_spectrum(Request(**options))

@@ -1,0 +1,37 @@
+"""The machine of a load-case file without its duty spectrum (for measured logs).
+
+A log brings its own operating points, so the file's ``[[case]]`` blocks are
+ignored (and may be absent); wheel, pair and every other table are validated
+as usual.
+"""
+
+from __future__ import annotations
+
+import tomllib
+from pathlib import Path
+
+from hubload.casefile.load import study_from_document
+from hubload.casefile.study import Study
+from hubload.errors import InputError
+
+PLACEHOLDER_CASE = {"name": "placeholder", "time_percent": 100.0, "wheel_load_kN": 0.0,
+                    "speed_rpm": 0.0}
+
+
+def load_machine(path: str | Path) -> tuple[Study, dict]:
+    """The study (with a placeholder case) and the parsed document of ``path``."""
+    file = str(path)
+    try:
+        document = tomllib.loads(Path(path).read_text(encoding="utf-8"))
+    except FileNotFoundError:
+        raise InputError("file not found", file=file) from None
+    except (OSError, UnicodeDecodeError) as error:
+        raise InputError(f"cannot read the file ({error})", file=file) from None
+    except tomllib.TOMLDecodeError as error:
+        raise InputError(f"TOML syntax error: {error}", file=file) from None
+    machine = {key: value for key, value in document.items() if key != "case"}
+    try:
+        study = study_from_document({**machine, "case": [PLACEHOLDER_CASE]}, source=file)
+    except InputError as error:
+        raise error.located(file) from None
+    return study, machine

@@ -1,0 +1,250 @@
+"""Validation and repair of a log stream: NaN samples, time order, gaps.
+
+Each sample holds until the next time stamp (zero-order hold), so a chunk's
+last row waits for the next chunk before its hold time is known: the cleaner
+carries it over. Policies for empty (NaN) samples and gaps:
+
+- ``error``: stop at the first one, naming the file, row and column;
+- ``drop``: drop rows with an empty sample (the previous sample holds on) and
+  cut gaps down to the nominal sample interval (the gap time leaves the log);
+- ``interpolate``: fill empty samples linearly in time and fill gaps with
+  samples at the nominal interval, linear between the samples on either side.
+
+Time stamps must increase strictly; repeated or backward stamps are errors
+under every policy (no repair could know which sample is right).
+"""
+
+from __future__ import annotations
+
+from collections.abc import Iterable, Iterator
+from dataclasses import dataclass, field
+
+import numpy as np
+
+from hubload.errors import InputError
+from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, MINIMUM
+from hubload.logs.reader import RawChunk
+
+POLICIES = ("error", "drop", "interpolate")
+GAP_FACTOR = 10.0
+MAX_FILL_SAMPLES = 1000
+HINT = "use --gaps drop or --gaps interpolate to repair"
+
+
+@dataclass(frozen=True)
+class Samples:
+    """Clean samples: start time [s], hold time [s] and the channels (file units)."""
+
+    time_s: np.ndarray
+    hold_s: np.ndarray
+    channels: dict[str, np.ndarray]
+
+    def __len__(self) -> int:
+        return self.time_s.size
+
+
+@dataclass
+class CleaningReport:
+    """What the cleaner found and did (counts are reported to the user)."""
+
+    rows: int = 0
+    used_rows: int = 0
+    dropped_rows: int = 0
+    filled_values: int = 0
+    gaps: int = 0
+    gap_time_s: float = 0.0
+    filled_samples: int = 0
+    nominal_interval_s: float | None = None
+    max_gap_s: float | None = None
+    notes: list[str] = field(default_factory=list)
+
+
+@dataclass
+class Block:
+    rows: np.ndarray
+    columns: dict[str, np.ndarray]
+
+    def take(self, index) -> "Block":
+        return Block(self.rows[index], {k: v[index] for k, v in self.columns.items()})
+
+    @staticmethod
+    def join(first: "Block | None", second: "Block") -> "Block":
+        if first is None:
+            return second
+        return Block(np.concatenate([first.rows, second.rows]),
+                     {k: np.concatenate([first.columns[k], v])
+                      for k, v in second.columns.items()})
+
+
+class Cleaner:
+    """Turns raw chunks into clean :class:`Samples`, carrying rows across chunks."""
+
+    def __init__(self, file: str, headers: dict[str, str], policy: str = "error",
+                 max_gap_s: float | None = None):
+        self.file, self.headers, self.policy = file, headers, policy
+        self.report = CleaningReport(max_gap_s=max_gap_s)
+        self.carry: Block | None = None
+        self.started = False
+
+    def run(self, chunks: Iterable[RawChunk]) -> Iterator[Samples]:
+        for chunk in chunks:
+            self.report.rows += len(chunk)
+            rows = np.arange(chunk.first_row, chunk.first_row + len(chunk))
+            samples = self.feed(Block(rows, dict(chunk.columns)))
+            if samples is not None:
+                yield samples
+        self.finish()
+
+    def fail(self, message: str, row: int, key: str) -> InputError:
+        return InputError(message, file=self.file,
+                          key_path=f"row {row}, column {self.headers[key]!r}")
+
+    def feed(self, block: Block) -> Samples | None:
+        block = self.settle_empty(Block.join(self.carry, block))
+        self.check_order(block)
+        self.check_limits(block)
+        last = self.last_complete(block)
+        if last is None or last < 1:
+            self.carry = block
+            return None
+        self.carry = block.take(slice(last, None))
+        return self.with_holds(block.take(slice(0, last + 1)))
+
+    def settle_empty(self, block: Block) -> Block:
+        """Apply the policy to empty samples; rows without a time stamp always go."""
+        empty = np.stack([np.isnan(v) for v in block.columns.values()])
+        if not empty.any():
+            self.started = True
+            return block
+        channel, index = np.unravel_index(np.argmax(empty.T), empty.T.shape)[::-1]
+        if self.policy == "error":
+            key = list(block.columns)[channel]
+            raise self.fail(f"empty or NaN sample; {HINT}", int(block.rows[index]), key)
+        keep = ~np.isnan(block.columns["time_s"])
+        if self.policy == "drop":
+            keep &= ~empty.any(axis=0)
+        elif not self.started:
+            # nothing before the first complete row to interpolate from
+            complete = np.flatnonzero(~empty.any(axis=0))
+            if complete.size:
+                keep[:complete[0]] = False
+            else:
+                keep[:] = False
+        self.started = self.started or bool(keep.any() and not empty[:, keep][:, 0].any())
+        self.report.dropped_rows += int(np.count_nonzero(~keep))
+        return block.take(keep)
+
+    def last_complete(self, block: Block) -> int | None:
+        complete = ~np.any([np.isnan(v) for v in block.columns.values()], axis=0)
+        found = np.flatnonzero(complete)
+        return int(found[-1]) if found.size else None
+
+    def check_order(self, block: Block) -> None:
+        steps = np.diff(block.columns["time_s"])
+        bad = np.flatnonzero(~(steps > 0))
+        if bad.size:
+            index = int(bad[0])
+            before, after = block.columns["time_s"][index:index + 2]
+            word = "repeats" if after == before else "goes back from"
+            raise self.fail(f"time stamp {after:g} s {word} {before:g} s of row "
+                            f"{int(block.rows[index])}: time stamps must increase",
+                            int(block.rows[index + 1]), "time_s")
+
+    def check_limits(self, block: Block) -> None:
+        for key, minimum in MINIMUM.items():
+            if key in block.columns:
+                below = np.flatnonzero(block.columns[key] < minimum)
+                if below.size:
+                    value = block.columns[key][below[0]]
+                    raise self.fail(f"expected a value >= {minimum:g} ({CHANNELS[key]}), got "
+                                    f"{value:g}; check the channel's sign convention",
+                                    int(block.rows[below[0]]), key)
+
+    def with_holds(self, block: Block) -> Samples:
+        """Samples of all rows but the last, holding until the next row's stamp."""
+        block = self.interpolate_empty(block)
+        time_s = block.columns["time_s"]
+        hold_s = np.diff(time_s)
+        head = block.take(slice(0, -1))
+        channels = {k: v for k, v in head.columns.items() if k != "time_s"}
+        nominal, max_gap = self.gap_limits(hold_s)
+        gaps = np.flatnonzero(hold_s > max_gap)
+        samples = Samples(time_s[:-1], hold_s, channels)
+        if gaps.size:
+            samples = self.repair_gaps(samples, block, gaps, nominal, max_gap)
+        self.report.used_rows += head.rows.size
+        return samples
+
+    def interpolate_empty(self, block: Block) -> Block:
+        time_s = block.columns["time_s"]
+        columns = {}
+        for key, values in block.columns.items():
+            empty = np.isnan(values)
+            if empty.any():
+                valid = ~empty
+                if key in DISCRETE_CHANNELS:
+                    previous = np.maximum.accumulate(np.where(valid, np.arange(values.size), 0))
+                    values = values[previous]
+                else:
+                    values = values.copy()
+                    values[empty] = np.interp(time_s[empty], time_s[valid], values[valid])
+                self.report.filled_values += int(np.count_nonzero(empty))
+            columns[key] = values
+        return Block(block.rows, columns)
+
+    def gap_limits(self, hold_s: np.ndarray) -> tuple[float, float]:
+        if self.report.nominal_interval_s is None:
+            self.report.nominal_interval_s = float(np.median(hold_s))
+        nominal = self.report.nominal_interval_s
+        if self.report.max_gap_s is None:
+            self.report.max_gap_s = GAP_FACTOR * nominal
+        return nominal, self.report.max_gap_s
+
+    def repair_gaps(self, samples: Samples, block: Block, gaps: np.ndarray,
+                    nominal: float, max_gap: float) -> Samples:
+        if self.policy == "error":
+            index = int(gaps[0])
+            raise self.fail(
+                f"gap of {samples.hold_s[index]:g} s to the next row (longer than "
+                f"{max_gap:g} s, {GAP_FACTOR:g} x the median interval of {nominal:g} s unless "
+                f"--max-gap-s is given); {HINT}", int(block.rows[index]), "time_s")
+        self.report.gaps += gaps.size
+        if self.policy == "drop":
+            hold_s = samples.hold_s.copy()
+            self.report.gap_time_s += float(np.sum(hold_s[gaps] - nominal))
+            hold_s[gaps] = nominal
+            return Samples(samples.time_s, hold_s, samples.channels)
+        return self.fill_gaps(samples, block, gaps, nominal)
+
+    def fill_gaps(self, samples: Samples, block: Block, gaps: np.ndarray,
+                  nominal: float) -> Samples:
+        """Replace each gap by samples at about the nominal interval, linear in between."""
+        counts = np.ones(len(samples), dtype=np.int64)
+        counts[gaps] = np.minimum(np.ceil(samples.hold_s[gaps] / nominal), MAX_FILL_SAMPLES)
+        source = np.repeat(np.arange(len(samples)), counts)
+        step = np.arange(source.size) - np.repeat(np.cumsum(counts) - counts, counts)
+        fraction = step / counts[source]
+        hold_s = samples.hold_s[source] / counts[source]
+        channels = {}
+        for key, values in samples.channels.items():
+            following = block.columns[key][1:]
+            if key in DISCRETE_CHANNELS:
+                channels[key] = values[source]
+            else:
+                channels[key] = values[source] + fraction * (following[source] - values[source])
+        self.report.filled_samples += int(source.size - len(samples))
+        time_s = samples.time_s[source] + fraction * samples.hold_s[source]
+        return Samples(time_s, hold_s, channels)
+
+    def finish(self) -> None:
+        if self.carry is not None:
+            tail = len(self.carry.rows) - 1
+            last = self.last_complete(self.carry)
+            if last is not None and last < tail:
+                self.report.dropped_rows += tail - last
+                self.report.notes.append(
+                    f"{tail - last} empty row(s) at the end of the log could not be "
+                    "interpolated and were dropped")
+        if self.report.used_rows == 0:
+            raise InputError("no duration: the log needs at least two rows with valid time "
+                             "stamps and samples", file=self.file)

@@ -1,0 +1,143 @@
+"""One pass over one log: direct damage and dwell classing, chunk by chunk.
+
+Every chunk of clean samples is evaluated by the engine as a batch of load
+cases; the per-sample Palmgren-Miner damage (hold time / case life) of each
+bearing and the classing weights go into a dwell table. Memory stays bounded
+by the chunk size and the number of occupied classes; there is no loop per row.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from pathlib import Path
+
+import numpy as np
+
+from hubload.casefile.study import Study
+from hubload.engine import evaluate
+from hubload.errors import InputError
+from hubload.logs.clean import Cleaner, CleaningReport
+from hubload.logs.columns import ColumnPlan, plan_columns
+from hubload.logs.reader import headers, read_chunks
+from hubload.logs.samples import sample_cases, with_cases
+from hubload.model import dwell, iso281
+
+KN = 1e3
+SECONDS_PER_HOUR = 3600.0
+CLASS_CHANNELS = ("wheel_load_kN", "side_force_kN", "tractive_force_kN", "speed_rpm")
+# The side force acts a loaded radius below the axis: its couple dominates the
+# bearing reactions, so it gets the finest classes. Speed only converts hours to
+# revolutions, which the classes keep exactly, so it needs the fewest.
+DEFAULT_CLASSES = {"wheel_load_kN": 16, "side_force_kN": 32, "tractive_force_kN": 12,
+                   "speed_rpm": 8}
+# finest class width 2**-6 = 1/64 kN or r/min: below any sensor's resolution
+MIN_EXPONENTS = np.full(len(CLASS_CHANNELS), -6)
+LABELS = ("outboard", "inboard")
+FORCES = CLASS_CHANNELS[:3]
+LEVEL_EXPONENT = iso281.LIFE_EXPONENT_ROLLER
+WEIGHTS = ("time_s", "revolutions",
+           *(f"revolutions_x_power_{key}" for key in FORCES),
+           *(f"time_x_{key}" for key in FORCES),
+           *(f"damage_{label}" for label in LABELS))
+
+
+@dataclass(frozen=True)
+class LogOptions:
+    """How to read and class a log (plain data: it travels to worker processes)."""
+
+    mapping: dict[str, str] = field(default_factory=dict)
+    gaps: str = "error"
+    max_gap_s: float | None = None
+    classes: tuple[int, ...] = tuple(DEFAULT_CLASSES.values())
+
+
+@dataclass(frozen=True)
+class LogSummary:
+    """Everything the outputs need from one log (or a merged fleet)."""
+
+    name: str
+    plan: ColumnPlan | None
+    cleaning: CleaningReport
+    table: dwell.DwellTable
+    peak_static_load_n: dict[str, float]
+
+    def total(self, weight: str) -> float:
+        return float(np.sum(self.table.sums[WEIGHTS.index(weight)]))
+
+    @property
+    def duration_h(self) -> float:
+        return self.total("time_s") / SECONDS_PER_HOUR
+
+
+def parse_classes(options: tuple[str, ...] | list[str]) -> tuple[int, ...]:
+    """``N`` (every channel) or ``CHANNEL=N`` strings -> classes per class channel."""
+    classes = dict(DEFAULT_CLASSES)
+    for option in options:
+        key, separator, count = option.rpartition("=")
+        targets = [key.strip()] if separator else list(classes)
+        if separator and key.strip() not in classes:
+            raise InputError(f"unknown channel {key.strip()!r}; classed channels: "
+                             + ", ".join(classes), key_path="--classes")
+        try:
+            number = int(count)
+        except ValueError:
+            number = 0
+        if not dwell.MIN_CLASSES <= number <= 1024:
+            raise InputError(f"expected a whole number of classes from {dwell.MIN_CLASSES} "
+                             f"to 1024, got {count!r}", key_path="--classes")
+        classes.update({target: number for target in targets})
+    return tuple(classes[key] for key in CLASS_CHANNELS)
+
+
+def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSummary:
+    """Read, clean, integrate and class one log."""
+    path = Path(path)
+    plan = plan_columns(headers(path), options.mapping, str(path))
+    cleaner = Cleaner(str(path), plan.headers, options.gaps, options.max_gap_s)
+    table = dwell.empty_table(len(CLASS_CHANNELS), len(WEIGHTS), MIN_EXPONENTS)
+    peak = dict.fromkeys(LABELS, 0.0)
+    for samples in cleaner.run(read_chunks(path, plan.headers)):
+        cases = sample_cases(samples, plan, study)
+        result = evaluate(with_cases(study, cases))
+        hold_h = samples.hold_s / SECONDS_PER_HOUR
+        damages = [iso281.damage_rate_per_hour(hold_h, result.bearings[label].case_life_h)
+                   for label in LABELS]
+        for label in LABELS:
+            peak[label] = max(peak[label], float(np.max(
+                result.bearings[label].static_equivalent_n)))
+        values, weights = class_inputs(cases, samples.hold_s, damages)
+        table = dwell.add_samples(table, values, weights, options.classes, MIN_EXPONENTS)
+    cleaning = cleaner.report
+    cleaning.notes[:0] = plan.notes
+    return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
+                      peak_static_load_n=peak)
+
+
+def class_inputs(cases, hold_s: np.ndarray, damages: list[np.ndarray]):
+    """Classed values (kN, r/min) and the per-sample weights in the order of WEIGHTS.
+
+    Forces enter the revolution-weighted sums as |F|^p (p = 10/3, the roller
+    bearing life exponent) so that a class level can be their damage-equivalent
+    power mean; a class never straddles zero, so its sign is the class's sign.
+    """
+    forces_kn = np.stack([cases.wheel_load_n, cases.side_force_n, cases.tractive_force_n]) / KN
+    revolutions = cases.speed_rpm * hold_s / 60.0
+    values = np.concatenate([forces_kn, cases.speed_rpm[None]])
+    weights = np.concatenate([hold_s[None], revolutions[None],
+                              np.abs(forces_kn) ** LEVEL_EXPONENT * revolutions,
+                              forces_kn * hold_s, np.stack(damages)])
+    return values, weights
+
+
+def merge_summaries(name: str, summaries: list[LogSummary],
+                    classes: tuple[int, ...]) -> LogSummary:
+    """The summary of all logs back to back (time-weighted by construction)."""
+    cleaning = CleaningReport()
+    for part in summaries:
+        for key in ("rows", "used_rows", "dropped_rows", "filled_values", "gaps",
+                    "gap_time_s", "filled_samples"):
+            setattr(cleaning, key, getattr(cleaning, key) + getattr(part.cleaning, key))
+    peak = {label: max(s.peak_static_load_n[label] for s in summaries) for label in LABELS}
+    table = dwell.merged([s.table for s in summaries], classes, MIN_EXPONENTS)
+    return LogSummary(name=name, plan=None, cleaning=cleaning, table=table,
+                      peak_static_load_n=peak)

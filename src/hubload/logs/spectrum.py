@@ -1,0 +1,172 @@
+"""From a log summary to lives: the direct life and the classed spectrum's life.
+
+Direct: the log's Palmgren-Miner damage D of each bearing (summed per sample)
+gives the life L = duration / D [h] of a machine that keeps working like the log;
+the pair's system life follows as for a load-case file.
+
+Classed: each occupied dwell class becomes a load case with the class's share
+of time, its mean speed (revolutions preserved) and the revolution-weighted power mean
+of each force (time-weighted at standstill) [2]. The engine evaluates that spectrum
+like any load-case file; the classing error compares its system life with the
+direct one.
+
+References
+----------
+[1] ISO 281:2007 and the engine's references (hubload.model.iso281).
+[2] Mean load of a bearing under variable load and speed, weighted by
+    revolutions with the life exponent: F_m = (sum F_i^p n_i / sum n_i)^(1/p);
+    common practice of bearing manufacturers' catalogues (no standard clause).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+from hubload.casefile.study import Cases, Study
+from hubload.engine import Result, evaluate
+from hubload.logs.pipeline import (CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT,
+                                   WEIGHTS, LogSummary)
+from hubload.logs.samples import with_cases
+from hubload.model import dwell, iso281
+
+SHORT_NAMES = {"wheel_load_kN": ("W", "kN"), "side_force_kN": ("S", "kN"),
+               "tractive_force_kN": ("T", "kN"), "speed_rpm": ("n", "r/min")}
+STATIC_SAFETY_WARNING = 2.0
+
+
+@dataclass(frozen=True)
+class ClassShare:
+    """One class of a channel: bounds, share of time, share of the pair's direct damage."""
+
+    low: float
+    high: float
+    time_fraction: float
+    damage_share: float
+
+
+@dataclass(frozen=True)
+class SpectrumResult:
+    summary: LogSummary
+    damage: dict[str, float]
+    life_h: dict[str, float]
+    system_life_h: float
+    static_safety: dict[str, float]
+    classed: Result
+    classing_error: float | None
+    shares: dict[str, list[ClassShare]]
+    warnings: list[str]
+
+
+def sums(summary: LogSummary) -> dict[str, np.ndarray]:
+    return dict(zip(WEIGHTS, summary.table.sums))
+
+
+def classed_cases(summary: LogSummary) -> Cases:
+    """The dwell classes with time as load cases (file order: by class index)."""
+    table = summary.table
+    cell = sums(summary)
+    occupied = cell["time_s"] > 0
+    order = np.lexsort(table.keys[::-1])
+    order = order[occupied[order]]
+    time_s, revolutions = cell["time_s"][order], cell["revolutions"][order]
+    forces_kn = {key: class_level(cell, key, order, table) for key in FORCES}
+    return Cases(
+        names=class_names(table, order),
+        time_fraction=time_s / np.sum(time_s),
+        wheel_load_n=forces_kn["wheel_load_kN"] * KN,
+        side_force_n=forces_kn["side_force_kN"] * KN,
+        tractive_force_n=forces_kn["tractive_force_kN"] * KN,
+        speed_rpm=revolutions * 60.0 / time_s,
+    )
+
+
+def class_level(cell: dict[str, np.ndarray], key: str, order: np.ndarray,
+                table: dwell.DwellTable) -> np.ndarray:
+    """Revolution-weighted power mean of a force in each class, signed like the class [2].
+
+    (sum n |F|^p / sum n)^(1/p) with p = 10/3 keeps the damage of a class whose
+    bearing loads follow that force; at standstill the time-weighted mean is used.
+    """
+    sign = np.where(table.keys[CLASS_CHANNELS.index(key), order] < 0, -1.0, 1.0)
+    revolutions = cell["revolutions"][order]
+    power_mean = dwell.weighted_means(cell[f"revolutions_x_power_{key}"][order],
+                                      revolutions) ** (1.0 / LEVEL_EXPONENT)
+    time_mean = dwell.weighted_means(cell[f"time_x_{key}"][order], cell["time_s"][order])
+    return np.where(revolutions > 0, sign * power_mean, time_mean)
+
+
+def class_names(table: dwell.DwellTable, order: np.ndarray) -> tuple[str, ...]:
+    low, high = table.class_bounds()
+    parts = []
+    for channel, key in enumerate(CLASS_CHANNELS):
+        symbol, unit = SHORT_NAMES[key]
+        parts.append([f"{symbol} {a:g}..{b:g} {unit}"
+                      for a, b in zip(low[channel, order], high[channel, order])])
+    return tuple(", ".join(fields) for fields in zip(*parts))
+
+
+def class_shares(summary: LogSummary, channel: int, weights: dict[str, float]) -> list[ClassShare]:
+    """Share of time and of the pair's direct damage in each class of one channel."""
+    keys, marginal_sums = dwell.marginal(summary.table, channel)
+    cell = dict(zip(WEIGHTS, marginal_sums))
+    width = summary.table.widths[channel]
+    total_time = np.sum(cell["time_s"])
+    damage = sum(weights[label] * cell[f"damage_{label}"] for label in LABELS)
+    total_damage = np.sum(damage)
+    return [ClassShare(low=float(k * width), high=float((k + 1) * width),
+                       time_fraction=float(t / total_time),
+                       damage_share=float(d / total_damage) if total_damage > 0 else 0.0)
+            for k, t, d in zip(keys, cell["time_s"], damage)]
+
+
+def system_weights(life_h: dict[str, float]) -> dict[str, float]:
+    """Damage of each bearing per unit of its own damage, scaled to the pair.
+
+    The bearings' damage shares combine with weights L^-e / sum L^-e (as in the
+    engine's system damage share) divided by the bearing's damage, so that the
+    weighted per-class damages add up to 1.
+    """
+    terms = {label: (0.0 if not np.isfinite(life) else life ** -iso281.WEIBULL_SLOPE_ROLLER)
+             for label, life in life_h.items()}
+    total = sum(terms.values())
+    return {label: (term / total if total > 0 else 0.0) for label, term in terms.items()}
+
+
+def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
+    """Direct lives, static safety, the classed spectrum's lives and the classing error."""
+    duration_h = summary.duration_h
+    damage = {label: summary.total(f"damage_{label}") for label in LABELS}
+    life_h = {label: (duration_h / d if d > 0 else float("inf")) for label, d in damage.items()}
+    system_h = float(iso281.system_life(*life_h.values()))
+    bearings = study.pair.bearings()
+    static_safety = {label: float(iso281.static_safety(bearings[label].static_rating_n,
+                                                       summary.peak_static_load_n[label]))
+                     for label in LABELS}
+    classed = evaluate(with_cases(study, classed_cases(summary)))
+    fraction = {label: (w / damage[label] if damage[label] > 0 else 0.0)
+                for label, w in system_weights(life_h).items()}
+    shares = {key: class_shares(summary, CLASS_CHANNELS.index(key), fraction)
+              for key in ("speed_rpm", "wheel_load_kN")}
+    return SpectrumResult(
+        summary=summary, damage=damage, life_h=life_h, system_life_h=system_h,
+        static_safety=static_safety, classed=classed,
+        classing_error=relative_error(float(classed.system_life_h), system_h),
+        shares=shares, warnings=static_warnings(static_safety))
+
+
+def relative_error(classed_h: float, direct_h: float) -> float | None:
+    """(classed - direct) / direct; 0 when both are infinite, None when undefined."""
+    if np.isinf(direct_h) and np.isinf(classed_h):
+        return 0.0
+    if not np.isfinite(direct_h) or direct_h <= 0:
+        return None
+    return classed_h / direct_h - 1.0
+
+
+def static_warnings(static_safety: dict[str, float]) -> list[str]:
+    return [f"Static safety s0 = {s0:.2f} of the {label} bearing at the log's peak load is "
+            f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings with "
+            f"shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''})."
+            for label, s0 in static_safety.items() if s0 < STATIC_SAFETY_WARNING]

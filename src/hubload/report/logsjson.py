@@ -1,0 +1,116 @@
+"""Machine-readable results of ``hubload spectrum`` (contract keys: see docs/logs.md).
+
+``direct.{bearings.*.l10_h, system.l10_h}``, ``classed.{system.l10_h, cases}``,
+``classing_error``, ``rows`` and ``duration_h`` are a contract; infinite lives
+are null.
+"""
+
+from __future__ import annotations
+
+from dataclasses import asdict
+
+from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
+from hubload.logs.spectrum import SpectrumResult
+from hubload.report.cautions import CAUTIONS
+from hubload.report.jsonout import number
+
+KN = 1e3
+
+
+def cleaning_entry(result: SpectrumResult, policy: str) -> dict:
+    report = result.summary.cleaning
+    return {"policy": policy, "used_rows": report.used_rows, "dropped_rows": report.dropped_rows,
+            "filled_values": report.filled_values, "gaps": report.gaps,
+            "gap_time_s": report.gap_time_s, "filled_samples": report.filled_samples,
+            "nominal_interval_s": report.nominal_interval_s, "max_gap_s": report.max_gap_s}
+
+
+def direct_entry(result: SpectrumResult) -> dict:
+    return {
+        "bearings": {label: {"l10_h": number(result.life_h[label]),
+                             "damage": number(result.damage[label]),
+                             "s0": number(result.static_safety[label])} for label in LABELS},
+        "system": {"l10_h": number(result.system_life_h)},
+        "damage_by_class": {key: [{k: number(v) for k, v in asdict(share).items()}
+                                  for share in shares]
+                            for key, shares in result.shares.items()},
+    }
+
+
+def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
+    classed = result.classed
+    cases = classed.study.cases
+    table = result.summary.table
+    return {
+        "system": {"l10_h": number(classed.system_life_h)},
+        "bearings": {label: {"l10_h": number(classed.bearings[label].life_h)}
+                     for label in LABELS},
+        "classes": {key: {"width": number(table.widths[i]),
+                          "count": int(len(set(table.keys[i].tolist())))}
+                    for i, key in enumerate(CLASS_CHANNELS)},
+        "spectrum_file": spectrum_file,
+        "cases": [{
+            "name": name,
+            "time_fraction": number(cases.time_fraction[i]),
+            "wheel_load_kN": number(cases.wheel_load_n[i] / KN),
+            "side_force_kN": number(cases.side_force_n[i] / KN),
+            "tractive_force_kN": number(cases.tractive_force_n[i] / KN),
+            "speed_rpm": number(cases.speed_rpm[i]),
+            "system_damage_share": number(classed.system_damage_share[i]),
+        } for i, name in enumerate(cases.names)],
+    }
+
+
+def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None) -> dict:
+    """One log (or a fleet's combination) as plain JSON-ready data."""
+    summary = result.summary
+    return {
+        "log": summary.name,
+        "rows": summary.cleaning.rows,
+        "duration_h": number(summary.duration_h),
+        "columns": dict(summary.plan.headers) if summary.plan else None,
+        "cleaning": cleaning_entry(result, policy),
+        "direct": direct_entry(result),
+        "classed": classed_entry(result, spectrum_file),
+        "classing_error": None if result.classing_error is None
+        else number(result.classing_error),
+        "notes": list(summary.cleaning.notes),
+        "warnings": list(result.warnings),
+    }
+
+
+def single_document(result: SpectrumResult, policy: str, spectrum_file: str | None,
+                    case_file: str) -> dict:
+    return {"case_file": case_file, **log_document(result, policy, spectrum_file),
+            "cautions": CAUTIONS}
+
+
+def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dict]:
+    """Logs from harshest to mildest: the pair's damage per hour against the fleet's."""
+    fleet_rate = damage_rate(combined)
+    rows = [{"log": r.summary.name, "duration_h": number(r.summary.duration_h),
+             "system_l10_h": number(r.system_life_h),
+             "damage_per_hour": number(damage_rate(r)),
+             "relative_to_fleet": number(damage_rate(r) / fleet_rate) if fleet_rate > 0 else None}
+            for r in results]
+    return sorted(rows, key=lambda row: -(row["damage_per_hour"] or 0.0))
+
+
+def damage_rate(result: SpectrumResult) -> float:
+    """The pair's damage per hour (1 / system life), 0 for an infinite life."""
+    life = result.system_life_h
+    return 1.0 / life if 0 < life < float("inf") else 0.0
+
+
+def fleet_document(results: list[SpectrumResult], combined: SpectrumResult, policy: str,
+                   files: dict[str, str | None], case_file: str,
+                   failures: list[str]) -> dict:
+    """The combined fleet (contract keys at the top), each log, and the ranking."""
+    return {
+        "case_file": case_file,
+        **log_document(combined, policy, files.get(combined.summary.name)),
+        "logs": [log_document(r, policy, files.get(r.summary.name)) for r in results],
+        "ranking": ranking(results, combined),
+        "skipped": failures,
+        "cautions": CAUTIONS,
+    }

@@ -1,0 +1,129 @@
+"""Rich tables for ``hubload spectrum``."""
+
+from __future__ import annotations
+
+import numpy as np
+from rich.console import Console
+from rich.table import Table
+
+from hubload.logs.pipeline import LABELS
+from hubload.logs.spectrum import SpectrumResult
+from hubload.report.cautions import CAUTIONS
+from hubload.report.terminal import hours, share
+
+TOP_CASES = 10
+KN = 1e3
+
+
+def lives_table(result: SpectrumResult) -> Table:
+    table = Table(title="L10 lives: direct (every sample) and classed spectrum",
+                  title_justify="left")
+    for heading, justify in (("bearing", "left"), ("direct L10 h", "right"),
+                             ("classed L10 h", "right"), ("log damage", "right"),
+                             ("s0 at peak", "right")):
+        table.add_column(heading, justify=justify)
+    for label in LABELS:
+        table.add_row(label, hours(result.life_h[label]),
+                      hours(result.classed.bearings[label].life_h),
+                      f"{result.damage[label]:.3g}", f"{result.static_safety[label]:.2f}")
+    table.add_row("pair (system)", hours(result.system_life_h),
+                  hours(result.classed.system_life_h), "", "", style="bold")
+    return table
+
+
+def shares_table(result: SpectrumResult, key: str, title: str, unit: str) -> Table:
+    table = Table(title=title, title_justify="left")
+    for heading in (f"class {unit}", "time", "damage"):
+        table.add_column(heading, justify="right")
+    for item in result.shares[key]:
+        table.add_row(f"{item.low:g} .. {item.high:g}", share(item.time_fraction),
+                      share(item.damage_share))
+    return table
+
+
+def top_cases_table(result: SpectrumResult) -> Table:
+    cases = result.classed.study.cases
+    shares = result.classed.system_damage_share
+    order = np.argsort(-shares)[:TOP_CASES]
+    table = Table(title=f"Classed spectrum: {len(cases)} cases; the {len(order)} most damaging",
+                  title_justify="left")
+    for heading, justify in (("class", "left"), ("time", "right"), ("W kN", "right"),
+                             ("S kN", "right"), ("T kN", "right"), ("n r/min", "right"),
+                             ("damage", "right")):
+        table.add_column(heading, justify=justify)
+    for i in order:
+        table.add_row(cases.names[i], share(cases.time_fraction[i]),
+                      f"{cases.wheel_load_n[i] / KN:.2f}", f"{cases.side_force_n[i] / KN:.2f}",
+                      f"{cases.tractive_force_n[i] / KN:.2f}", f"{cases.speed_rpm[i]:.1f}",
+                      share(shares[i]))
+    return table
+
+
+def cleaning_lines(result: SpectrumResult) -> list[str]:
+    report = result.summary.cleaning
+    lines = [f"{report.rows:,} rows, {report.used_rows:,} used, "
+             f"{result.summary.duration_h:,.2f} h logged"]
+    if report.dropped_rows:
+        lines.append(f"{report.dropped_rows:,} row(s) with empty samples dropped")
+    if report.filled_values:
+        lines.append(f"{report.filled_values:,} empty sample(s) interpolated")
+    if report.gaps:
+        action = (f"{report.gap_time_s:,.1f} s of gap time left out" if report.filled_samples == 0
+                  else f"{report.filled_samples:,} samples interpolated into them")
+        lines.append(f"{report.gaps:,} gap(s) longer than {report.max_gap_s:g} s: {action}")
+    return lines + list(report.notes)
+
+
+def error_line(result: SpectrumResult) -> str:
+    if result.classing_error is None:
+        return "Classing error: undefined (no fatigue damage in the log)."
+    return (f"Classing error (classed vs direct system life): "
+            f"{100 * result.classing_error:+.2f} %")
+
+
+def render_log(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
+    console.print(f"[bold]{result.summary.name}[/]")
+    for line in cleaning_lines(result):
+        console.print(f"  {line}")
+    console.print(lives_table(result))
+    console.print(error_line(result))
+    console.print(shares_table(result, "wheel_load_kN", "Direct damage by wheel load", "kN"))
+    console.print(shares_table(result, "speed_rpm", "Direct damage by wheel speed", "r/min"))
+    console.print(top_cases_table(result))
+    if spectrum_file:
+        console.print(f"Spectrum written to {spectrum_file} (hubload check runs on it).")
+    for warning in result.warnings:
+        console.print(f"[yellow]Warning:[/] {warning}")
+
+
+def ranking_table(ranking: list[dict]) -> Table:
+    table = Table(title="Logs from harshest to mildest (pair damage per hour)",
+                  title_justify="left")
+    for heading, justify in (("log", "left"), ("hours", "right"), ("system L10 h", "right"),
+                             ("vs fleet", "right")):
+        table.add_column(heading, justify=justify)
+    for row in ranking:
+        relative = row["relative_to_fleet"]
+        table.add_row(row["log"], f"{row['duration_h'] or 0:,.2f}",
+                      hours(row["system_l10_h"] if row["system_l10_h"] is not None
+                            else float("inf")),
+                      "" if relative is None else f"{relative:.2f} x")
+    return table
+
+
+def render(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
+    render_log(result, console, spectrum_file)
+    console.print(f"[dim]Caution: {CAUTIONS}[/]")
+
+
+def render_fleet(combined: SpectrumResult, ranking: list[dict], console: Console,
+                 files: dict[str, str | None], failures: list[str]) -> None:
+    console.print(ranking_table(ranking))
+    for failure in failures:
+        console.print(f"[yellow]Skipped:[/] {failure}")
+    written = [f for name, f in files.items() if f and name != combined.summary.name]
+    if written:
+        console.print(f"{len(written)} per-log spectra written next to the combined one.")
+    console.print("[bold]Combined fleet (all logs back to back, weighted by their hours)[/]")
+    render_log(combined, console, files.get(combined.summary.name))
+    console.print(f"[dim]Caution: {CAUTIONS}[/]")

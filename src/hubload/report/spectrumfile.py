@@ -1,0 +1,52 @@
+"""A classed spectrum written as a new load-case file (``hubload check`` runs on it)."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import tomli_w
+
+from hubload.casefile.study import Cases
+from hubload.errors import InputError
+
+KN = 1e3
+SIGNIFICANT = 10
+
+
+def rounded(value) -> float:
+    """A plain float to 10 significant digits (far below any classing error)."""
+    return float(f"{float(value):.{SIGNIFICANT}g}")
+
+
+def case_blocks(cases: Cases) -> list[dict]:
+    return [{
+        "name": name,
+        "time_percent": rounded(100.0 * cases.time_fraction[i]),
+        "wheel_load_kN": rounded(cases.wheel_load_n[i] / KN),
+        "side_force_kN": rounded(cases.side_force_n[i] / KN),
+        "tractive_force_kN": rounded(cases.tractive_force_n[i] / KN),
+        "speed_rpm": rounded(cases.speed_rpm[i]),
+    } for i, name in enumerate(cases.names)]
+
+
+def spectrum_text(machine: dict, cases: Cases, log_name: str, title: str) -> str:
+    """The case file's machine tables with the classed spectrum as its [[case]] blocks."""
+    document = {key: value for key, value in machine.items()}
+    document["project"] = {**machine.get("project", {}), "title": f"{title}, spectrum of {log_name}"}
+    document["case"] = case_blocks(cases)
+    header = (f"# Duty spectrum classed from the log {log_name} by hubload spectrum:\n"
+              "# time-at-level classes; each case holds a class's share of time, its mean\n"
+              "# speed and the revolution-weighted power mean (p = 10/3) of each force.\n\n")
+    return header + tomli_w.dumps(document)
+
+
+def write_new_file(path: str | Path, text: str, force: bool) -> None:
+    """Write ``text``; an existing file is only replaced with ``force``."""
+    path = Path(path)
+    if path.exists() and not force:
+        raise InputError("file exists; use --force to overwrite it", file=str(path))
+    try:
+        path.parent.mkdir(parents=True, exist_ok=True)
+        path.write_text(text, encoding="utf-8")
+    except OSError as error:
+        raise InputError(f"cannot write the file ({error})", file=str(path)) from None
