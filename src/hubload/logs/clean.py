@@ -100,7 +100,9 @@ class Cleaner:
                           key_path=f"row {row}, column {self.headers[key]!r}")
 
     def feed(self, block: Block) -> Samples | None:
-        block = self.settle_empty(Block.join(self.carry, block))
+        block = Block.join(self.carry, block)
+        self.observe_interval(block.columns["time_s"])
+        block = self.settle_empty(block)
         self.check_order(block)
         self.check_limits(block)
         last = self.last_complete(block)
@@ -167,7 +169,7 @@ class Cleaner:
         hold_s = np.diff(time_s)
         head = block.take(slice(0, -1))
         channels = {k: v for k, v in head.columns.items() if k != "time_s"}
-        nominal, max_gap = self.gap_limits(hold_s)
+        nominal, max_gap = self.gap_limits()
         gaps = np.flatnonzero(hold_s > max_gap)
         samples = Samples(time_s[:-1], hold_s, channels)
         if gaps.size:
@@ -192,9 +194,13 @@ class Cleaner:
             columns[key] = values
         return Block(block.rows, columns)
 
-    def gap_limits(self, hold_s: np.ndarray) -> tuple[float, float]:
-        if self.report.nominal_interval_s is None:
-            self.report.nominal_interval_s = float(np.median(hold_s))
+    def observe_interval(self, time_s: np.ndarray) -> None:
+        """The nominal sample interval: median step of the first stamps (before repairs)."""
+        steps = np.diff(time_s[~np.isnan(time_s)])
+        if self.report.nominal_interval_s is None and np.any(steps > 0):
+            self.report.nominal_interval_s = float(np.median(steps[steps > 0]))
+
+    def gap_limits(self) -> tuple[float, float]:
         nominal = self.report.nominal_interval_s
         if self.report.max_gap_s is None:
             self.report.max_gap_s = GAP_FACTOR * nominal

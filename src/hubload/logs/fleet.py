@@ -19,6 +19,7 @@ from hubload.logs.pipeline import LogOptions, LogSummary, process_log
 from hubload.logs.reader import LOG_SUFFIXES
 
 Progress = Callable[[str], None]
+CONNECT_TIMEOUT_S = 10
 
 
 @dataclass(frozen=True)
@@ -75,7 +76,7 @@ def run_cluster(address: str, paths: list[str], study: Study, options: LogOption
         raise InputError("--cluster needs the 'distributed' package (pip install distributed)",
                          key_path="--cluster") from None
     try:
-        client = Client(address, timeout="10s", set_as_default=False)
+        client = Client(address, timeout=f"{CONNECT_TIMEOUT_S}s")
     except (OSError, TimeoutError, ValueError) as error:
         raise InputError(f"cannot reach the Dask scheduler at {address!r} ({error})",
                          key_path="--cluster") from None
