@@ -33,8 +33,9 @@ HINT = "use --gaps drop or --gaps interpolate to repair"
 
 @dataclass(frozen=True)
 class Samples:
-    """Clean samples: start time [s], hold time [s] and the channels (file units)."""
+    """Clean samples: source row, start time [s], hold time [s], channels (file units)."""
 
+    rows: np.ndarray
     time_s: np.ndarray
     hold_s: np.ndarray
     channels: dict[str, np.ndarray]
@@ -171,7 +172,7 @@ class Cleaner:
         channels = {k: v for k, v in head.columns.items() if k != "time_s"}
         nominal, max_gap = self.gap_limits()
         gaps = np.flatnonzero(hold_s > max_gap)
-        samples = Samples(time_s[:-1], hold_s, channels)
+        samples = Samples(head.rows, time_s[:-1], hold_s, channels)
         if gaps.size:
             samples = self.repair_gaps(samples, block, gaps, nominal, max_gap)
         self.report.used_rows += head.rows.size
@@ -219,7 +220,7 @@ class Cleaner:
             hold_s = samples.hold_s.copy()
             self.report.gap_time_s += float(np.sum(hold_s[gaps] - nominal))
             hold_s[gaps] = nominal
-            return Samples(samples.time_s, hold_s, samples.channels)
+            return Samples(samples.rows, samples.time_s, hold_s, samples.channels)
         return self.fill_gaps(samples, block, gaps, nominal)
 
     def fill_gaps(self, samples: Samples, block: Block, gaps: np.ndarray,
@@ -240,7 +241,7 @@ class Cleaner:
                 channels[key] = values[source] + fraction * (following[source] - values[source])
         self.report.filled_samples += int(source.size - len(samples))
         time_s = samples.time_s[source] + fraction * samples.hold_s[source]
-        return Samples(time_s, hold_s, channels)
+        return Samples(samples.rows[source], time_s, hold_s, channels)
 
     def finish(self) -> None:
         if self.carry is not None:

@@ -2,6 +2,8 @@
 
 Columns are named like the load-case keys by default; ``--column KEY=HEADER``
 maps another header to a channel. Columns the log does not need are ignored.
+Measured wheel forces take precedence over forces derived from the hydraulics
+or the lateral acceleration, as given keys do in a load-case file.
 """
 
 from __future__ import annotations
@@ -18,11 +20,16 @@ CHANNELS: dict[str, str] = {
     "tractive_force_kN": "longitudinal force at the tyre [kN], + driving, - braking",
     "speed_rpm": "wheel speed [r/min]",
     "speed_kmh": "vehicle speed [km/h]",
+    "pressure_bar": "pressure difference across the motor [bar], + drives, - brakes",
+    "flow_lpm": "flow through the motor [l/min]",
+    "mode": 'displacement mode of a two-speed motor, "full" or "half"',
+    "lateral_accel_g": "lateral acceleration [g], + this wheel on the outside of the turn",
 }
-DISCRETE_CHANNELS: frozenset[str] = frozenset()
+DISCRETE_CHANNELS = frozenset({"mode"})
 MINIMUM = {"wheel_load_kN": 0.0}
-OPTIONAL_ZERO = ("side_force_kN", "tractive_force_kN")
-SPEED_SOURCES = ("speed_rpm", "speed_kmh")
+SPEED_SOURCES = ("speed_rpm", "speed_kmh", "flow_lpm")
+TRACTIVE_SOURCES = ("tractive_force_kN", "pressure_bar")
+NEEDS_MOTOR = ("pressure_bar", "flow_lpm")
 OPTION = "--column"
 
 
@@ -44,18 +51,20 @@ def parse_column_options(options: tuple[str, ...] | list[str]) -> dict[str, str]
 
 @dataclass(frozen=True)
 class ColumnPlan:
-    """Which header feeds each channel that is read, and how the rest is obtained."""
+    """Which header feeds each channel that is read, and where each quantity comes from."""
 
     headers: dict[str, str]
-    zero_channels: tuple[str, ...]
+    speed_channel: str
+    tractive_channel: str | None
     notes: tuple[str, ...]
 
     @property
-    def speed_channel(self) -> str:
-        return next(key for key in SPEED_SOURCES if key in self.headers)
+    def hydraulic(self) -> bool:
+        return self.tractive_channel == "pressure_bar"
 
 
-def plan_columns(available: list[str], mapping: dict[str, str], file: str) -> ColumnPlan:
+def plan_columns(available: list[str], mapping: dict[str, str], file: str,
+                 has_motor: bool = False, has_vehicle: bool = False) -> ColumnPlan:
     """Choose the columns to read from a log whose header row is ``available``."""
     present = set(available)
     for key, header in mapping.items():
@@ -63,27 +72,51 @@ def plan_columns(available: list[str], mapping: dict[str, str], file: str) -> Co
             raise InputError(f"column {header!r} (mapped to {key}) is not in the log; "
                              f"{close_headers(header, available)}", file=file, key_path=OPTION)
     found = {key: mapping.get(key, key) for key in CHANNELS if mapping.get(key, key) in present}
-    notes = []
-    require(found, "time_s", available, file)
-    require(found, "wheel_load_kN", available, file)
-    speeds = [key for key in SPEED_SOURCES if key in found]
-    if not speeds:
+    if "time_s" not in found:
+        raise missing(file, "time_s", available)
+    if "wheel_load_kN" not in found and not (has_vehicle and "lateral_accel_g" in found):
+        raise missing(file, "wheel_load_kN", available,
+                      " (or lateral_accel_g with a [vehicle] block in the case file)")
+    notes: list[str] = []
+    speed = first_of(SPEED_SOURCES, found, notes, "speed")
+    if speed is None:
         raise InputError("no speed column: expected one of " + ", ".join(SPEED_SOURCES)
                          + f"; {close_headers('speed', available)}; map one with "
                          f"{OPTION} speed_rpm=HEADER", file=file)
-    for unused in speeds[1:]:
-        notes.append(f"column {found.pop(unused)!r} ({unused}) ignored: speed is taken "
-                     f"from {found[speeds[0]]!r} ({speeds[0]})")
-    zero = tuple(key for key in OPTIONAL_ZERO if key not in found)
-    notes += [f"no {key} column: taken as 0" for key in zero]
-    return ColumnPlan(headers=found, zero_channels=zero, notes=tuple(notes))
+    tractive = first_of(TRACTIVE_SOURCES, found, notes, "tractive force")
+    for key in NEEDS_MOTOR:
+        if key in (speed, tractive) and not has_motor:
+            raise InputError(f"the log's {key} column needs a [motor] block in the case file "
+                             "(displacement_cc, efficiencies) to turn it into torque and speed",
+                             file=file)
+    if "mode" in found and not has_motor:
+        notes.append(f"column {found.pop('mode')!r} (mode) ignored: no [motor] block")
+    if "lateral_accel_g" in found and {"wheel_load_kN", "side_force_kN"} <= set(found):
+        notes.append(f"column {found.pop('lateral_accel_g')!r} (lateral_accel_g) ignored: "
+                     "wheel load and side force are measured")
+    if tractive is None:
+        notes.append("no tractive_force_kN or pressure_bar column: tractive force taken as 0")
+    if "side_force_kN" not in found:
+        notes.append("no side_force_kN column: side force " + (
+            "from lateral_accel_g" if "lateral_accel_g" in found else "taken as 0"))
+    return ColumnPlan(headers=found, speed_channel=speed, tractive_channel=tractive,
+                      notes=tuple(notes))
 
 
-def require(found: dict[str, str], key: str, available: list[str], file: str) -> None:
-    if key not in found:
-        raise InputError(f"missing column {key!r} ({CHANNELS[key]}); "
-                         f"{close_headers(key, available)}; map another header with "
-                         f"{OPTION} {key}=HEADER", file=file)
+def first_of(sources: tuple[str, ...], found: dict[str, str], notes: list[str],
+             what: str) -> str | None:
+    """The first source present (measured before derived); the others are dropped."""
+    present = [key for key in sources if key in found]
+    for unused in present[1:]:
+        notes.append(f"column {found.pop(unused)!r} ({unused}) ignored: {what} is taken "
+                     f"from {found[present[0]]!r} ({present[0]})")
+    return present[0] if present else None
+
+
+def missing(file: str, key: str, available: list[str], alternative: str = "") -> InputError:
+    return InputError(f"missing column {key!r} ({CHANNELS[key]}){alternative}; "
+                      f"{close_headers(key, available)}; map another header with "
+                      f"{OPTION} {key}=HEADER", file=file)
 
 
 def close_headers(wanted: str, available: list[str]) -> str:

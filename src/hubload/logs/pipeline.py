@@ -19,7 +19,8 @@ from hubload.errors import InputError
 from hubload.logs.clean import Cleaner, CleaningReport
 from hubload.logs.columns import ColumnPlan, plan_columns
 from hubload.logs.reader import headers, read_chunks
-from hubload.logs.samples import sample_cases, with_cases
+from hubload.logs.samples import (FLAGS, flag_time_s, operating_points, sample_cases,
+                                  with_cases)
 from hubload.model import dwell, iso281
 
 KN = 1e3
@@ -60,6 +61,7 @@ class LogSummary:
     cleaning: CleaningReport
     table: dwell.DwellTable
     peak_static_load_n: dict[str, float]
+    flag_time_s: dict[str, float]
 
     def total(self, weight: str) -> float:
         return float(np.sum(self.table.sums[WEIGHTS.index(weight)]))
@@ -92,12 +94,17 @@ def parse_classes(options: tuple[str, ...] | list[str]) -> tuple[int, ...]:
 def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSummary:
     """Read, clean, integrate and class one log."""
     path = Path(path)
-    plan = plan_columns(headers(path), options.mapping, str(path))
+    plan = plan_columns(headers(path), options.mapping, str(path),
+                        has_motor=study.motor is not None, has_vehicle=study.vehicle is not None)
     cleaner = Cleaner(str(path), plan.headers, options.gaps, options.max_gap_s)
     table = dwell.empty_table(len(CLASS_CHANNELS), len(WEIGHTS), MIN_EXPONENTS)
     peak = dict.fromkeys(LABELS, 0.0)
+    flagged = dict.fromkeys(FLAGS, 0.0)
     for samples in cleaner.run(read_chunks(path, plan.headers)):
-        cases = sample_cases(samples, plan, study)
+        points = operating_points(samples, plan, study, str(path))
+        cases = sample_cases(points, samples.hold_s)
+        for flag, seconds in flag_time_s(points, samples.hold_s).items():
+            flagged[flag] += seconds
         result = evaluate(with_cases(study, cases))
         hold_h = samples.hold_s / SECONDS_PER_HOUR
         damages = [iso281.damage_rate_per_hour(hold_h, result.bearings[label].case_life_h)
@@ -110,7 +117,7 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     cleaning = cleaner.report
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
-                      peak_static_load_n=peak)
+                      peak_static_load_n=peak, flag_time_s=flagged)
 
 
 def class_inputs(cases, hold_s: np.ndarray, damages: list[np.ndarray]):
@@ -139,5 +146,6 @@ def merge_summaries(name: str, summaries: list[LogSummary],
             setattr(cleaning, key, getattr(cleaning, key) + getattr(part.cleaning, key))
     peak = {label: max(s.peak_static_load_n[label] for s in summaries) for label in LABELS}
     table = dwell.merged([s.table for s in summaries], classes, MIN_EXPONENTS)
+    flagged = {flag: sum(s.flag_time_s[flag] for s in summaries) for flag in FLAGS}
     return LogSummary(name=name, plan=None, cleaning=cleaning, table=table,
-                      peak_static_load_n=peak)
+                      peak_static_load_n=peak, flag_time_s=flagged)

@@ -153,7 +153,7 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
         summary=summary, damage=damage, life_h=life_h, system_life_h=system_h,
         static_safety=static_safety, classed=classed,
         classing_error=relative_error(float(classed.system_life_h), system_h),
-        shares=shares, warnings=static_warnings(static_safety))
+        shares=shares, warnings=static_warnings(static_safety) + flag_warnings(summary))
 
 
 def relative_error(classed_h: float, direct_h: float) -> float | None:
@@ -170,3 +170,19 @@ def static_warnings(static_safety: dict[str, float]) -> list[str]:
             f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings with "
             f"shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''})."
             for label, s0 in static_safety.items() if s0 < STATIC_SAFETY_WARNING]
+
+
+FLAG_TEXT = {
+    "slips": "the tractive or braking force exceeded adhesion_mu x wheel load and was capped "
+             "there (the wheel would slip; check adhesion_mu or the force channel)",
+    "tyre_slides": "side and tractive force together exceeded adhesion_mu x wheel load "
+                   "(friction circle: the tyre would slide)",
+    "pressure_above_rating": "the pressure was above the motor's max_pressure_bar",
+    "speed_above_rating": "the speed was above the motor's max_speed_rpm",
+}
+
+
+def flag_warnings(summary: LogSummary) -> list[str]:
+    total_s = summary.total("time_s")
+    return [f"In {100 * seconds / total_s:.2g} % of the log's time {FLAG_TEXT[flag]}."
+            for flag, seconds in summary.flag_time_s.items() if seconds > 0 and total_s > 0]

@@ -74,6 +74,9 @@ def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None)
         "classed": classed_entry(result, spectrum_file),
         "classing_error": None if result.classing_error is None
         else number(result.classing_error),
+        "flags_time_fraction": {flag: number(seconds / 3600 / summary.duration_h)
+                                if summary.duration_h > 0 else None
+                                for flag, seconds in summary.flag_time_s.items()},
         "notes": list(summary.cleaning.notes),
         "warnings": list(result.warnings),
     }
