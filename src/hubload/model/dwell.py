@@ -89,9 +89,10 @@ def width_exponents(span, classes, min_exponents) -> np.ndarray:
 
 def class_keys(values, exponents) -> np.ndarray:
     """Class index floor(value / 2**e) per channel (values (c, n)) [1]."""
-    scaled = np.ldexp(np.asarray(values, dtype=float),
-                      -np.asarray(exponents, dtype=np.int64)[:, None])
-    return np.floor(scaled).astype(np.int64)
+    values = np.asarray(values, dtype=float)
+    keys = np.floor(np.ldexp(values, -np.asarray(exponents, dtype=np.int64)[:, None]))
+    # a tiny negative value may underflow to -0.0; it still belongs below zero
+    return np.where((keys == 0) & (values < 0), -1, keys).astype(np.int64)
 
 
 def aggregate(keys: np.ndarray, weights: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
