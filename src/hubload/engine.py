@@ -12,7 +12,7 @@ from dataclasses import dataclass, field, replace
 import numpy as np
 
 from hubload import modified_life
-from hubload.casefile.batch import pick, stack_studies
+from hubload.casefile.batch import picker, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
 from hubload.model.kinematics import distance_km
@@ -128,9 +128,10 @@ def evaluate_many(studies: list[Study]) -> list[Result]:
     Result is the point's own, with its study and warnings, as from evaluate().
     """
     batched = evaluate(stack_studies(studies))
+    take = picker(batched, len(studies), studies)
     results = []
     for index, study in enumerate(studies):
-        point = pick(batched, index, len(studies), studies)
+        point = take(index)
         results.append(replace(point, warnings=collect_warnings(study, point.bearings,
                                                                  point.modified)))
     return results

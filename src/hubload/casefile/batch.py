@@ -14,13 +14,13 @@ stack without changes here:
 - anything else (strings, booleans, None) must be equal in every point, else
   :class:`StackError`.
 
-:func:`pick` takes one point back out of a batched result.
+:func:`picker` takes points back out of a batched result.
 """
 
 from __future__ import annotations
 
 import dataclasses
-from collections.abc import Sequence
+from collections.abc import Callable, Sequence
 from typing import Any
 
 import numpy as np
@@ -103,21 +103,40 @@ def all_equal(values: list) -> bool:
 
 
 def pick(batched: Any, index: int, count: int, studies: Sequence[Study]) -> Any:
-    """Point ``index`` of a batched object of ``count`` points.
+    """Point ``index`` of a batched object of ``count`` points (see :func:`picker`)."""
+    take = picker(batched, count, studies)
+    return batched if take is None else take(index)
+
+
+def picker(batched: Any, count: int, studies: Sequence[Study]) -> Callable[[int], Any] | None:
+    """A function index -> that point of ``batched``; None when nothing depends on the point.
 
     Arrays whose first axis has the point count are indexed; Study instances are
-    replaced by the original point study; containers are walked; the rest is shared.
+    replaced by the original point study; dataclasses, dicts, lists and tuples are
+    rebuilt around their point-dependent parts; the rest is shared. Built once per
+    batch, so taking each point costs only the rebuilding.
     """
     if isinstance(batched, Study):
-        return studies[index]
+        return studies.__getitem__
     if dataclasses.is_dataclass(batched) and not isinstance(batched, type):
-        return dataclasses.replace(batched, **{
-            field.name: pick(getattr(batched, field.name), index, count, studies)
-            for field in dataclasses.fields(batched) if field.init})
+        parts = {field.name: picker(getattr(batched, field.name), count, studies)
+                 for field in dataclasses.fields(batched) if field.init}
+        varying = {name: take for name, take in parts.items() if take is not None}
+        if not varying:
+            return None
+        return lambda i: dataclasses.replace(batched, **{n: t(i) for n, t in varying.items()})
     if isinstance(batched, dict):
-        return {key: pick(value, index, count, studies) for key, value in batched.items()}
+        parts = {key: picker(value, count, studies) for key, value in batched.items()}
+        if all(take is None for take in parts.values()):
+            return None
+        return lambda i: {key: batched[key] if take is None else take(i)
+                          for key, take in parts.items()}
     if isinstance(batched, (list, tuple)):
-        return type(batched)(pick(value, index, count, studies) for value in batched)
+        parts = [picker(value, count, studies) for value in batched]
+        if all(take is None for take in parts):
+            return None
+        return lambda i: type(batched)(value if take is None else take(i)
+                                       for value, take in zip(batched, parts))
     if isinstance(batched, np.ndarray) and batched.ndim >= 1 and batched.shape[0] == count:
-        return batched[index]
-    return batched
+        return batched.__getitem__
+    return None

@@ -50,7 +50,11 @@ def read_document(path: str | Path) -> dict:
 
 def study_from_document(document: dict, source: str = "<document>") -> Study:
     """Validate a parsed TOML document and convert it to a Study."""
-    data = validate_document(document, FORMAT)
+    return study_from_validated(validate_document(document, FORMAT), source)
+
+
+def study_from_validated(data: dict, source: str = "<document>") -> Study:
+    """Convert a document already checked by validate_document (defaults filled in)."""
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})

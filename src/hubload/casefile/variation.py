@@ -13,7 +13,8 @@ import re
 from collections.abc import Mapping
 from dataclasses import dataclass
 
-from hubload.casefile.load import study_from_document
+from hubload.casefile.load import study_from_validated
+from hubload.casefile.validate import validate_document, validate_number, validate_value
 from hubload.casefile.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
@@ -160,11 +161,35 @@ def current_value(document: Mapping, path: KeyPath) -> float | None:
     return None if path.field.default is None else float(path.field.default)
 
 
-def variant_study(document: Mapping, values: Mapping[KeyPath, float], source: str) -> Study:
-    """The study of ``document`` with ``values`` set; InputError names the point."""
+def variant_studies(document: Mapping, points: list[dict[KeyPath, float]],
+                    source: str) -> list[Study]:
+    """The study of ``document`` at each point (key path -> value).
+
+    The whole document is validated once, at the first point; the keys present are
+    the same at every point, so the others only need their varied values checked
+    against the format before conversion (whose cross-key rules run per point).
+    InputError names the point.
+    """
     try:
-        return study_from_document(with_values(document, values), source=source)
+        data = validate_document(with_values(document, points[0]), FORMAT)
     except InputError as error:
-        at = ", ".join(f"{path.text} = {value:g}" for path, value in values.items())
-        raise InputError(f"{error.message} (at {at})", file=source,
-                         key_path=error.key_path) from None
+        raise at_point(error, points[0], source) from None
+    return [variant_from_validated(data, values, source) for values in points]
+
+
+def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str) -> Study:
+    try:
+        for path, value in values.items():
+            if path.field.kind == "number-list":
+                validate_number(value, path.field, path.text)
+            else:
+                validate_value(int(value) if path.integer else float(value), path.field,
+                               path.text)
+        return study_from_validated(with_values(data, values), source=source)
+    except InputError as error:
+        raise at_point(error, values, source) from None
+
+
+def at_point(error: InputError, values: Mapping[KeyPath, float], source: str) -> InputError:
+    at = ", ".join(f"{path.text} = {value:g}" for path, value in values.items())
+    return InputError(f"{error.message} (at {at})", file=source, key_path=error.key_path)

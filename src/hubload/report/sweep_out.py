@@ -5,6 +5,7 @@ from __future__ import annotations
 import json
 import math
 
+from rich import box
 from rich.console import Console
 from rich.table import Table
 
@@ -14,7 +15,7 @@ from hubload.report.series import all_series
 from hubload.report.terminal import hours
 from hubload.studies.sweep import Sweep
 
-MAP_MAX_COLUMNS = 12
+MAP_MAX_COLUMNS = 8
 
 
 def sweep_document(sweep: Sweep) -> dict:
@@ -46,25 +47,45 @@ def quantity(value: float, kind: str) -> str:
     return hours(value) if kind == "life" else ("infinite" if math.isinf(value) else f"{value:.2f}")
 
 
-def point_table(sweep: Sweep) -> Table:
+def table_series(sweep: Sweep) -> list:
+    """System lives of every kind, bearing lives of the kind the verdict uses, safeties."""
+    series = all_series(sweep.points[0].document)
+    modified = sweep.governing_life_name == "L10m" or any(
+        s.system and s.modified for s in series) and sweep.points[0].document.get("verdict") is None
+    return [s for s in series if s.kind != "life" or s.system or s.modified == modified]
+
+
+def point_table(sweep: Sweep, kind: str) -> Table:
     documents = [p.document for p in sweep.points]
-    series = all_series(documents[0])
-    table = Table(title=f"Sweep of {', '.join(a.key for a in sweep.axes)}", title_justify="left")
+    series = [s for s in table_series(sweep) if s.kind == kind]
+    unit = " (h)" if kind == "life" else ""
+    table = Table(title=("Lives" if kind == "life" else "Safety factors") + unit,
+                  title_justify="left", box=box.SIMPLE_HEAD)
     for axis in sweep.axes:
         table.add_column(axis.key, justify="right", min_width=min(len(axis.key), 24))
     for item in series:
-        table.add_column(item.label + (" h" if item.kind == "life" else ""), justify="right")
-    if documents[0].get("verdict") is not None:
+        table.add_column(item.label.replace(" ", "\n", 1), justify="right")
+    with_verdict = kind == "life" and documents[0].get("verdict") is not None
+    if with_verdict:
         table.add_column("verdict")
     columns = [item.values(documents) for item in series]
     for row, point in enumerate(sweep.points):
         cells = [f"{point.values[a.key]:g}" for a in sweep.axes]
         cells += [quantity(column[row], item.kind) for item, column in zip(series, columns)]
-        verdict = point.document.get("verdict")
-        if verdict is not None:
-            cells.append("[green]pass[/]" if verdict["passed"] else "[red]FAIL[/]")
+        if with_verdict:
+            cells.append("[green]pass[/]" if point.document["verdict"]["passed"]
+                         else "[red]FAIL[/]")
         table.add_row(*cells)
     return table
+
+
+def compact_hours(value: float) -> str:
+    """Hours in at most 5 characters: 908, 7,605, 45.8k, 1.2M."""
+    if math.isinf(value):
+        return "inf"
+    if value < 1e4:
+        return f"{value:,.0f}" if value >= 10 else f"{value:.2g}"
+    return f"{value / 1e3:.3g}k" if value < 1e6 else f"{value / 1e6:.3g}M"
 
 
 def life_map(sweep: Sweep) -> Table:
@@ -72,23 +93,23 @@ def life_map(sweep: Sweep) -> Table:
     rows, columns = sweep.axes[0], sweep.axes[1]
     step = max(1, math.ceil(len(columns.values) / MAP_MAX_COLUMNS))
     shown = list(range(0, len(columns.values), step))
-    table = Table(title=f"System {sweep.governing_life_name} h: {rows.key} (rows) x "
-                        f"{columns.key} (columns)", title_justify="left")
-    table.add_column(f"{rows.key} \\ {columns.key}", justify="right")
+    table = Table(title=f"System {sweep.governing_life_name} (h); rows: {rows.key}, "
+                        f"columns: {columns.key}", title_justify="left", box=box.SIMPLE_HEAD)
+    table.add_column(rows.key, justify="right", min_width=min(len(rows.key), 24))
     for j in shown:
-        table.add_column(f"{columns.values[j]:g}", justify="right")
+        table.add_column(f"{columns.values[j]:.4g}", justify="right")
     for i, row_value in enumerate(rows.values):
         cells = [f"{row_value:g}"]
         for j in shown:
             point = sweep.points[i * len(columns.values) + j]
             life = point.governing_life_h
-            text = hours(math.inf if life is None else life)
+            text = compact_hours(math.inf if life is None else life)
             verdict = point.document.get("verdict")
             cells.append(text if verdict is None else
                          (f"[green]{text}[/]" if verdict["passed"] else f"[red]{text}[/]"))
         table.add_row(*cells)
     if step > 1:
-        table.caption = f"every {step}th column shown; --json gives all points"
+        table.caption = f"{len(shown)} of {len(columns.values)} columns shown; --json has all"
     return table
 
 
@@ -105,13 +126,18 @@ def crossing_lines(sweep: Sweep) -> list[str]:
             lines.append(f"System {name} {way} the target at {key} = {crossing.value:.4g}"
                          f"{at} ({how}).")
     if not lines:
-        lines.append(f"System {name} stays on one side of the target over the whole sweep.")
+        side = "above" if sweep.points[0].document["verdict"]["passed"] else "below"
+        lines.append(f"System {name} stays {side} the target over the whole sweep.")
     return lines
 
 
 def render(sweep: Sweep, console: Console) -> None:
     console.print(f"[bold]{sweep.title}[/]  ({sweep.source})")
-    console.print(life_map(sweep) if len(sweep.axes) == 2 else point_table(sweep))
+    if len(sweep.axes) == 2:
+        console.print(life_map(sweep))
+    else:
+        console.print(point_table(sweep, "life"))
+        console.print(point_table(sweep, "safety"))
     for line in crossing_lines(sweep):
         console.print(line)
     console.print(f"[dim]Caution: {CAUTIONS}[/]")

@@ -15,7 +15,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.casefile.load import read_document, study_from_document
-from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_study
+from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_studies
 from hubload.engine import Result, evaluate_many
 from hubload.errors import InputError
 from hubload.report.jsonout import result_document
@@ -147,7 +147,7 @@ def run_sweep(file: str, specs: Sequence[str],
     for start in range(0, total, BATCH_POINTS):
         chunk = [{axis.path: float(v) for axis, v in zip(axes, values)}
                  for values in grid[start:start + BATCH_POINTS]]
-        studies = [variant_study(document, values, file) for values in chunk]
+        studies = variant_studies(document, chunk, file)
         for values, result in zip(chunk, evaluate_many(studies)):
             points.append(SweepPoint(values={path.text: v for path, v in values.items()},
                                      result=result, document=point_document(result)))

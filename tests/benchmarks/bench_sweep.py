@@ -1,0 +1,82 @@
+"""Prints how long a 200-point sweep of a 10-case file takes (compute only, plots aside),
+against the single-file path (read + validate + evaluate) called 200 times.
+
+A script, not a test: run `python tests/benchmarks/bench_sweep.py`. The 10-case file is
+the bundled yard loader (with its lubrication block, so L10m is computed) with its
+spectrum stretched to 10 cases.
+"""
+
+import copy
+import tempfile
+import time
+import tomllib
+from pathlib import Path
+
+import numpy as np
+import tomli_w
+
+from hubload.casefile import load_study
+from hubload.engine import evaluate
+from hubload.report.jsonout import result_document
+from hubload.studies.sweep import run_sweep
+
+ROOT = Path(__file__).resolve().parents[2]
+POINTS = 200
+OFFSETS_MM = np.linspace(40.0, 200.0, POINTS)
+
+
+def ten_case_document() -> dict:
+    document = tomllib.loads((ROOT / "load_cases" / "yard_loader.toml").read_text())
+    cases = document["case"]
+    while len(cases) < 10:
+        extra = copy.deepcopy(cases[len(cases) % 3])
+        extra["name"] += f" (variant {len(cases)})"
+        cases.append(extra)
+    for case in cases:
+        case["time_percent"] = 10.0
+    return document
+
+
+def best_of(repeats, function):
+    times = []
+    for _ in range(repeats):
+        start = time.perf_counter()
+        function()
+        times.append(time.perf_counter() - start)
+    return min(times)
+
+
+def main():
+    folder = Path(tempfile.mkdtemp())
+    document = ten_case_document()
+    file = folder / "ten_cases.toml"
+    file.write_text(tomli_w.dumps(document))
+    variants = []
+    for index, offset in enumerate(OFFSETS_MM):
+        variant = copy.deepcopy(document)
+        variant["wheel"]["offset_mm"] = float(offset)
+        variants.append(folder / f"point_{index:03d}.toml")
+        variants[-1].write_text(tomli_w.dumps(variant))
+    spec = [f"wheel.offset_mm={OFFSETS_MM[0]}:{OFFSETS_MM[-1]}:{POINTS}"]
+
+    sweep_s = best_of(5, lambda: run_sweep(str(file), spec))
+    single_s = best_of(3, lambda: [evaluate(load_study(v)) for v in variants])
+    single_json_s = best_of(3, lambda: [result_document(evaluate(load_study(v)))
+                                        for v in variants])
+    sweep = run_sweep(str(file), spec)
+    check = result_document(evaluate(load_study(variants[-1])))
+    assert sweep.points[-1].document["system"] == check["system"]
+
+    print(f"{POINTS}-point sweep of a {len(document['case'])}-case file "
+          f"(read once, batched engine call, JSON documents per point), best of 5:")
+    print(f"  sweep                                   {sweep_s * 1e3:8.1f} ms  "
+          f"({sweep_s / POINTS * 1e6:.0f} us per point)")
+    print(f"  single-file path x{POINTS} (load + evaluate) {single_s * 1e3:8.1f} ms  "
+          f"-> sweep is {single_s / sweep_s:.1f}x faster")
+    print(f"  single-file path x{POINTS} + JSON document   {single_json_s * 1e3:8.1f} ms  "
+          f"-> sweep is {single_json_s / sweep_s:.1f}x faster")
+    print(f"  target: < 1000 ms -> {'met' if sweep_s < 1.0 else 'NOT met'}")
+
+
+if __name__ == "__main__":
+    main()
