@@ -84,6 +84,13 @@ def test_log_built_from_a_known_spectrum_gives_that_spectrum_and_life_back(tmp_p
     want = sorted((c["wheel_load_kN"], c["side_force_kN"], c["tractive_force_kN"],
                    c["speed_rpm"], c["time_percent"] / 100) for c in known)
     np.testing.assert_allclose(got, want, rtol=1e-9, atol=1e-9)
+    # the demo has a [lubrication] block: the modified life comes back too
+    assert document["direct"]["system"]["l10m_h"] == pytest.approx(
+        checked["system"]["l10m_h"], rel=1e-9)
+    for label in ("outboard", "inboard"):
+        assert document["direct"]["bearings"][label]["l10m_h"] == pytest.approx(
+            checked["bearings"][label]["l10m_h"], rel=1e-9)
+    assert document["classing_error_l10m"] == pytest.approx(0.0, abs=1e-9)
     rechecked = CliRunner().invoke(main, ["check", str(spectrum_file), "--json"])
     assert rechecked.exit_code == 0, rechecked.output
     assert json.loads(rechecked.output)["system"]["l10_h"] == pytest.approx(
@@ -178,6 +185,24 @@ def test_text_report_shows_lives_error_shares_and_cautions(tmp_path):
     log = write_log(tmp_path / "log.csv", spectrum_log(yard_cases(), seconds=200))
     result = CliRunner().invoke(main, ["spectrum", log, "--case-file", str(YARD_LOADER)])
     assert result.exit_code == 0, result.output
-    for text in ("direct L10 h", "classed L10 h", "Classing error", "Direct damage by wheel load",
-                 "Caution"):
+    for text in ("Lives: direct (every sample) and classed spectrum", "Classing error",
+                 "Direct damage by wheel load", "Caution"):
         assert text in result.output
+
+
+def test_without_lubrication_there_is_no_modified_life(tmp_path, write_case_file):
+    case_file = write_case_file(WORKED_EXAMPLE)
+    log = write_log(tmp_path / "constant.csv", spectrum_log([WORKED_CASE], seconds=60))
+    document = spectrum_json(log, "--case-file", case_file)
+    assert "l10m_h" not in document["direct"]["system"]
+    assert "classing_error_l10m" not in document
+
+
+def test_slow_samples_below_kappa_0_1_are_reported_as_a_share_of_time(tmp_path):
+    # ISO 281:2007 aISO covers kappa >= 0.1; a crawling wheel runs below it
+    crawl = [{"time_percent": 25, "wheel_load_kN": 15, "speed_rpm": 0.5},
+             {"time_percent": 75, "wheel_load_kN": 15, "speed_rpm": 80}]
+    log = write_log(tmp_path / "crawl.csv", spectrum_log(crawl, seconds=400))
+    document = spectrum_json(log, "--case-file", YARD_LOADER)
+    assert document["flags_time_fraction"]["kappa_outside_scope"] == pytest.approx(0.25)
+    assert any("kappa < 0.1" in warning for warning in document["warnings"])

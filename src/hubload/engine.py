@@ -100,8 +100,12 @@ def system_damage_share(bearings: dict[str, BearingResult]) -> np.ndarray:
                                        [b.damage_share for b in bearings.values()])
 
 
-def evaluate(study: Study) -> Result:
-    """Loads, ISO 281 lives, damage shares and static safety of the pair."""
+def evaluate(study: Study, with_warnings: bool = True) -> Result:
+    """Loads, ISO 281 lives, damage shares and static safety of the pair.
+
+    ``with_warnings=False`` skips the per-case warning texts (measured logs
+    evaluate millions of samples as cases and report their flags as shares).
+    """
     mean_rpm = mean_speed_rpm(study)
     bearings = {
         label: bearing_result(study.pair.bearings()[label], radial, axial, study, mean_rpm)
@@ -116,7 +120,7 @@ def evaluate(study: Study) -> Result:
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
-        warnings=collect_warnings(study, bearings, modified) if single else [],
+        warnings=collect_warnings(study, bearings, modified) if single and with_warnings else [],
         a1=modified_life.per_study(modified_life.reliability_life_factor(study)),
         modified=modified)
 

@@ -39,7 +39,9 @@ LEVEL_EXPONENT = iso281.LIFE_EXPONENT_ROLLER
 WEIGHTS = ("time_s", "revolutions",
            *(f"revolutions_x_power_{key}" for key in FORCES),
            *(f"time_x_{key}" for key in FORCES),
-           *(f"damage_{label}" for label in LABELS))
+           *(f"damage_{label}" for label in LABELS),
+           *(f"damage_modified_{label}" for label in LABELS))
+KAPPA_FLAG = "kappa_outside_scope"
 
 
 @dataclass(frozen=True)
@@ -99,16 +101,17 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     cleaner = Cleaner(str(path), plan.headers, options.gaps, options.max_gap_s)
     table = dwell.empty_table(len(CLASS_CHANNELS), len(WEIGHTS), MIN_EXPONENTS)
     peak = dict.fromkeys(LABELS, 0.0)
-    flagged = dict.fromkeys(FLAGS, 0.0)
+    flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
     for samples in cleaner.run(read_chunks(path, plan.headers)):
         points = operating_points(samples, plan, study, str(path))
         cases = sample_cases(points, samples.hold_s)
         for flag, seconds in flag_time_s(points, samples.hold_s).items():
             flagged[flag] += seconds
-        result = evaluate(with_cases(study, cases))
+        result = evaluate(with_cases(study, cases), with_warnings=False)
         hold_h = samples.hold_s / SECONDS_PER_HOUR
-        damages = [iso281.damage_rate_per_hour(hold_h, result.bearings[label].case_life_h)
-                   for label in LABELS]
+        damages = [iso281.damage_rate_per_hour(hold_h, life_h)
+                   for life_h in case_lives(result)]
+        flagged[KAPPA_FLAG] += kappa_outside_time_s(result, samples.hold_s)
         for label in LABELS:
             peak[label] = max(peak[label], float(np.max(
                 result.bearings[label].static_equivalent_n)))
@@ -118,6 +121,23 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
                       peak_static_load_n=peak, flag_time_s=flagged)
+
+
+def case_lives(result) -> list[np.ndarray]:
+    """Per-sample L10 [h] of each bearing, then L10m (inf without lubrication)."""
+    basic = [result.bearings[label].case_life_h for label in LABELS]
+    if result.modified is None:
+        return basic + [np.full_like(basic[0], np.inf) for _ in LABELS]
+    return basic + [result.modified.bearings[label].case_life_h for label in LABELS]
+
+
+def kappa_outside_time_s(result, hold_s: np.ndarray) -> float:
+    """Hold time [s] of samples where either bearing runs at kappa < 0.1."""
+    if result.modified is None:
+        return 0.0
+    outside = np.any([result.modified.bearings[label].kappa_outside_scope for label in LABELS],
+                     axis=0)
+    return float(np.sum(hold_s[outside]))
 
 
 def class_inputs(cases, hold_s: np.ndarray, damages: list[np.ndarray]):
@@ -146,6 +166,7 @@ def merge_summaries(name: str, summaries: list[LogSummary],
             setattr(cleaning, key, getattr(cleaning, key) + getattr(part.cleaning, key))
     peak = {label: max(s.peak_static_load_n[label] for s in summaries) for label in LABELS}
     table = dwell.merged([s.table for s in summaries], classes, MIN_EXPONENTS)
-    flagged = {flag: sum(s.flag_time_s[flag] for s in summaries) for flag in FLAGS}
+    flagged = {flag: sum(s.flag_time_s[flag] for s in summaries)
+               for flag in summaries[0].flag_time_s}
     return LogSummary(name=name, plan=None, cleaning=cleaning, table=table,
                       peak_static_load_n=peak, flag_time_s=flagged)

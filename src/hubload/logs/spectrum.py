@@ -20,6 +20,7 @@ References
 
 from __future__ import annotations
 
+import dataclasses
 from dataclasses import dataclass
 
 import numpy as np
@@ -57,6 +58,9 @@ class SpectrumResult:
     classing_error: float | None
     shares: dict[str, list[ClassShare]]
     warnings: list[str]
+    modified_life_h: dict[str, float] | None = None   # L10m (Lnm), with [lubrication]
+    modified_system_life_h: float | None = None
+    modified_classing_error: float | None = None
 
 
 def sums(summary: LogSummary) -> dict[str, np.ndarray]:
@@ -144,16 +148,30 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
     static_safety = {label: float(iso281.static_safety(bearings[label].static_rating_n,
                                                        summary.peak_static_load_n[label]))
                      for label in LABELS}
-    classed = evaluate(with_cases(study, classed_cases(summary)))
+    classed = evaluate(with_cases(study, classed_cases(summary)), with_warnings=False)
     fraction = {label: (w / damage[label] if damage[label] > 0 else 0.0)
                 for label, w in system_weights(life_h).items()}
     shares = {key: class_shares(summary, CLASS_CHANNELS.index(key), fraction)
               for key in ("speed_rpm", "wheel_load_kN")}
-    return SpectrumResult(
+    result = SpectrumResult(
         summary=summary, damage=damage, life_h=life_h, system_life_h=system_h,
         static_safety=static_safety, classed=classed,
         classing_error=relative_error(float(classed.system_life_h), system_h),
         shares=shares, warnings=static_warnings(static_safety) + flag_warnings(summary))
+    return with_modified_lives(result) if classed.modified is not None else result
+
+
+def with_modified_lives(result: SpectrumResult) -> SpectrumResult:
+    """The same result with the direct and classed modified lives (ISO 281:2007, 9.1)."""
+    summary = result.summary
+    modified_h = {}
+    for label in LABELS:
+        damage = summary.total(f"damage_modified_{label}")
+        modified_h[label] = summary.duration_h / damage if damage > 0 else float("inf")
+    system_h = float(iso281.system_life(*modified_h.values()))
+    classed_h = float(result.classed.modified.system_life_h)
+    return dataclasses.replace(result, modified_life_h=modified_h, modified_system_life_h=system_h,
+                               modified_classing_error=relative_error(classed_h, system_h))
 
 
 def relative_error(classed_h: float, direct_h: float) -> float | None:
@@ -179,6 +197,10 @@ FLAG_TEXT = {
                    "(friction circle: the tyre would slide)",
     "pressure_above_rating": "the pressure was above the motor's max_pressure_bar",
     "speed_above_rating": "the speed was above the motor's max_speed_rpm",
+    "kappa_outside_scope": "a bearing ran at kappa < 0.1, outside the scope of ISO 281's aISO "
+                           "(no separating oil film: aISO is evaluated at kappa = 0.1 as a bounding "
+                           "estimate; wear and surface distress may limit the life; ask the "
+                           "supplier about these low speeds)",
 }
 
 

@@ -25,12 +25,20 @@ def cleaning_entry(result: SpectrumResult, policy: str) -> dict:
             "nominal_interval_s": report.nominal_interval_s, "max_gap_s": report.max_gap_s}
 
 
+def modified(lives: dict | None, label: str) -> dict:
+    """``{"l10m_h": ...}`` when lubrication is given (the key of check's contract), else {}."""
+    return {} if lives is None else {"l10m_h": number(lives[label])}
+
+
 def direct_entry(result: SpectrumResult) -> dict:
+    lives = result.modified_life_h
+    system = None if lives is None else {"system": result.modified_system_life_h}
     return {
         "bearings": {label: {"l10_h": number(result.life_h[label]),
+                             **modified(lives, label),
                              "damage": number(result.damage[label]),
                              "s0": number(result.static_safety[label])} for label in LABELS},
-        "system": {"l10_h": number(result.system_life_h)},
+        "system": {"l10_h": number(result.system_life_h), **modified(system, "system")},
         "damage_by_class": {key: [{k: number(v) for k, v in asdict(share).items()}
                                   for share in shares]
                             for key, shares in result.shares.items()},
@@ -41,10 +49,13 @@ def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
     classed = result.classed
     cases = classed.study.cases
     table = result.summary.table
+    lives = None if classed.modified is None else {
+        "system": classed.modified.system_life_h,
+        **{label: b.life_h for label, b in classed.modified.bearings.items()}}
     return {
-        "system": {"l10_h": number(classed.system_life_h)},
-        "bearings": {label: {"l10_h": number(classed.bearings[label].life_h)}
-                     for label in LABELS},
+        "system": {"l10_h": number(classed.system_life_h), **modified(lives, "system")},
+        "bearings": {label: {"l10_h": number(classed.bearings[label].life_h),
+                             **modified(lives, label)} for label in LABELS},
         "classes": {key: {"width": number(table.widths[i]),
                           "count": int(len(set(table.keys[i].tolist())))}
                     for i, key in enumerate(CLASS_CHANNELS)},
@@ -74,6 +85,9 @@ def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None)
         "classed": classed_entry(result, spectrum_file),
         "classing_error": None if result.classing_error is None
         else number(result.classing_error),
+        **({} if result.modified_life_h is None else {
+            "classing_error_l10m": None if result.modified_classing_error is None
+            else number(result.modified_classing_error)}),
         "flags_time_fraction": {flag: number(seconds / 3600 / summary.duration_h)
                                 if summary.duration_h > 0 else None
                                 for flag, seconds in summary.flag_time_s.items()},

@@ -16,18 +16,23 @@ KN = 1e3
 
 
 def lives_table(result: SpectrumResult) -> Table:
-    table = Table(title="L10 lives: direct (every sample) and classed spectrum",
-                  title_justify="left")
-    for heading, justify in (("bearing", "left"), ("direct L10 h", "right"),
-                             ("classed L10 h", "right"), ("log damage", "right"),
-                             ("s0 at peak", "right")):
-        table.add_column(heading, justify=justify)
+    modified = result.classed.modified
+    table = Table(title="Lives: direct (every sample) and classed spectrum", title_justify="left")
+    headings = ["bearing", "direct L10 h", "classed L10 h"]
+    if modified is not None:
+        headings += [f"direct {modified.symbol} h", f"classed {modified.symbol} h"]
+    for heading in headings + ["log damage", "s0 at peak"]:
+        table.add_column(heading, justify="left" if heading == "bearing" else "right")
     for label in LABELS:
+        extra = [] if modified is None else [hours(result.modified_life_h[label]),
+                                             hours(modified.bearings[label].life_h)]
         table.add_row(label, hours(result.life_h[label]),
-                      hours(result.classed.bearings[label].life_h),
+                      hours(result.classed.bearings[label].life_h), *extra,
                       f"{result.damage[label]:.3g}", f"{result.static_safety[label]:.2f}")
+    extra = [] if modified is None else [hours(result.modified_system_life_h),
+                                         hours(modified.system_life_h)]
     table.add_row("pair (system)", hours(result.system_life_h),
-                  hours(result.classed.system_life_h), "", "", style="bold")
+                  hours(result.classed.system_life_h), *extra, "", "", style="bold")
     return table
 
 
@@ -77,8 +82,11 @@ def cleaning_lines(result: SpectrumResult) -> list[str]:
 def error_line(result: SpectrumResult) -> str:
     if result.classing_error is None:
         return "Classing error: undefined (no fatigue damage in the log)."
-    return (f"Classing error (classed vs direct system life): "
-            f"{100 * result.classing_error:+.2f} %")
+    line = f"Classing error (classed vs direct system life): {100 * result.classing_error:+.2f} %"
+    if result.modified_classing_error is not None:
+        line += (f" for L10, {100 * result.modified_classing_error:+.2f} % for "
+                 f"{result.classed.modified.symbol}")
+    return line
 
 
 def render_log(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
