@@ -154,8 +154,11 @@ def test_compare_ratios_and_dominant_cases_match_separate_checks(tmp_path):
     for entry, check in zip(compared["files"], checks):
         assert entry["system"] == check["system"] and entry["bearings"] == check["bearings"]
         assert entry["dominant_case"] == check["dominant_case"]
-        assert [s["share"] for s in entry["damage_shares"]] == \
-            [c["system_damage_share"] for c in check["cases"]]
+        # shares of the life the verdict uses: modified when lubrication is given
+        key = {"L10": "system_damage_share", "L10m": "system_damage_share_modified"}[
+            entry["damage_life"]]
+        assert entry["damage_life"] == (check["verdict"]["life"] if check["verdict"] else "L10")
+        assert [s["share"] for s in entry["damage_shares"]] == [c[key] for c in check["cases"]]
         assert entry["ratio_to_first"]["system L10"] == pytest.approx(
             check["system"]["l10_h"] / checks[0]["system"]["l10_h"], rel=1e-12)
     assert compared["files"][1]["ratio_to_first"]["system L10"] < 1

@@ -9,7 +9,7 @@ from rich.table import Table
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.jsonout import number
-from hubload.report.series import all_series
+from hubload.report.series import all_series, damage_shares_of
 from hubload.report.terminal import hours, share
 from hubload.studies.compare import Comparison
 
@@ -19,8 +19,10 @@ PER_CASE_KEYS = ("cases", "cautions")
 
 
 def damage_shares(document: dict) -> list[dict]:
-    return [{"case": case["name"], "share": case["system_damage_share"]}
-            for case in document["cases"]]
+    """Each case's share of the pair's damage, for the life the verdict uses."""
+    shares = damage_shares_of(document)
+    return [{"case": case["name"], "share": share}
+            for case, share in zip(document["cases"], shares.system(document))]
 
 
 def compare_document(comparison: Comparison) -> dict:
@@ -32,6 +34,7 @@ def compare_document(comparison: Comparison) -> dict:
             **{key: value for key, value in entry.document.items()
                if key not in PER_CASE_KEYS},
             "damage_shares": damage_shares(entry.document),
+            "damage_life": damage_shares_of(entry.document).life,
             "ratio_to_first": {label: None if values[index] is None else number(values[index])
                                for label, values in ratios.items()},
         })
@@ -66,7 +69,8 @@ def lives_table(comparison: Comparison) -> Table:
             for index, value in enumerate(values)))
     table.add_row("worst s0", *(worst_safety(e.document) for e in entries))
     table.add_row("verdict", *(verdict_text(e.document) for e in entries))
-    table.add_row("dominant case", *(dominant_text(e.document) for e in entries))
+    table.add_row("dominant case", *(f"{dominant_text(e.document)}, "
+                                     f"{damage_shares_of(e.document).life}" for e in entries))
     return table
 
 
@@ -84,21 +88,23 @@ def verdict_text(document: dict) -> str:
 
 
 def dominant_text(document: dict) -> str:
-    dominant = document.get("dominant_case")
+    dominant = damage_shares_of(document).dominant(document)
     if dominant is None:
         return "none"
-    value = document["cases"][dominant["index"]]["system_damage_share"]
-    return f"{dominant['name']} ({share(value)})"
+    _, name, value = dominant
+    return f"{name} ({share(value)})"
 
 
 def shares_table(index: int, document: dict) -> Table:
-    table = Table(title=f"#{index}: damage shares of the pair by case", title_justify="left")
+    shares = damage_shares_of(document)
+    table = Table(title=f"#{index}: damage shares of the pair by case ({shares.life})",
+                  title_justify="left")
     for heading, justify in (("case", "left"), ("share", "right"), ("", "left")):
         table.add_column(heading, justify=justify)
-    dominant = (document.get("dominant_case") or {}).get("index")
+    dominant = (shares.dominant(document) or (None,))[0]
     for position, item in enumerate(damage_shares(document)):
         style = "bold" if position == dominant else None
-        table.add_row(item["case"], share(item["share"] or 0.0), bar(item["share"]), style=style)
+        table.add_row(item["case"], share(item["share"]), bar(item["share"]), style=style)
     return table
 
 

@@ -20,6 +20,7 @@ from hubload.report.html_style import STYLE
 from hubload.report.jsonout import result_document
 from hubload.report.plots import svg_text
 from hubload.report.plots.spectrum import damage_share_figure, loads_figure
+from hubload.report.series import damage_shares_of
 
 POLICY = "default-src 'none'; style-src 'unsafe-inline'; img-src data:"
 LABELS = {
@@ -160,7 +161,6 @@ def nested_sections(document: dict) -> str:
 
 def verdict_section(document: dict) -> str:
     verdict = document.get("verdict")
-    dominant = document.get("dominant_case")
     if verdict is None:
         line = '<p class="verdict none">No target life given: no verdict.</p>'
     else:
@@ -169,10 +169,12 @@ def verdict_section(document: dict) -> str:
         line = (f'<p class="verdict {css}"><strong>{word}</strong>: system {escape(verdict["life"])}'
                 f' = <span data-key="verdict.life_h">{cell("life_h", verdict["life_h"])}</span>'
                 f' h {relation} target {cell("target_h", verdict["target_h"])} h</p>')
+    shares = damage_shares_of(document)
+    dominant = shares.dominant(document)
     if dominant is not None:
-        share = document["cases"][dominant["index"]]["system_damage_share"]
-        line += (f"<p>Dominant case: <strong>{escape(dominant['name'])}</strong> "
-                 f"({cell('share', share)} of the pair's damage).</p>")
+        _, name, share = dominant
+        line += (f"<p>Dominant case: <strong>{escape(name)}</strong> ({cell('share', share)} "
+                 f"of the pair's damage, {shares.life}).</p>")
     return section("verdict", "Verdict", line)
 
 
@@ -180,10 +182,6 @@ def flags_section(document: dict) -> str:
     items = [escape(w) for w in document.get("warnings", [])]
     for case in document["cases"]:
         items += [f"{escape(case['name'])}: {escape(flag)}" for flag in case.get("flags") or []]
-        for name, entry in case["bearings"].items():
-            if entry.get("kappa_outside_scope"):
-                items.append(f"{escape(case['name'])}, {escape(name)}: kappa below 0.1, outside "
-                             "ISO 281's scope (bounding estimate).")
     body = ("<ul>" + "".join(f"<li>{i}</li>" for i in items) + "</ul>") if items \
         else "<p>No warnings or flags.</p>"
     return section("flags", "Warnings and flags", body)

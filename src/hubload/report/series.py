@@ -77,3 +77,35 @@ def all_series(document: dict) -> list[Series]:
                    for label in labels]
     candidates.append(Series("shaft min safety", "safety", shaft_min_safety))
     return [series for series in candidates if series.read(document) is not MISSING]
+
+
+@dataclass(frozen=True)
+class DamageShares:
+    """Each case's share of the pair's damage for the life the verdict uses."""
+
+    life: str  # "L10" or "L10m"
+    system_key: str
+    bearing_key: str
+
+    def system(self, document: dict) -> list[float]:
+        return [case.get(self.system_key) or 0.0 for case in document["cases"]]
+
+    def bearing(self, document: dict, label: str) -> list[float]:
+        return [case["bearings"][label].get(self.bearing_key) or 0.0
+                for case in document["cases"]]
+
+    def dominant(self, document: dict) -> tuple[int, str, float] | None:
+        shares = self.system(document)
+        if not shares or max(shares) <= 0:
+            return None
+        index = max(range(len(shares)), key=shares.__getitem__)
+        return index, document["cases"][index]["name"], shares[index]
+
+
+def damage_shares_of(document: dict) -> DamageShares:
+    """Shares of the modified life when the verdict (or, without a target, the file) uses it."""
+    verdict = document.get("verdict")
+    modified = verdict["life"] == "L10m" if verdict else "l10m_h" in document.get("system", {})
+    if modified and document["cases"] and "system_damage_share_modified" in document["cases"][0]:
+        return DamageShares("L10m", "system_damage_share_modified", "damage_share_modified")
+    return DamageShares("L10", "system_damage_share", "damage_share")

@@ -7,7 +7,7 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   new_figure, styled)
-from hubload.report.series import all_series
+from hubload.report.series import damage_shares_of
 from hubload.studies.compare import Comparison
 
 DOMINANT_COLOUR = "#c0392b"
@@ -17,30 +17,28 @@ SHARE_COLOUR = "#4c78a8"
 def draw_shares(axes, document: dict, with_bearings: bool, largest: float | None = None) -> None:
     """Horizontal bars: each case's share of the pair's damage (dominant case in red)."""
     cases = document["cases"]
+    shares = damage_shares_of(document)
     names = [case["name"] for case in cases]
     positions = np.arange(len(cases))
-    system = np.array([case["system_damage_share"] or 0.0 for case in cases]) * 100
-    dominant = (document.get("dominant_case") or {}).get("index")
+    system = np.array(shares.system(document)) * 100
+    dominant = (shares.dominant(document) or (None,))[0]
     colours = [DOMINANT_COLOUR if i == dominant else SHARE_COLOUR for i in positions]
     height = 0.8 / (3 if with_bearings else 1)
     axes.barh(positions, system, height=height, color=colours, label="pair (system)")
-    if with_bearings:
-        for k, label in enumerate(cases[0]["bearings"]):
-            shares = [(case["bearings"][label]["damage_share"] or 0.0) * 100 for case in cases]
-            axes.barh(positions + (k + 1) * height, shares, height=height, alpha=0.55,
-                      color=BEARING_COLOURS[k % len(BEARING_COLOURS)], label=label)
+    bearing_shares = {label: np.array(shares.bearing(document, label)) * 100
+                      for label in cases[0]["bearings"]} if with_bearings else {}
+    for k, (label, values) in enumerate(bearing_shares.items()):
+        axes.barh(positions + (k + 1) * height, values, height=height, alpha=0.55,
+                  color=BEARING_COLOURS[k % len(BEARING_COLOURS)], label=label)
     for y, value in zip(positions, system):
         axes.annotate(f"{value:.1f} %", (value, y), xytext=(3, -3), textcoords="offset points",
                       fontsize=7)
     axes.set_yticks(positions + (height if with_bearings else 0), names)
     axes.invert_yaxis()
-    drawn = list(system)
-    if with_bearings:
-        drawn += [(case["bearings"][label]["damage_share"] or 0.0) * 100
-                  for case in cases for label in case["bearings"]]
+    drawn = [*system, *(v for values in bearing_shares.values() for v in values)]
     largest = max(drawn, default=0.0) if largest is None else largest
     axes.set_xlim(0, min(100.0, largest * 1.2 + 5))
-    axes.set_xlabel("share of fatigue damage [%]")
+    axes.set_xlabel(f"share of fatigue damage ({shares.life}) [%]")
     axes.grid(axis="y", visible=False)
 
 
@@ -51,7 +49,7 @@ def damage_share_figure(document: dict) -> Figure:
     axes = figure.subplots()
     draw_shares(axes, document, with_bearings=True)
     axes.set_title(f"{document['title']}: damage shares by case", loc="left")
-    axes.legend(fontsize=7, loc="lower right")
+    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
     add_caution(figure)
     return figure
 
@@ -76,7 +74,7 @@ def loads_figure(document: dict) -> Figure:
     axes.set_xlabel("bearing load [kN]")
     axes.grid(axis="y", visible=False)
     axes.set_title(f"{document['title']}: bearing loads by case", loc="left")
-    axes.legend(fontsize=7, loc="lower right")
+    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
     add_caution(figure)
     return figure
 
@@ -90,12 +88,12 @@ def compare_figure(comparison: Comparison) -> Figure:
     grid = figure.add_gridspec(1 + len(documents), 1,
                                height_ratios=[max(case_rows) * 0.9, *case_rows])
     draw_lives(figure.add_subplot(grid[0]), comparison)
-    largest = max((100 * (case["system_damage_share"] or 0.0) for d in documents
-                   for case in d["cases"]), default=0.0)
+    largest = max((100 * share for d in documents
+                   for share in damage_shares_of(d).system(d)), default=0.0)
     for row, document in enumerate(documents, start=1):
         axes = figure.add_subplot(grid[row])
         draw_shares(axes, document, with_bearings=False, largest=largest)
-        axes.set_title(f"{document['title']}: damage shares of the pair", loc="left",
+        axes.set_title(f"#{row} {document['title']}: damage shares of the pair", loc="left",
                        fontsize=9)
     add_caution(figure)
     return figure
@@ -117,9 +115,9 @@ def draw_lives(axes, comparison: Comparison) -> None:
             % len(BEARING_COLOURS)]
         bars = axes.bar(positions + k * width, shown, width=width, label=item.label + " h",
                         color=colour, alpha=0.5 if item.modified else 0.9)
-        ratios = comparison.ratios(item)
-        axes.bar_label(bars, labels=["" if r is None else f"x{r:.2f}" for r in ratios],
-                       fontsize=6)
+        if item.system:
+            axes.bar_label(bars, labels=["" if r is None else f"x{r:.2f}"
+                                         for r in comparison.ratios(item)], fontsize=7)
     for index, document in enumerate(documents):
         verdict = document.get("verdict")
         if verdict is not None:
@@ -131,6 +129,6 @@ def draw_lives(axes, comparison: Comparison) -> None:
     if lowest:
         axes.set_ylim(bottom=min(lowest) / 3)
     axes.set_ylabel("life [h]")
-    axes.set_xticks(positions + 0.4 - width / 2, [d["title"] for d in documents], fontsize=8)
-    axes.set_title("Lives (bar labels: ratio against the first file)", loc="left")
+    axes.set_xticks(positions + 0.4 - width / 2, [f"#{i}" for i in range(1, len(documents) + 1)])
+    axes.set_title("Lives (labels: system life against #1)", loc="left")
     axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
