@@ -22,8 +22,8 @@ import pyarrow.parquet as pq
 from hubload.errors import InputError
 from hubload.logs.columns import DISCRETE_CHANNELS
 
-CSV_BLOCK_BYTES = 8 << 20
-PARQUET_BATCH_ROWS = 262_144
+CSV_BLOCK_BYTES = 4 << 20
+PARQUET_BATCH_ROWS = 65_536
 CSV_SUFFIXES = (".csv", ".txt", ".tsv")
 PARQUET_SUFFIXES = (".parquet", ".pq")
 LOG_SUFFIXES = CSV_SUFFIXES + PARQUET_SUFFIXES

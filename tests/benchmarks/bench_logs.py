@@ -1,0 +1,155 @@
+"""Prints how fast a big log turns into direct damage and a classed spectrum.
+
+    python tests/benchmarks/bench_logs.py [--rows 10000000] [--format parquet|csv|both]
+
+Writes a synthetic log (gen_log.py) to /tmp, then, each in its own process so
+that peak memory is its own: the chosen reader alone (the floor), and the full
+pass (read, clean, per-sample operating points, direct Miner damage through the
+engine, dwell classing) with a breakdown of where the time goes. A script, not a
+test: nothing is asserted and nothing large is committed.
+"""
+
+from __future__ import annotations
+
+import argparse
+import json
+import resource
+import subprocess
+import sys
+import time
+from pathlib import Path
+
+HERE = Path(__file__).resolve().parent
+ROOT = HERE.parents[1]
+CASE_FILE = ROOT / "load_cases" / "yard_loader.toml"
+
+
+def peak_rss_mb() -> float:
+    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024.0
+
+
+def reader_only(path: Path) -> dict:
+    from hubload.logs.columns import plan_columns
+    from hubload.logs.reader import headers, read_chunks
+
+    start = time.perf_counter()
+    plan = plan_columns(headers(path), {}, str(path))
+    rows = sum(len(chunk) for chunk in read_chunks(path, plan.headers))
+    return {"rows": rows, "seconds": time.perf_counter() - start}
+
+
+def full_pass(path: Path) -> dict:
+    """process_log's loop with timers around its stages (same functions, same order)."""
+    import numpy as np
+
+    from hubload.casefile.machine import load_machine
+    from hubload.engine import evaluate
+    from hubload.logs import pipeline
+    from hubload.logs.clean import Cleaner
+    from hubload.logs.columns import plan_columns
+    from hubload.logs.reader import headers, read_chunks
+    from hubload.logs.samples import operating_points, sample_cases, with_cases
+    from hubload.logs.spectrum import spectrum_result
+    from hubload.model import dwell, iso281
+
+    study, _ = load_machine(CASE_FILE)
+    spent = dict.fromkeys(("read and clean", "operating points", "direct damage (engine)",
+                           "classing"), 0.0)
+    start = time.perf_counter()
+    plan = plan_columns(headers(path), {}, str(path))
+    cleaner = Cleaner(str(path), plan.headers)
+    table = dwell.empty_table(len(pipeline.CLASS_CHANNELS), len(pipeline.WEIGHTS),
+                              pipeline.MIN_EXPONENTS)
+    classes = pipeline.LogOptions().classes
+    stream = cleaner.run(read_chunks(path, plan.headers))
+    mark = time.perf_counter()
+    for samples in stream:
+        now = time.perf_counter()
+        spent["read and clean"] += now - mark
+        points = operating_points(samples, plan, study, str(path))
+        cases = sample_cases(points, samples.hold_s)
+        mark = time.perf_counter()
+        spent["operating points"] += mark - now
+        result = evaluate(with_cases(study, cases), with_warnings=False)
+        hold_h = samples.hold_s / pipeline.SECONDS_PER_HOUR
+        damages = [iso281.damage_rate_per_hour(hold_h, life) for life in
+                   pipeline.case_lives(result)]
+        np.max(result.bearings["outboard"].static_equivalent_n)
+        now = time.perf_counter()
+        spent["direct damage (engine)"] += now - mark
+        values, weights = pipeline.class_inputs(cases, samples.hold_s, damages)
+        table = dwell.add_samples(table, values, weights, classes, pipeline.MIN_EXPONENTS)
+        mark = time.perf_counter()
+        spent["classing"] += mark - now
+    spent["read and clean"] += time.perf_counter() - mark
+    total = time.perf_counter() - start
+    summary = pipeline.LogSummary(str(path), plan, cleaner.report, table,
+                                  dict.fromkeys(pipeline.LABELS, 0.0), {})
+    now = time.perf_counter()
+    result = spectrum_result(summary, study)
+    spent["lives and classed spectrum"] = time.perf_counter() - now
+    return {"rows": cleaner.report.rows, "seconds": total, "spent": spent,
+            "cases": len(result.classed.study.cases), "classing_error": result.classing_error,
+            "direct_system_l10_h": result.system_life_h}
+
+
+def child(phase: str, path: str) -> None:
+    found = (reader_only if phase == "reader" else full_pass)(Path(path))
+    found["peak_rss_mb"] = peak_rss_mb()
+    print(json.dumps(found))
+
+
+def measure(phase: str, path: Path) -> dict:
+    output = subprocess.run([sys.executable, __file__, "--child", phase, str(path)],
+                            check=True, capture_output=True, text=True).stdout
+    return json.loads(output.strip().splitlines()[-1])
+
+
+def report(path: Path) -> None:
+    size_mb = path.stat().st_size / 1e6
+    floor = measure("reader", path)
+    full = measure("full", path)
+    rows = full["rows"]
+    print(f"\n{path.name}: {rows:,} rows, {size_mb:,.0f} MB")
+    print(f"  reader alone (floor)     {floor['seconds']:7.2f} s  {rows / floor['seconds']:>12,.0f}"
+          f" rows/s  peak RSS {floor['peak_rss_mb']:,.0f} MB")
+    print(f"  full pass                {full['seconds']:7.2f} s  {rows / full['seconds']:>12,.0f}"
+          f" rows/s  peak RSS {full['peak_rss_mb']:,.0f} MB  "
+          f"({full['seconds'] / floor['seconds']:.2f} x the floor)")
+    for stage, seconds in full["spent"].items():
+        rate = f"{rows / seconds:>12,.0f} rows/s" if seconds > 0 else ""
+        print(f"    {stage:<26} {seconds:7.2f} s  {rate}")
+    print(f"  classed spectrum: {full['cases']} cases, classing error "
+          f"{100 * full['classing_error']:+.2f} %, direct system L10 "
+          f"{full['direct_system_l10_h']:,.0f} h")
+
+
+def main() -> None:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--rows", type=int, default=10_000_000)
+    parser.add_argument("--format", choices=("parquet", "csv", "both"), default="both")
+    parser.add_argument("--folder", default="/tmp/hubload-bench-logs")
+    parser.add_argument("--child", nargs=2, metavar=("PHASE", "PATH"), help=argparse.SUPPRESS)
+    args = parser.parse_args()
+    if args.child:
+        child(*args.child)
+        return
+    sys.path.insert(0, str(HERE))
+    import gen_log
+
+    folder = Path(args.folder)
+    folder.mkdir(parents=True, exist_ok=True)
+    formats = ("parquet", "csv") if args.format == "both" else (args.format,)
+    paths = [folder / f"log_{args.rows}.{suffix}" for suffix in formats]
+    missing = [p for p in paths if not p.exists()]
+    if missing:
+        columns = gen_log.synthetic_log(args.rows)
+        for path in missing:
+            gen_log.write_log(str(path), columns)
+        del columns
+    for path in paths:
+        report(path)
+
+
+if __name__ == "__main__":
+    main()
