@@ -115,7 +115,17 @@ def moment_section(needs: Requirements) -> list[str]:
             f"**{needs.moment.value / KN:,.2f} kN m** in case '{needs.moment.case}' "
             f"(wheel offset {wheel.offset_m / MM:g} mm, loaded radius "
             f"{wheel.loaded_radius_m / MM:g} mm; wheel load, side force and tractive force "
-            "combined; the drive torque about the axis is not included).", ""]
+            "combined; the drive torque about the axis is not included).", ""] + torque_lines(needs)
+
+
+def torque_lines(needs: Requirements) -> list[str]:
+    """The largest drive torque of the motor, where the check derives it (operating points)."""
+    torques = [(abs(case["torque_Nm"]), case["name"]) for case in needs.document["cases"]
+               if isinstance(case.get("torque_Nm"), (int, float))]
+    if not torques:
+        return []
+    value, case = max(torques)
+    return [f"Largest drive torque at the wheel: {value / KN:,.2f} kN m in case '{case}'.", ""]
 
 
 def lubrication_section(needs: Requirements, inputs: dict) -> list[str]:

@@ -36,7 +36,7 @@ footer { margin-top: 40px; color: var(--muted); }
   main { max-width: none; padding: 0; }
   h2 { break-after: avoid; margin-top: 18px; }
   .scroll { overflow: visible; }
-  table { font-size: 8pt; width: 100%; }
+  table { font-size: 8pt; max-width: 100%; }
   thead th { position: static; }
   tr, figure.chart, .caution, .verdict { break-inside: avoid; }
   .verdict, .caution, thead th { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
