@@ -231,8 +231,12 @@ def namespaced(svg: str, prefix: str) -> str:
 
 
 def report_html(result: Result, inputs: dict) -> str:
-    """The whole page; ``inputs`` is the file's parsed TOML."""
-    document = result_document(result)
+    """The whole page of a check result; ``inputs`` is the file's parsed TOML."""
+    return report_page(result_document(result), inputs)
+
+
+def report_page(document: dict, inputs: dict) -> str:
+    """The whole page of a check's JSON document."""
     try:
         tool = f"hubload {version('hubload')}"
     except PackageNotFoundError:

@@ -1,0 +1,48 @@
+"""Results that other features add to the check's JSON (the shaft's sections, L10m) reach
+the sweep tables and plots, the comparison and the HTML report without changes there."""
+
+from __future__ import annotations
+
+import copy
+import json
+import re
+
+from click.testing import CliRunner
+
+from hubload.cli import main
+from hubload.report.html import report_page
+from hubload.report.series import all_series, shaft_min_safety
+from studies_helpers import YARD_LOADER, read_toml
+
+SHAFT = {"sections": [
+    {"name": "flange fillet", "min_safety": 1.85, "min_safety_case": "braking, loaded",
+     "yield_safety": 3.1, "fatigue_life_h": None},
+    {"name": "bearing seat", "min_safety": 2.6, "min_safety_case": "pushing into a heap",
+     "yield_safety": 4.0, "fatigue_life_h": 120000.0}]}
+
+
+def check_document() -> dict:
+    return json.loads(CliRunner().invoke(main, ["check", str(YARD_LOADER), "--json"]).output)
+
+
+def test_shaft_minimum_safety_is_a_series_when_the_document_has_sections():
+    document = check_document()
+    labels = [s.label for s in all_series(document)]
+    assert "shaft min safety" not in labels or "shaft" in document
+    with_shaft = {**copy.deepcopy(document), "shaft": SHAFT}
+    series = {s.label: s for s in all_series(with_shaft)}
+    assert series["shaft min safety"].values([with_shaft]) == [1.85]  # the lower section
+    assert shaft_min_safety({"shaft": {"sections": [{"min_safety": None}]}}) is None
+
+
+def test_modified_life_series_follow_the_documents_keys():
+    document = check_document()
+    labels = [s.label for s in all_series(document)]
+    assert ("system L10m" in labels) == ("l10m_h" in document["system"])
+
+
+def test_report_page_shows_a_result_block_it_was_not_written_for():
+    document = {**check_document(), "shaft": SHAFT}
+    page = report_page(document, read_toml(YARD_LOADER))
+    assert re.search(r'data-key="shaft.sections\[0\].min_safety">1.85<', page)
+    assert "flange fillet" in page and "braking, loaded" in page
