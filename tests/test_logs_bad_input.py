@@ -39,8 +39,9 @@ def passed(path, *options):
 
 
 @pytest.mark.parametrize("changes, where, expected", [
-    ({2: "2,,0,2,40"}, "row 3, column 'wheel_load_kN'", "empty or NaN sample"),
-    ({3: "3,12,nan,2,40"}, "row 4, column 'side_force_kN'", "empty or NaN sample"),
+    ({2: "2,,0,2,40"}, "row 3, column 'wheel_load_kN'", "empty, NaN or infinite sample"),
+    ({3: "3,12,nan,2,40"}, "row 4, column 'side_force_kN'", "NaN or infinite sample"),
+    ({3: "3,12,0,inf,40"}, "row 4, column 'tractive_force_kN'", "NaN or infinite sample"),
     ({2: "1,12,0,2,40"}, "row 3, column 'time_s'", "repeats 1 s"),
     ({3: "1.5,12,0,2,40"}, "row 4, column 'time_s'", "goes back from 2 s"),
     ({4: "40,11,0,1,40", 5: "41,10,0,1,40"}, "row 4, column 'time_s'", "gap of 37 s"),

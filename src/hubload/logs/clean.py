@@ -122,7 +122,8 @@ class Cleaner:
         channel, index = np.unravel_index(np.argmax(empty.T), empty.T.shape)[::-1]
         if self.policy == "error":
             key = list(block.columns)[channel]
-            raise self.fail(f"empty or NaN sample; {HINT}", int(block.rows[index]), key)
+            raise self.fail(f"empty, NaN or infinite sample; {HINT}", int(block.rows[index]),
+                            key)
         keep = ~np.isnan(block.columns["time_s"])
         if self.policy == "drop":
             keep &= ~empty.any(axis=0)

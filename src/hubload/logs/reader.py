@@ -133,7 +133,9 @@ def numeric(column: pa.Array, key: str, header: str, path: Path) -> np.ndarray:
     if not (pa.types.is_integer(column.type) or pa.types.is_floating(column.type)):
         raise InputError(f"expected numbers, got {column.type} values", file=str(path),
                          key_path=f"column {header!r}")
-    return pc.cast(column, pa.float64()).to_numpy(zero_copy_only=False)
+    values = pc.cast(column, pa.float64()).to_numpy(zero_copy_only=False)
+    # an infinite sample is as unusable as an empty one: the cleaner's policy applies
+    return np.where(np.isinf(values), np.nan, values)
 
 
 def discrete_codes(column: pa.Array, key: str, header: str, first_row: int,
