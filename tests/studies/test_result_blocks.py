@@ -46,3 +46,24 @@ def test_report_page_shows_a_result_block_it_was_not_written_for():
     page = report_page(document, read_toml(YARD_LOADER))
     assert re.search(r'data-key="shaft.sections\[0\].min_safety">1.85<', page)
     assert "flange fillet" in page and "braking, loaded" in page
+
+
+def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
+    # Shaft safety 1/(k x) against a required 1.5: log(safety) is linear in log(x), not in x,
+    # so the interpolated crossing lies within a grid step of the exact x* = 1/(1.5 k).
+    import numpy as np
+
+    from hubload.casefile.variation import KeyPath
+    from hubload.schema.spec import Field
+    from hubload.studies.sweep import Axis, Sweep, SweepPoint
+
+    x = np.linspace(0.5, 2.0, 31)
+    k = 0.5
+    points = tuple(SweepPoint({"k": float(v)}, None, {
+        "verdict": None, "shaft": {"required_safety": 1.5,
+                                   "sections": [{"min_safety": 1 / (k * v)}]}}) for v in x)
+    axis = Axis(KeyPath("k", (("k", None),), Field("k", "number", "")), x)
+    sweep = Sweep("t", "t.toml", (axis,), points, None, {"k": None})
+    ((where, found),) = sweep.shaft_crossings()
+    assert where == {} and len(found) == 1 and found[0].falls_below
+    assert abs(found[0].value - 1 / (1.5 * k)) < x[1] - x[0]

@@ -30,11 +30,16 @@ def sweep_document(sweep: Sweep) -> dict:
         "target_life_h": sweep.target_life_h,
         "governing_life": sweep.governing_life_name,
         "points": [{"values": point.values, **point.document} for point in sweep.points],
-        "crossings": [{"at": where, "key": sweep.axes[-1].key, "value": c.value,
-                       "falls_below": c.falls_below, "interpolated": c.interpolated}
-                      for where, found in sweep.crossings() for c in found],
+        "crossings": crossing_entries(sweep.crossings(), sweep),
+        "shaft_crossings": crossing_entries(sweep.shaft_crossings(), sweep),
         "cautions": CAUTIONS,
     }
+
+
+def crossing_entries(found, sweep: Sweep) -> list[dict]:
+    return [{"at": where, "key": sweep.axes[-1].key, "value": c.value,
+             "falls_below": c.falls_below, "interpolated": c.interpolated}
+            for where, crossings in found for c in crossings]
 
 
 def to_json(sweep: Sweep) -> str:
@@ -128,6 +133,18 @@ def crossing_lines(sweep: Sweep) -> list[str]:
     if not lines:
         side = "above" if sweep.points[0].document["verdict"]["passed"] else "below"
         lines.append(f"System {name} stays {side} the target over the whole sweep.")
+    return lines + shaft_lines(sweep)
+
+
+def shaft_lines(sweep: Sweep) -> list[str]:
+    key = sweep.axes[-1].key
+    lines = []
+    for where, found in sweep.shaft_crossings():
+        at = "".join(f" at {k} = {v:g}" for k, v in where.items())
+        for crossing in found:
+            way = "falls below" if crossing.falls_below else "rises above"
+            lines.append(f"Shaft's lowest safety {way} its required safety at {key} = "
+                         f"{crossing.value:.4g}{at}.")
     return lines
 
 

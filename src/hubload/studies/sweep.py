@@ -19,6 +19,7 @@ from hubload.casefile.variation import KeyPath, current_value, parse_key_path, v
 from hubload.engine import Result, evaluate_many
 from hubload.errors import InputError
 from hubload.report.jsonout import result_document
+from hubload.report.series import MISSING, lookup, shaft_min_safety
 from hubload.studies.crossing import Crossing, target_crossings
 
 MAX_POINTS = 100_000
@@ -85,6 +86,25 @@ class Sweep:
             where = {axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)}
             found.append((where, target_crossings(self.axes[-1].values, ratios[fixed], 1.0)))
         return found
+
+
+    def shaft_crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
+        """Where the shaft's lowest safety crosses its required safety (when both are given)."""
+        ratios = [shaft_ratio(p.document) for p in self.points]
+        if any(ratio is None for ratio in ratios):
+            return []
+        ratios = np.array(ratios).reshape(self.shape)
+        return [({axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)},
+                 target_crossings(self.axes[-1].values, ratios[fixed], 1.0))
+                for fixed in itertools.product(*(range(n) for n in self.shape[:-1]))]
+
+
+def shaft_ratio(document: dict) -> float | None:
+    """Lowest shaft safety / required safety of a point; None without both."""
+    lowest, required = shaft_min_safety(document), lookup(document, "shaft.required_safety")
+    if lowest is MISSING or not isinstance(required, (int, float)) or required <= 0:
+        return None
+    return math.inf if lowest is None else lowest / required
 
 
 def ratio_to_target(document: dict) -> float:

@@ -10,7 +10,7 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   new_figure, styled)
-from hubload.report.series import all_series
+from hubload.report.series import all_series, lookup
 from hubload.studies.sweep import Sweep
 
 SAFETY_GUIDE = 2.0  # s0 >= 2: common practice for roller bearings with shock loads
@@ -101,6 +101,10 @@ def plot_safeties(axes, x, documents, safety, colours) -> None:
         style = {"color": SYSTEM_COLOUR, "linewidth": 2} if item.label.startswith("shaft") \
             else line_style(item, colours)
         axes.plot(x, values, label=item.label, **{**style, "linestyle": "-"})
+    required = lookup(documents[0], "shaft.required_safety")
+    if isinstance(required, (int, float)):
+        axes.axhline(required, color=SYSTEM_COLOUR, linewidth=1, linestyle=":",
+                     label=f"shaft required safety {required:g}")
     axes.axhline(1.0, color=TARGET_COLOUR, linewidth=1.2, label="1 (limit)")
     axes.axhline(SAFETY_GUIDE, color=TARGET_COLOUR, linewidth=1, linestyle=":",
                  label=f"s0 = {SAFETY_GUIDE:g} (common practice)")
