@@ -135,3 +135,42 @@ def test_unknown_mode_value_names_the_row(tmp_path, dumper):
     result = CliRunner().invoke(main, ["spectrum", log, "--case-file", case_file])
     assert result.exit_code == 2
     assert f"{log}: row 6, column 'mode': expected one of 'full', 'half'" in result.output
+
+
+YARD_LOADER = ROOT / "load_cases" / "yard_loader.toml"
+
+
+def test_logged_temperature_gives_the_modified_life_of_cases_with_those_temperatures(
+        tmp_path, write_case_file):
+    # the same loads at two oil temperatures: a case file with temperature_C per case
+    # (ISO 281 viscosity ratio at each temperature) is the reference
+    document = tomllib.loads(YARD_LOADER.read_text())
+    level = {"wheel_load_kN": 14.0, "tractive_force_kN": 2.0, "speed_rpm": 120.0}
+    document["case"] = [{"name": "cool", "time_percent": 40.0, **level, "temperature_C": 40.0},
+                        {"name": "hot", "time_percent": 60.0, **level, "temperature_C": 95.0}]
+    case_file = write_case_file(document)
+    checked = run("check", case_file)
+    columns = {key: np.append(np.repeat(value, 1000), value) for key, value in level.items()}
+    columns["temperature_C"] = np.append(np.repeat([40.0, 95.0], [400, 600]), 95.0)
+    columns["time_s"] = np.arange(1001, dtype=float)
+    out = tmp_path / "spectrum.toml"
+    found = run("spectrum", write(tmp_path / "log.csv", columns), "--case-file", case_file,
+                "--out", out)
+    assert found["direct"]["system"]["l10m_h"] == pytest.approx(checked["system"]["l10m_h"],
+                                                                 rel=1e-9)
+    assert found["direct"]["system"]["l10_h"] == pytest.approx(checked["system"]["l10_h"],
+                                                                rel=1e-9)
+    # one load class, so the classed case has the revolution-weighted mean temperature
+    assert [c["temperature_C"] for c in found["classed"]["cases"]] == pytest.approx([73.0])
+    assert run("check", out)["system"]["l10m_h"] == pytest.approx(
+        found["classed"]["system"]["l10m_h"], rel=1e-8)
+
+
+def test_temperature_outside_the_oil_range_names_the_row(tmp_path):
+    columns = {"time_s": np.arange(4.0), "wheel_load_kN": np.full(4, 10.0),
+               "speed_rpm": np.full(4, 50.0), "temperature_C": np.array([50, 60, 170, 60.0])}
+    log = write(tmp_path / "log.csv", columns)
+    result = CliRunner().invoke(main, ["spectrum", log, "--case-file", str(YARD_LOADER)])
+    assert result.exit_code == 2
+    assert f"{log}: row 3, column 'temperature_C': expected a value from -40 to 150" in (
+        result.output)

@@ -22,7 +22,7 @@ from dataclasses import dataclass, field
 import numpy as np
 
 from hubload.errors import InputError
-from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, MINIMUM
+from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, LIMITS
 from hubload.logs.reader import RawChunk
 
 POLICIES = ("error", "drop", "interpolate")
@@ -155,14 +155,15 @@ class Cleaner:
                             int(block.rows[index + 1]), "time_s")
 
     def check_limits(self, block: Block) -> None:
-        for key, minimum in MINIMUM.items():
+        for key, (low, high) in LIMITS.items():
             if key in block.columns:
-                below = np.flatnonzero(block.columns[key] < minimum)
-                if below.size:
-                    value = block.columns[key][below[0]]
-                    raise self.fail(f"expected a value >= {minimum:g} ({CHANNELS[key]}), got "
-                                    f"{value:g}; check the channel's sign convention",
-                                    int(block.rows[below[0]]), key)
+                values = block.columns[key]
+                outside = np.flatnonzero((values < low) | (high is not None and values > high))
+                if outside.size:
+                    limits = f">= {low:g}" if high is None else f"from {low:g} to {high:g}"
+                    raise self.fail(f"expected a value {limits} ({CHANNELS[key]}), got "
+                                    f"{values[outside[0]]:g}; check the channel's units and "
+                                    "sign convention", int(block.rows[outside[0]]), key)
 
     def with_holds(self, block: Block) -> Samples:
         """Samples of all rows but the last, holding until the next row's stamp."""

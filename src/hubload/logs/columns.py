@@ -24,9 +24,10 @@ CHANNELS: dict[str, str] = {
     "flow_lpm": "flow through the motor [l/min]",
     "mode": 'displacement mode of a two-speed motor, "full" or "half"',
     "lateral_accel_g": "lateral acceleration [g], + this wheel on the outside of the turn",
+    "temperature_C": "bearing operating temperature [C] for the modified life",
 }
 DISCRETE_CHANNELS = frozenset({"mode"})
-MINIMUM = {"wheel_load_kN": 0.0}
+LIMITS = {"wheel_load_kN": (0.0, None), "temperature_C": (-40.0, 150.0)}
 SPEED_SOURCES = ("speed_rpm", "speed_kmh", "flow_lpm")
 TRACTIVE_SOURCES = ("tractive_force_kN", "pressure_bar")
 NEEDS_MOTOR = ("pressure_bar", "flow_lpm")
@@ -64,7 +65,8 @@ class ColumnPlan:
 
 
 def plan_columns(available: list[str], mapping: dict[str, str], file: str,
-                 has_motor: bool = False, has_vehicle: bool = False) -> ColumnPlan:
+                 has_motor: bool = False, has_vehicle: bool = False,
+                 has_lubrication: bool = False) -> ColumnPlan:
     """Choose the columns to read from a log whose header row is ``available``."""
     present = set(available)
     for key, header in mapping.items():
@@ -89,6 +91,9 @@ def plan_columns(available: list[str], mapping: dict[str, str], file: str,
             raise InputError(f"the log's {key} column needs a [motor] block in the case file "
                              "(displacement_cc, efficiencies) to turn it into torque and speed",
                              file=file)
+    if "temperature_C" in found and not has_lubrication:
+        notes.append(f"column {found.pop('temperature_C')!r} (temperature_C) ignored: no "
+                     "[lubrication] block")
     if "mode" in found and not has_motor:
         notes.append(f"column {found.pop('mode')!r} (mode) ignored: no [motor] block")
     if "lateral_accel_g" in found and {"wheel_load_kN", "side_force_kN"} <= set(found):

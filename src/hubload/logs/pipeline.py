@@ -20,7 +20,7 @@ from hubload.logs.clean import Cleaner, CleaningReport
 from hubload.logs.columns import ColumnPlan, plan_columns
 from hubload.logs.reader import headers, read_chunks
 from hubload.logs.samples import (FLAGS, flag_time_s, operating_points, sample_cases,
-                                  with_cases)
+                                  sample_temperature_c, with_cases)
 from hubload.model import dwell, iso281
 
 KN = 1e3
@@ -39,6 +39,7 @@ LEVEL_EXPONENT = iso281.LIFE_EXPONENT_ROLLER
 WEIGHTS = ("time_s", "revolutions",
            *(f"revolutions_x_power_{key}" for key in FORCES),
            *(f"time_x_{key}" for key in FORCES),
+           "revolutions_x_temperature_C", "time_x_temperature_C",
            *(f"damage_{label}" for label in LABELS),
            *(f"damage_modified_{label}" for label in LABELS))
 KAPPA_FLAG = "kappa_outside_scope"
@@ -64,6 +65,7 @@ class LogSummary:
     table: dwell.DwellTable
     peak_static_load_n: dict[str, float]
     flag_time_s: dict[str, float]
+    logged_temperature: bool = False
 
     def total(self, weight: str) -> float:
         return float(np.sum(self.table.sums[WEIGHTS.index(weight)]))
@@ -97,7 +99,8 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     """Read, clean, integrate and class one log."""
     path = Path(path)
     plan = plan_columns(headers(path), options.mapping, str(path),
-                        has_motor=study.motor is not None, has_vehicle=study.vehicle is not None)
+                        has_motor=study.motor is not None, has_vehicle=study.vehicle is not None,
+                        has_lubrication=study.lubrication is not None)
     cleaner = Cleaner(str(path), plan.headers, options.gaps, options.max_gap_s)
     table = dwell.empty_table(len(CLASS_CHANNELS), len(WEIGHTS), MIN_EXPONENTS)
     peak = dict.fromkeys(LABELS, 0.0)
@@ -107,7 +110,8 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
         cases = sample_cases(points, samples.hold_s)
         for flag, seconds in flag_time_s(points, samples.hold_s).items():
             flagged[flag] += seconds
-        result = evaluate(with_cases(study, cases), with_warnings=False)
+        temperature_c = sample_temperature_c(samples, study)
+        result = evaluate(with_cases(study, cases, temperature_c), with_warnings=False)
         hold_h = samples.hold_s / SECONDS_PER_HOUR
         damages = [iso281.damage_rate_per_hour(hold_h, life_h)
                    for life_h in case_lives(result)]
@@ -115,12 +119,13 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
         for label in LABELS:
             peak[label] = max(peak[label], float(np.max(
                 result.bearings[label].static_equivalent_n)))
-        values, weights = class_inputs(cases, samples.hold_s, damages)
+        values, weights = class_inputs(cases, samples.hold_s, temperature_c, damages)
         table = dwell.add_samples(table, values, weights, options.classes, MIN_EXPONENTS)
     cleaning = cleaner.report
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
-                      peak_static_load_n=peak, flag_time_s=flagged)
+                      peak_static_load_n=peak, flag_time_s=flagged,
+                      logged_temperature="temperature_C" in plan.headers)
 
 
 def case_lives(result) -> list[np.ndarray]:
@@ -140,7 +145,8 @@ def kappa_outside_time_s(result, hold_s: np.ndarray) -> float:
     return float(np.sum(hold_s[outside]))
 
 
-def class_inputs(cases, hold_s: np.ndarray, damages: list[np.ndarray]):
+def class_inputs(cases, hold_s: np.ndarray, temperature_c: np.ndarray,
+                 damages: list[np.ndarray]):
     """Classed values (kN, r/min) and the per-sample weights in the order of WEIGHTS.
 
     Forces enter the revolution-weighted sums as |F|^p (p = 10/3, the roller
@@ -152,7 +158,8 @@ def class_inputs(cases, hold_s: np.ndarray, damages: list[np.ndarray]):
     values = np.concatenate([forces_kn, cases.speed_rpm[None]])
     weights = np.concatenate([hold_s[None], revolutions[None],
                               np.abs(forces_kn) ** LEVEL_EXPONENT * revolutions,
-                              forces_kn * hold_s, np.stack(damages)])
+                              forces_kn * hold_s, (temperature_c * revolutions)[None],
+                              (temperature_c * hold_s)[None], np.stack(damages)])
     return values, weights
 
 
@@ -169,4 +176,5 @@ def merge_summaries(name: str, summaries: list[LogSummary],
     flagged = {flag: sum(s.flag_time_s[flag] for s in summaries)
                for flag in summaries[0].flag_time_s}
     return LogSummary(name=name, plan=None, cleaning=cleaning, table=table,
-                      peak_static_load_n=peak, flag_time_s=flagged)
+                      peak_static_load_n=peak, flag_time_s=flagged,
+                      logged_temperature=any(s.logged_temperature for s in summaries))

@@ -16,7 +16,7 @@ from hubload.errors import InputError
 from hubload.logs.columns import parse_column_options
 from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
 from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
-from hubload.logs.spectrum import SpectrumResult, spectrum_result
+from hubload.logs.spectrum import SpectrumResult, classed_temperature_c, spectrum_result
 from hubload.report import logsjson, logsview
 from hubload.report.spectrumfile import spectrum_text, write_new_file
 
@@ -63,8 +63,8 @@ def run_single(request: Request, study: Study, machine: dict, options: LogOption
     written = None
     if request.out:
         write_new_file(request.out, spectrum_text(machine, result.classed.study.cases,
-                                                  Path(request.log).name, study.title),
-                       request.force)
+                                                  Path(request.log).name, study.title,
+                                                  classed_temperature_c(found)), request.force)
         written = request.out
     if request.as_json:
         click.echo(json.dumps(logsjson.single_document(result, request.gaps, written,
@@ -115,8 +115,9 @@ def write_fleet_files(request: Request, machine: dict, study: Study,
     for result in [*results, combined]:
         name = result.summary.name
         log_name = Path(name).name if name != COMBINED_NAME else f"{len(results)} logs"
-        write_new_file(targets[name], spectrum_text(machine, result.classed.study.cases,
-                                                    log_name, study.title), True)
+        write_new_file(targets[name], spectrum_text(
+            machine, result.classed.study.cases, log_name, study.title,
+            classed_temperature_c(result.summary)), True)
     return {name: str(path) for name, path in targets.items()}
 
 

@@ -21,6 +21,7 @@ from hubload.logs.clean import Samples
 from hubload.logs.columns import ColumnPlan
 from hubload.model import operating
 from hubload.model.kinematics import kmh_to_rpm
+from hubload.model.lubrication import CELSIUS_ZERO_K
 
 HALF = 1.0  # code of "half" in the mode channel (reader.DISCRETE_LEVELS order)
 FLAGS = ("slips", "tyre_slides", "pressure_above_rating", "speed_above_rating")
@@ -104,5 +105,20 @@ def flag_time_s(points: OperatingPoints, hold_s: np.ndarray) -> dict[str, float]
             for flag in FLAGS}
 
 
-def with_cases(study: Study, cases: Cases) -> Study:
+def with_cases(study: Study, cases: Cases, temperature_c: np.ndarray | None = None) -> Study:
+    """The study with ``cases``; a per-case temperature [C] replaces the lubrication's."""
+    if temperature_c is not None and study.lubrication is not None:
+        lubrication = dataclasses.replace(study.lubrication,
+                                          temperature_k=temperature_c + CELSIUS_ZERO_K)
+        return dataclasses.replace(study, cases=cases, lubrication=lubrication)
     return dataclasses.replace(study, cases=cases)
+
+
+def sample_temperature_c(samples: Samples, study: Study) -> np.ndarray:
+    """Logged temperature [C], else the lubrication's, else 0 (no modified life)."""
+    if "temperature_C" in samples.channels:
+        return samples.channels["temperature_C"]
+    if study.lubrication is None:
+        return np.zeros(len(samples))
+    default_k = np.broadcast_to(study.lubrication.temperature_k, (1,))[0]
+    return np.full(len(samples), float(default_k) - CELSIUS_ZERO_K)

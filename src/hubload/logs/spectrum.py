@@ -67,13 +67,29 @@ def sums(summary: LogSummary) -> dict[str, np.ndarray]:
     return dict(zip(WEIGHTS, summary.table.sums))
 
 
+def class_order(summary: LogSummary) -> np.ndarray:
+    """Occupied classes (with time) sorted by class index: the order of the cases."""
+    occupied = sums(summary)["time_s"] > 0
+    order = np.lexsort(summary.table.keys[::-1])
+    return order[occupied[order]]
+
+
+def classed_temperature_c(summary: LogSummary) -> np.ndarray | None:
+    """Revolution-weighted mean temperature [C] of each class (time-weighted at
+    standstill), or None when no log had a temperature channel."""
+    if not summary.logged_temperature:
+        return None
+    cell, order = sums(summary), class_order(summary)
+    return dwell.weighted_means(cell["revolutions_x_temperature_C"][order],
+                                cell["revolutions"][order],
+                                cell["time_x_temperature_C"][order], cell["time_s"][order])
+
+
 def classed_cases(summary: LogSummary) -> Cases:
     """The dwell classes with time as load cases (file order: by class index)."""
     table = summary.table
     cell = sums(summary)
-    occupied = cell["time_s"] > 0
-    order = np.lexsort(table.keys[::-1])
-    order = order[occupied[order]]
+    order = class_order(summary)
     time_s, revolutions = cell["time_s"][order], cell["revolutions"][order]
     forces_kn = {key: class_level(cell, key, order, table) for key in FORCES}
     return Cases(
@@ -148,7 +164,8 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
     static_safety = {label: float(iso281.static_safety(bearings[label].static_rating_n,
                                                        summary.peak_static_load_n[label]))
                      for label in LABELS}
-    classed = evaluate(with_cases(study, classed_cases(summary)), with_warnings=False)
+    classed = evaluate(with_cases(study, classed_cases(summary), classed_temperature_c(summary)),
+                       with_warnings=False)
     fraction = {label: (w / damage[label] if damage[label] > 0 else 0.0)
                 for label, w in system_weights(life_h).items()}
     shares = {key: class_shares(summary, CLASS_CHANNELS.index(key), fraction)

@@ -10,7 +10,7 @@ from __future__ import annotations
 from dataclasses import asdict
 
 from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
-from hubload.logs.spectrum import SpectrumResult
+from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.cautions import CAUTIONS
 from hubload.report.jsonout import number
 
@@ -48,6 +48,7 @@ def direct_entry(result: SpectrumResult) -> dict:
 def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
     classed = result.classed
     cases = classed.study.cases
+    temperatures = classed_temperature_c(result.summary)
     table = result.summary.table
     lives = None if classed.modified is None else {
         "system": classed.modified.system_life_h,
@@ -67,6 +68,7 @@ def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
             "side_force_kN": number(cases.side_force_n[i] / KN),
             "tractive_force_kN": number(cases.tractive_force_n[i] / KN),
             "speed_rpm": number(cases.speed_rpm[i]),
+            **({} if temperatures is None else {"temperature_C": number(temperatures[i])}),
             "system_damage_share": number(classed.system_damage_share[i]),
         } for i, name in enumerate(cases.names)],
     }

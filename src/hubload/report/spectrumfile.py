@@ -18,8 +18,8 @@ def rounded(value) -> float:
     return float(f"{float(value):.{SIGNIFICANT}g}")
 
 
-def case_blocks(cases: Cases) -> list[dict]:
-    return [{
+def case_blocks(cases: Cases, temperature_c=None) -> list[dict]:
+    blocks = [{
         "name": name,
         "time_percent": rounded(100.0 * cases.time_fraction[i]),
         "wheel_load_kN": rounded(cases.wheel_load_n[i] / KN),
@@ -27,13 +27,18 @@ def case_blocks(cases: Cases) -> list[dict]:
         "tractive_force_kN": rounded(cases.tractive_force_n[i] / KN),
         "speed_rpm": rounded(cases.speed_rpm[i]),
     } for i, name in enumerate(cases.names)]
+    if temperature_c is not None:
+        for block, value in zip(blocks, temperature_c):
+            block["temperature_C"] = rounded(value)
+    return blocks
 
 
-def spectrum_text(machine: dict, cases: Cases, log_name: str, title: str) -> str:
+def spectrum_text(machine: dict, cases: Cases, log_name: str, title: str,
+                  temperature_c=None) -> str:
     """The case file's machine tables with the classed spectrum as its [[case]] blocks."""
     document = {key: value for key, value in machine.items()}
     document["project"] = {**machine.get("project", {}), "title": f"{title}, spectrum of {log_name}"}
-    document["case"] = case_blocks(cases)
+    document["case"] = case_blocks(cases, temperature_c)
     header = (f"# Duty spectrum classed from the log {log_name} by hubload spectrum:\n"
               "# time-at-level classes; each case holds a class's share of time, its mean\n"
               "# speed and the revolution-weighted power mean (p = 10/3) of each force.\n\n")
