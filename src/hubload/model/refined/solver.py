@@ -1,0 +1,171 @@
+"""Equilibrium of the rigid shaft on the laminae of both bearings, many cases at once.
+
+With the approach delta_l = a_l . z - c_l of lamina l affine in the five
+(scaled) displacements z and the lamina load Q_l = k_l max(delta_l, 0)^n, the
+equilibrium sum_l Q_l a_l = F is the stationary point of the convex potential
+
+    U(z) = sum_l k_l max(delta_l, 0)^(n+1) / (n+1) - F . z
+
+(strain energy of the contacts minus the work of the external load) [1]. It is
+solved by Newton's method on U with the analytic gradient and Hessian
+sum_l n k_l max(delta_l, 0)^(n-1) a_l a_l^T, a Levenberg-Marquardt damping for
+states with few or no laminae in contact (end play: the Hessian is singular
+until the shaft touches) and an Armijo back-tracking line search; since U is
+convex every accepted step brings the shaft nearer its equilibrium [2]. All
+cases iterate together as numpy arrays (cases on the last axis). Cases that
+have not converged after the batched iterations are retried one by one with
+scipy.optimize.minimize (trust-region, exact Hessian) [3]; a case that still
+fails is reported as having no equilibrium.
+
+References
+----------
+[1] T. A. Harris, M. N. Kotzalas, Advanced Concepts of Bearing Technology,
+    5th ed., CRC 2007, ch. 1 (equilibrium of the rolling elements and rings).
+[2] J. Nocedal, S. J. Wright, Numerical Optimization, 2nd ed., Springer 2006,
+    ch. 3 (line search, Armijo condition) and ch. 10 (Levenberg-Marquardt).
+[3] scipy.optimize.minimize, method "trust-exact" (More-Sorensen trust region).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+from scipy import optimize
+
+from hubload.model.refined.layout import Laminae
+
+RELATIVE_TOLERANCE = 1e-9
+ENERGY_ROUNDING = 1e-12
+MAX_ITERATIONS = 80
+REFERENCE_APPROACH_M = 1e-6
+ARMIJO = 1e-4
+MAX_HALVINGS = 40
+DAMPING_START, DAMPING_MIN, DAMPING_MAX = 1.0, 1e-12, 1e8
+
+
+@dataclass(frozen=True)
+class Equilibrium:
+    """Scaled displacements z (5, M), lamina loads [N] (L, M), convergence (M,)."""
+
+    displacement: np.ndarray
+    lamina_loads_n: np.ndarray
+    converged: np.ndarray
+    iterations: int
+
+
+class ContactField:
+    """Loads, energy, gradient and Hessian of the laminae for displacements z."""
+
+    def __init__(self, laminae: Laminae, gaps_m: np.ndarray):
+        self.influence = laminae.influence
+        self.stiffness = laminae.stiffness[:, None]
+        self.exponent = laminae.exponent
+        self.gaps_m = gaps_m
+
+    def approach(self, z, cases=slice(None)):
+        return self.influence @ z - self.gaps_m[:, cases]
+
+    def loads(self, z, cases=slice(None)):
+        """(loads [N], tangent stiffness, energy [J]) of every lamina, each (L, m)."""
+        delta = np.maximum(self.approach(z, cases), 0.0)
+        root = np.power(delta, self.exponent - 1.0)
+        load = self.stiffness * delta * root
+        return load, self.exponent * self.stiffness * root, load * delta / (self.exponent + 1.0)
+
+    def energy(self, z, external, cases=slice(None)):
+        return np.sum(self.loads(z, cases)[2], axis=0) - np.sum(external * z, axis=0)
+
+    def hessian(self, tangent):
+        """sum_l t_l a_l a_l^T as (m, 5, 5)."""
+        return np.einsum("li,lj,lm->mij", self.influence, self.influence, tangent,
+                         optimize=True)
+
+
+def converged_mask(contact_sum, residual, external):
+    """|residual| <= tol x (|external| + sum of contact force magnitudes), per component."""
+    scale = np.max(np.abs(external), axis=0) + np.max(contact_sum, axis=0) + 1e-30
+    return np.all(np.abs(residual) <= RELATIVE_TOLERANCE * scale, axis=0)
+
+
+def solve_equilibrium(laminae: Laminae, external, setting_m) -> Equilibrium:
+    """Displacements and lamina loads for loads ``external`` (5, M) and settings (M,) [m]."""
+    external = np.asarray(external, dtype=float)
+    cases = external.shape[1]
+    field = ContactField(laminae, laminae.gaps_m(np.broadcast_to(setting_m, (cases,))))
+    reference_tangent = (laminae.exponent * laminae.stiffness
+                         * REFERENCE_APPROACH_M ** (laminae.exponent - 1.0))
+    damping_matrix = np.diag(np.diag(field.hessian(reference_tangent[:, None])[0]))
+    z = np.zeros((5, cases))
+    damping = np.full(cases, DAMPING_START)
+    done = np.zeros(cases, dtype=bool)
+    iteration = 0
+    for iteration in range(1, MAX_ITERATIONS + 1):
+        active = np.flatnonzero(~done)
+        if active.size == 0:
+            break
+        za, fa = z[:, active], external[:, active]
+        load, tangent, _ = field.loads(za, active)
+        residual = field.influence.T @ load - fa
+        finished = converged_mask(np.abs(field.influence).T @ load, residual, fa)
+        done[active[finished]] = True
+        keep = ~finished
+        if not np.any(keep):
+            break
+        active, za, fa = active[keep], za[:, keep], fa[:, keep]
+        gradient = residual[:, keep]
+        matrix = (field.hessian(tangent[:, keep])
+                  + damping[active, None, None] * damping_matrix[None])
+        step = -np.linalg.solve(matrix, gradient.T[..., None])[..., 0].T
+        z[:, active], full_step = line_search(field, za, fa, step, gradient, active)
+        damping[active] = np.clip(np.where(full_step, damping[active] / 10.0,
+                                           damping[active] * 10.0), DAMPING_MIN, DAMPING_MAX)
+    load = field.loads(z)[0]
+    residual = field.influence.T @ load - external
+    done = converged_mask(np.abs(field.influence).T @ load, residual, external)
+    for case in np.flatnonzero(~done):
+        z[:, case], done[case] = minimise_one(field, z[:, case], external[:, case], case)
+    return Equilibrium(displacement=z, lamina_loads_n=field.loads(z)[0], converged=done,
+                       iterations=iteration)
+
+
+def line_search(field: ContactField, z, external, step, gradient, cases):
+    """Armijo back-tracking per case; returns (new z, whether the full step was taken)."""
+    start = field.energy(z, external, cases)
+    slope = np.sum(gradient * step, axis=0)
+    # Near the solution energy changes drown in rounding; allow for it there.
+    rounding = ENERGY_ROUNDING * (np.abs(start) + np.sum(np.abs(external * z), axis=0))
+    scale = np.ones(z.shape[1])
+    pending = np.arange(z.shape[1])
+    for _ in range(MAX_HALVINGS):
+        trial = z[:, pending] + scale[pending] * step[:, pending]
+        accepted = (field.energy(trial, external[:, pending], cases[pending])
+                    <= start[pending] + ARMIJO * scale[pending] * slope[pending]
+                    + rounding[pending])
+        pending = pending[~accepted]
+        if pending.size == 0:
+            break
+        scale[pending] *= 0.5
+    scale[pending] = 0.0
+    return z + scale * step, scale == 1.0
+
+
+def minimise_one(field: ContactField, z0, external, case):
+    """One case by scipy's trust-region Newton method; returns (z, converged)."""
+    index = np.array([case])
+
+    def energy_and_gradient(z):
+        load, _, energy = field.loads(z[:, None], index)
+        return (float(np.sum(energy) - external @ z),
+                (field.influence.T @ load)[:, 0] - external)
+
+    def hessian(z):
+        return field.hessian(field.loads(z[:, None], index)[1])[0]
+
+    found = optimize.minimize(energy_and_gradient, z0, jac=True, hess=hessian,
+                              method="trust-exact", options={"gtol": 1e-3 * RELATIVE_TOLERANCE * (np.max(np.abs(external)) + 1.0),
+                                       "maxiter": 500})
+    load = field.loads(found.x[:, None], index)[0]
+    residual = field.influence.T @ load - external[:, None]
+    ok = converged_mask(np.abs(field.influence).T @ load, residual, external[:, None])[0]
+    return found.x, bool(ok and np.all(np.isfinite(found.x)))

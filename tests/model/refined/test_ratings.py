@@ -1,0 +1,58 @@
+"""Basic ratings from the internal geometry against ISO 281 and ISO 76."""
+
+import math
+
+import numpy as np
+import pytest
+
+from hubload.model.refined import contact, ratings
+
+
+def test_fc_table_follows_lundberg_palmgren_closed_form():
+    # ISO 281:2007 table 7 (values from memory) against the closed form behind it
+    # (Lundberg & Palmgren 1952, as given by Harris & Kotzalas, Essential Concepts, 5th ed.,
+    # ch. 11, with lambda nu = 0.83): within table rounding up to gamma = 0.38; the table's
+    # last rows sit up to 1.4 % below the closed form.
+    gamma = ratings.FC_TABLE_GAMMA
+    deviation = ratings.fc_lundberg_palmgren(gamma) / ratings.FC_TABLE - 1.0
+    assert np.all(np.abs(deviation[gamma <= 0.38]) < 1.5e-3)
+    assert np.all(np.abs(deviation) < 0.015)
+
+
+@pytest.mark.parametrize("gamma, fc", [(0.05, 74.1), (0.10, 84.2), (0.15, 88.2), (0.20, 88.7),
+                                       (0.30, 83.8)])
+def test_dynamic_rating_at_iso281_table7_points(gamma, fc):
+    # ISO 281:2007 7.1.1, Cr = bm fc (Lwe cos a)^(7/9) Z^(3/4) Dwe^(29/27), bm = 1.1 (table 1),
+    # fc from table 7 at a tabulated Dwe cos(a)/Dpw (from memory); hand arithmetic in N and mm.
+    z, dwe, lwe, alpha = 18, 11.0, 19.0, math.radians(14.0)
+    dpw = dwe * math.cos(alpha) / gamma
+    expected = 1.1 * fc * (lwe * math.cos(alpha)) ** (7 / 9) * z ** 0.75 * dwe ** (29 / 27)
+    got = ratings.dynamic_rating_n(z, dwe * 1e-3, lwe * 1e-3, alpha, dpw * 1e-3)
+    assert got == pytest.approx(expected, rel=1e-9)
+
+
+def test_fc_interpolates_linearly_between_table_rows():
+    # ISO 281:2007 7.1.1: linear interpolation in table 7 (rows 0.10 -> 84.2, 0.11 -> 85.4).
+    assert ratings.fc_factor(0.105) == pytest.approx(0.5 * (84.2 + 85.4))
+    assert ratings.fc_factor(0.1125) == pytest.approx(85.4 + 0.25 * (86.4 - 85.4))
+
+
+def test_static_rating_iso76_hand_example():
+    # ISO 76:2006 6.1.1: C0r = 44 (1 - Dwe cos a / Dpw) i Z Lwe Dwe cos a; by hand for
+    # Z = 20, Dwe = 12, Lwe = 20, a = 15 deg, Dpw = 85 (N, mm):
+    # gamma = 12 x 0.965926 / 85 = 0.136366; 44 x 0.863634 x 20 x 20 x 12 x 0.965926 = 176 184 N.
+    got = ratings.static_rating_n(20, 12e-3, 20e-3, math.radians(15.0), 85e-3)
+    assert got == pytest.approx(176_184, rel=1e-4)
+
+
+def test_static_rating_is_the_4000_mpa_load_of_iso76():
+    # ISO 76:2006 6.1.1 bases C0 on 4000 MPa at the most heavily loaded roller; the standard's
+    # load distribution takes Qmax = 5 Fr / (Z cos a) (Stribeck's factor 5, Harris & Kotzalas,
+    # Essential Concepts, 5th ed., ch. 7; from memory). Hertz line contact (Roark) at that load
+    # on the inner raceway must give 4000 MPa.
+    z, dwe, lwe, alpha, dpw = 17, 9.5e-3, 16e-3, math.radians(20.0), 70e-3
+    c0 = ratings.static_rating_n(z, dwe, lwe, alpha, dpw)
+    q_max = 5.0 * c0 / (z * math.cos(alpha))
+    radius = contact.inner_contact_radius_m(dwe, alpha, dpw)
+    pressure = contact.line_contact_pressure_pa(q_max / lwe, radius)
+    assert pressure == pytest.approx(4000e6, rel=0.01)
