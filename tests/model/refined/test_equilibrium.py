@@ -4,7 +4,7 @@ import math
 
 import numpy as np
 import pytest
-from hypothesis import given, settings
+from hypothesis import assume, given, settings
 from hypothesis import strategies as st
 
 from hubload.model.refined import contact, layout, pair_bearings, pair_response, solver
@@ -32,7 +32,21 @@ def pairs(draw):
                          draw(roller_sets()), -draw(st.floats(5.0, 90.0)) * 1e-3)
 
 
-forces_kn = st.lists(st.floats(-40.0, 40.0), min_size=3, max_size=3)
+def kilonewtons(low, high):
+    """Forces rounded to 1 N: sub-newton forces are noise for a wheel bearing."""
+    return st.floats(low, high).map(lambda value: round(value, 3))
+
+
+@st.composite
+def hub_pairs(draw):
+    """Pairs in wheel-hub proportions: spread at least four roller lengths (common practice)."""
+    bearings = draw(pairs())
+    spread = bearings[0].load_centre_m - bearings[1].load_centre_m
+    assume(spread >= 4 * max(b.rollers.roller_length_m for b in bearings))
+    return bearings
+
+
+forces_kn = st.lists(kilonewtons(-40.0, 40.0), min_size=3, max_size=3)
 
 
 def independent_residuals(bearings, loads_per_bearing, ground_force, patch):
@@ -75,11 +89,15 @@ def test_every_solution_balances_forces_and_moments(bearings, forces, offset, ra
 
 
 @PROPERTY
-@given(pairs(), st.floats(0.0, 60.0), st.floats(-40.0, 40.0), st.floats(-0.05, 0.25),
+@given(hub_pairs(), kilonewtons(0.0, 60.0), kilonewtons(-40.0, 40.0), st.floats(-0.05, 0.25),
        st.lists(st.floats(-40.0, 300.0), min_size=2, max_size=6))
 def test_more_end_play_never_enlarges_the_load_zone_under_radial_load(
         bearings, wheel_kn, tractive_kn, offset, settings_um):
-    # Pure radial load: no side force, so no axial force and no tyre couple.
+    # Pure radial load: no side force, so no axial force and no tyre couple. With simple
+    # supports the radial loads are fixed by statics and both load zones shrink as the play
+    # grows (Harris & Kotzalas, ch. 7). Long rollers on a short spread carry enough moment to
+    # shift radial load between the bearings and can widen a load zone slightly (found with
+    # this test; docs/refined-method.md), so the property is checked in hub proportions.
     setting = np.sort(np.array(settings_um)) * 1e-6
     response = pair_response(bearings, wheel_kn * 1e3, 0.0, tractive_kn * 1e3, offset, 0.4,
                              setting)
@@ -89,7 +107,7 @@ def test_more_end_play_never_enlarges_the_load_zone_under_radial_load(
 
 
 @PROPERTY
-@given(st.floats(0.0, 60.0), st.floats(-40.0, 40.0), st.floats(-60.0, 200.0),
+@given(kilonewtons(0.0, 60.0), kilonewtons(-40.0, 40.0), st.floats(-60.0, 200.0),
        st.sampled_from(["back-to-back", "face-to-face"]), st.floats(0.0, 15.0))
 def test_symmetric_bearings_under_symmetric_load_share_it_equally(
         wheel_kn, tractive_kn, setting_um, arrangement, crown_um):

@@ -37,6 +37,7 @@ from hubload.model.refined.layout import Laminae
 
 RELATIVE_TOLERANCE = 1e-9
 ENERGY_ROUNDING = 1e-12
+NEGLIGIBLE_FORCE_N = 1e-6
 MAX_ITERATIONS = 80
 REFERENCE_APPROACH_M = 1e-6
 ARMIJO = 1e-4
@@ -83,9 +84,9 @@ class ContactField:
 
 
 def converged_mask(contact_sum, residual, external):
-    """|residual| <= tol x (|external| + sum of contact force magnitudes), per component."""
-    scale = np.max(np.abs(external), axis=0) + np.max(contact_sum, axis=0) + 1e-30
-    return np.all(np.abs(residual) <= RELATIVE_TOLERANCE * scale, axis=0)
+    """|residual| <= tol x (|external| + sum of contact force magnitudes) + 1 uN, per component."""
+    scale = np.max(np.abs(external), axis=0) + np.max(contact_sum, axis=0)
+    return np.all(np.abs(residual) <= RELATIVE_TOLERANCE * scale + NEGLIGIBLE_FORCE_N, axis=0)
 
 
 def solve_equilibrium(laminae: Laminae, external, setting_m) -> Equilibrium:
