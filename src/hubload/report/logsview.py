@@ -2,6 +2,8 @@
 
 from __future__ import annotations
 
+from pathlib import Path
+
 import numpy as np
 from rich.console import Console
 from rich.table import Table
@@ -112,7 +114,7 @@ def ranking_table(ranking: list[dict]) -> Table:
         table.add_column(heading, justify=justify)
     for row in ranking:
         relative = row["relative_to_fleet"]
-        table.add_row(row["log"], f"{row['duration_h'] or 0:,.2f}",
+        table.add_row(Path(row["log"]).name, f"{row['duration_h'] or 0:,.2f}",
                       hours(row["system_l10_h"] if row["system_l10_h"] is not None
                             else float("inf")),
                       "" if relative is None else f"{relative:.2f} x")
