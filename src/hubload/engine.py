@@ -11,7 +11,7 @@ from dataclasses import dataclass, field, replace
 
 import numpy as np
 
-from hubload import modified_life
+from hubload import modified_life, shaftcheck
 from hubload.casefile.batch import picker, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
@@ -46,6 +46,7 @@ class Result:
     warnings: list[str] = field(default_factory=list)
     a1: np.ndarray | float = 1.0                       # ISO 281 a1, per study
     modified: modified_life.ModifiedLife | None = None  # with [lubrication] only
+    shaft: shaftcheck.ShaftResult | None = None
 
     @property
     def dominant_case(self) -> int:
@@ -116,13 +117,15 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
         {label: b.case_life_h for label, b in bearings.items()},
         lambda life_h: per_study_km(life_h, mean_rpm, study))
     single = np.ndim(system_h) == 0 and (modified is None or np.ndim(modified.system_life_h) == 0)
+    shaft = shaftcheck.evaluate_shaft(study, mean_rpm)
     return Result(
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
-        warnings=collect_warnings(study, bearings, modified) if single and with_warnings else [],
+        warnings=collect_warnings(study, bearings, modified)
+        + shaftcheck.shaft_warnings(study, shaft) if single and with_warnings else [],
         a1=modified_life.per_study(modified_life.reliability_life_factor(study)),
-        modified=modified)
+        modified=modified, shaft=shaft)
 
 
 def evaluate_many(studies: list[Study]) -> list[Result]:
@@ -137,7 +140,8 @@ def evaluate_many(studies: list[Study]) -> list[Result]:
     for index, study in enumerate(studies):
         point = take(index)
         results.append(replace(point, warnings=collect_warnings(study, point.bearings,
-                                                                 point.modified)))
+                                                                 point.modified)
+                               + shaftcheck.shaft_warnings(study, point.shaft)))
     return results
 
 

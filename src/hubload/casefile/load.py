@@ -11,6 +11,7 @@ import numpy as np
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import (Motor, Vehicle, derive_cases, read_motor,
                                                read_vehicle)
+from hubload.casefile.shaft import read_shaft
 from hubload.casefile.study import Bearing, Cases, Pair, Study, Wheel
 from hubload.casefile.validate import validate_document
 from hubload.errors import InputError
@@ -70,6 +71,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         vehicle=vehicle,
         lubrication=read_lubrication(data.get("lubrication"), data["case"], pair),
         reliability_percent=project.get("reliability_percent", 90.0),
+        shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
     )
 
 

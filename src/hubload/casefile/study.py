@@ -81,6 +81,43 @@ class Lubrication:
 
 
 @dataclass(frozen=True)
+class ShaftSection:
+    """A checked section of the wheel shaft (solid, round)."""
+
+    name: str
+    position_m: ArrayLike
+    diameter_m: ArrayLike
+    kt_bending: ArrayLike
+    kt_torsion: ArrayLike
+    notch_sensitivity: ArrayLike | None
+    notch_radius_m: ArrayLike | None
+    carries_torque: bool
+
+
+@dataclass(frozen=True)
+class PermissibleCurve:
+    """Supplier's permissible radial wheel load [N] against load position [m] (increasing)."""
+
+    load_position_m: np.ndarray
+    radial_load_n: np.ndarray
+
+
+@dataclass(frozen=True)
+class Shaft:
+    """Material, surface and checked sections of the wheel shaft (steel)."""
+
+    ultimate_pa: ArrayLike
+    yield_pa: ArrayLike
+    surface: str
+    temperature_c: ArrayLike
+    reliability_percent: ArrayLike
+    criterion: str
+    required_safety: float
+    sections: tuple[ShaftSection, ...]
+    permissible: PermissibleCurve | None
+
+
+@dataclass(frozen=True)
 class Study:
     source: str
     title: str
@@ -92,3 +129,4 @@ class Study:
     vehicle: Vehicle | None = None
     lubrication: Lubrication | None = None
     reliability_percent: float = 90.0
+    shaft: Shaft | None = None

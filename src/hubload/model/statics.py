@@ -83,13 +83,19 @@ def external_axial_force_n(side_force_n):
 
 
 def section_moments(section_x_m, wheel_load_n, side_force_n, tractive_force_n,
-                    offset_m, loaded_radius_m, outboard_x_m, inboard_x_m):
+                    offset_m, loaded_radius_m, outboard_x_m, inboard_x_m, wheel_beyond=None):
     """Bending moments [N m] in the shaft at ``section_x_m`` [m], both planes.
 
     Method of sections [1]: the moment is that of every force outboard of the
     section (x > section) about the section. Returns ``(vertical_nm,
     horizontal_nm, shear_n)`` with the shear force magnitude [N]; the resultant
     bending moment is ``hypot(vertical_nm, horizontal_nm)``.
+
+    ``wheel_beyond`` says whether the tyre forces act on the outboard part; by
+    default when the wheel centre plane is outboard of the section. A wheel
+    bolted to a flange at the shaft's outboard end loads every section of the
+    shaft (``wheel_beyond=True``), also where a dished wheel puts its centre
+    plane inboard of the section.
     """
     v_o, v_i, h_o, h_i = bearing_reactions(
         wheel_load_n, side_force_n, tractive_force_n, offset_m,
@@ -99,11 +105,13 @@ def section_moments(section_x_m, wheel_load_n, side_force_n, tractive_force_n,
     horizontal_nm = 0.0
     shear_v = 0.0
     shear_h = 0.0
-    for x_m, f_vertical, f_horizontal, extra_nm in (
-            (offset_m, wheel_load_n, tractive_force_n, couple_nm),
-            (outboard_x_m, v_o, h_o, 0.0),
-            (inboard_x_m, v_i, h_i, 0.0)):
-        beyond = np.asarray(x_m > section_x_m, dtype=float)
+    if wheel_beyond is None:
+        wheel_beyond = offset_m > section_x_m
+    for x_m, f_vertical, f_horizontal, extra_nm, acts_beyond in (
+            (offset_m, wheel_load_n, tractive_force_n, couple_nm, wheel_beyond),
+            (outboard_x_m, v_o, h_o, 0.0, outboard_x_m > section_x_m),
+            (inboard_x_m, v_i, h_i, 0.0, inboard_x_m > section_x_m)):
+        beyond = np.asarray(acts_beyond, dtype=float)
         lever_m = x_m - section_x_m
         vertical_nm = vertical_nm + beyond * (lever_m * f_vertical + extra_nm)
         horizontal_nm = horizontal_nm + beyond * (lever_m * f_horizontal)

@@ -12,6 +12,7 @@ from typing import Any
 import numpy as np
 
 from hubload.engine import Result, verdict
+from hubload.report import shaft_json
 from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_json import add_modified_life
 from hubload.report.operating import case_entry
@@ -65,7 +66,7 @@ def result_document(result: Result) -> dict:
     study = result.study
     found = verdict(result)
     dominant = result.dominant_case
-    return add_modified_life({
+    document = add_modified_life({
         "title": study.title,
         "source": study.source,
         "method": "iso281",
@@ -82,6 +83,8 @@ def result_document(result: Result) -> dict:
         "warnings": list(result.warnings),
         "cautions": CAUTIONS,
     }, result)
+    shaft_json.extend_document(document, result)
+    return document
 
 
 def to_json(result: Result) -> str:

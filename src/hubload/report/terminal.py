@@ -9,6 +9,7 @@ from rich.console import Console
 from rich.table import Table
 
 from hubload.engine import Result, verdict
+from hubload.report import shaft_terminal
 from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_terminal import (modified_bearing_table, modified_summary_cells,
                                               modified_summary_headings, notes, oil_cells,
@@ -114,7 +115,9 @@ def render(result: Result, console: Console) -> None:
     for line in notes(result):
         console.print(f"Note: {line}")
     console.print(dominant_line(result))
+    shaft_terminal.render_shaft(result, console)
     console.print(verdict_line(result))
+    shaft_terminal.render_overall(result, console)
     for warning in result.warnings:
         console.print(f"[yellow]Warning:[/] {warning}")
     console.print(f"[dim]Caution: {CAUTIONS}[/]")

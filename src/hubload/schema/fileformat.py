@@ -17,7 +17,8 @@ PROJECT = Table(
     fields=(
         Field("title", "string", "Title shown on every output (default: the file name).",
               example="Yard loader, front left wheel"),
-        Field("target_life_h", "number", "Required system life of the bearing pair [h].",
+        Field("target_life_h", "number", "Required life of the drive [h]: the bearing pair's "
+              "system life and, with a [shaft] table, the shaft's fatigue life.",
               exclusive_minimum=0, example=5000),
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
@@ -191,8 +192,77 @@ LUBRICATION = Table(
                     doc="Give iso4406 for the oil methods or grease_cleanliness for grease."),),
 )
 
+SHAFT_SECTION = Table(
+    name="section",
+    array=True,
+    doc="A section of the wheel shaft to check: a shoulder fillet, a groove, a bearing seat "
+        "(repeat the block for each section).",
+    fields=(
+        Field("name", "string", "Name of the section (unique).", required=True,
+              example="flange fillet"),
+        Field("position_mm", "number", "Axial position of the section [mm], same axis as the "
+              "bearings and the wheel offset.", required=True, example=70),
+        Field("diameter_mm", "number", "Diameter of the solid shaft at the section [mm] (the "
+              "smaller diameter at a shoulder), 2.79-254 mm.", required=True,
+              exclusive_minimum=0, example=60),
+        Field("kt_bending", "number", "Stress-concentration factor Kt in bending (1: no notch).",
+              default=1.0, minimum=1, example=1.7),
+        Field("kt_torsion", "number", "Stress-concentration factor Kts in torsion (1: no notch).",
+              default=1.0, minimum=1, example=1.4),
+        Field("notch_sensitivity", "number", "Notch sensitivity q (Kf = 1 + q (Kt - 1)); "
+              "default 1 (Kf = Kt) unless notch_radius_mm is given.", minimum=0, maximum=1),
+        Field("notch_radius_mm", "number", "Notch (fillet) radius [mm]; q is then estimated "
+              "for steel by Neuber's equation.", exclusive_minimum=0, example=3),
+        Field("carries_torque", "boolean", "Whether the drive torque (tractive force x rolling "
+              "radius) passes through this section.", default=True, example=True),
+    ),
+    choices=(Choice("notch sensitivity", groups=(("notch_sensitivity",), ("notch_radius_mm",)),
+                    required=False,
+                    doc="Give notch_sensitivity or notch_radius_mm, not both."),),
+)
+
+SHAFT_PERMISSIBLE = Table(
+    name="permissible",
+    required=False,
+    doc="The motor supplier's curve of permissible radial wheel load against the position of "
+        "the load (same axis as the wheel offset); interpolated linearly, never extrapolated.",
+    fields=(
+        Field("load_position_mm", "number-list", "Positions of the curve's points [mm], "
+              "strictly increasing.", required=True, example=[0, 50, 100, 150]),
+        Field("radial_load_kN", "number-list", "Permissible radial wheel load at each position "
+              "[kN].", required=True, exclusive_minimum=0, example=[60, 45, 35, 28]),
+    ),
+)
+
+SHAFT = Table(
+    name="shaft",
+    required=False,
+    doc="Fatigue and yield check of the wheel (motor) shaft, steel, by the method of Shigley's "
+        "Mechanical Engineering Design, 10th ed.",
+    fields=(
+        Field("ultimate_strength_MPa", "number", "Tensile strength Sut of the shaft steel [MPa].",
+              required=True, exclusive_minimum=0, example=900),
+        Field("yield_strength_MPa", "number", "Yield strength Sy of the shaft steel [MPa].",
+              required=True, exclusive_minimum=0, example=700),
+        Field("surface", "string", "Surface finish at the checked sections (Marin surface "
+              "factor).", required=True, choices=("ground", "machined", "hot-rolled", "forged"),
+              example="machined"),
+        Field("temperature_C", "number", "Operating temperature of the shaft [deg C] (Marin "
+              "temperature factor; 1 up to 21 C).", minimum=-60, maximum=538),
+        Field("reliability_percent", "number", "Reliability of the endurance limit [%] (Marin "
+              "reliability factor; 50 = the mean endurance limit).", default=50.0, minimum=50,
+              exclusive_maximum=100, example=99),
+        Field("criterion", "string", "Fatigue criterion of the safety factor.",
+              default="goodman", choices=("goodman", "asme-elliptic")),
+        Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
+              "(default 1.5, common practice for shafts under well-known loads).",
+              default=1.5, exclusive_minimum=0),
+    ),
+    tables=(SHAFT_SECTION, SHAFT_PERMISSIBLE),
+)
+
 FORMAT = Table(
     name="",
     doc="A hubload load-case file.",
-    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, LUBRICATION, CASE),
+    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, LUBRICATION, CASE, SHAFT),
 )

@@ -35,7 +35,7 @@ CRITERIA = (GOODMAN, ASME_ELLIPTIC)
 
 @dataclass(frozen=True)
 class SectionLoads:
-    """Internal forces at a section per case [N m, N]; arrays end in the case axis."""
+    """Internal forces at a section per case [N m, N]; arrays of one shape, case axis last."""
 
     bending_nm: np.ndarray
     torque_nm: np.ndarray
@@ -43,22 +43,21 @@ class SectionLoads:
     shear_n: np.ndarray
 
 
-def section_axial_force_n(section_x_m, side_force_n, offset_m, outboard_x_m, inboard_x_m,
-                          arrangement):
+def section_axial_force_n(section_x_m, side_force_n, outboard_x_m, inboard_x_m, arrangement):
     """Axial force [N] in the shaft at a section, tension positive [3].
 
-    The wheel applies the external axial force at its centre plane; the bearing
-    of the pair that takes thrust in that direction reacts it (back-to-back: the
-    outboard bearing takes inboard push). Method of sections: the force is the sum
-    of the axial forces outboard of the section. Clamping forces inside the pair
-    (induced forces, nut preload) depend on the mounting and are not included.
+    The wheel's axial force enters the shaft at its flange, outboard of every
+    section; the bearing of the pair that takes thrust in that direction reacts
+    it (back-to-back: the outboard bearing takes inboard push). Method of
+    sections: the force is the sum of the axial forces outboard of the section.
+    Clamping forces inside the pair (induced forces, nut preload) depend on the
+    mounting and are not included.
     """
     external_n = statics.external_axial_force_n(side_force_n)
     outboard_takes_it = (external_n < 0) == tapered_pair.outboard_carries_inboard_push(arrangement)
     thrust_x_m = np.where(outboard_takes_it, outboard_x_m, inboard_x_m)
-    wheel_beyond = np.asarray(offset_m > section_x_m, dtype=float)
     bearing_beyond = np.asarray(thrust_x_m > section_x_m, dtype=float)
-    return external_n * (wheel_beyond - bearing_beyond)
+    return external_n * (1.0 - bearing_beyond)
 
 
 def section_loads(section_x_m, carries_torque, wheel_load_n, side_force_n, tractive_force_n,
@@ -66,18 +65,21 @@ def section_loads(section_x_m, carries_torque, wheel_load_n, side_force_n, tract
                   arrangement) -> SectionLoads:
     """Resultant bending moment, torque, axial and shear force at a section [1, 4].
 
-    The bending moments of both planes come from the rigid-shaft statics and are
-    added as vectors. Torque = tractive force x rolling radius where the section
-    carries the drive torque (``carries_torque``), else 0. Positions [m], forces [N].
+    The wheel is bolted to a flange at the shaft's outboard end, so the tyre
+    forces load every section, whichever side of it the wheel centre plane lies
+    (a dished wheel). The bending moments of both planes come from the
+    rigid-shaft statics and are added as vectors. Torque = tractive force x
+    rolling radius where the section carries the drive torque
+    (``carries_torque``), else 0. Positions [m], forces [N].
     """
     vertical_nm, horizontal_nm, shear_n = statics.section_moments(
         section_x_m, wheel_load_n, side_force_n, tractive_force_n, offset_m,
-        loaded_radius_m, outboard_x_m, inboard_x_m)
+        loaded_radius_m, outboard_x_m, inboard_x_m, wheel_beyond=True)
     torque_nm = np.asarray(carries_torque, dtype=float) * tractive_force_n * rolling_radius_m
-    axial_n = section_axial_force_n(section_x_m, side_force_n, offset_m, outboard_x_m,
-                                    inboard_x_m, arrangement)
-    return SectionLoads(bending_nm=np.hypot(vertical_nm, horizontal_nm),
-                        torque_nm=np.abs(torque_nm), axial_n=axial_n, shear_n=shear_n)
+    axial_n = section_axial_force_n(section_x_m, side_force_n, outboard_x_m, inboard_x_m,
+                                    arrangement)
+    return SectionLoads(*np.broadcast_arrays(np.hypot(vertical_nm, horizontal_nm),
+                                             np.abs(torque_nm), axial_n, shear_n))
 
 
 @dataclass(frozen=True)

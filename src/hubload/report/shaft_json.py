@@ -1,0 +1,121 @@
+"""JSON of the shaft check and the overall verdict (contract: docs/json-output.md).
+
+Adds ``shaft``, ``overall_verdict`` and, per case, ``permissible_utilisation``
+(ratio, 1 = 100 %) and the shaft's per-section values to the result document.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+
+from hubload.engine import Result
+from hubload.overall import overall_verdict
+from hubload.report import jsonout
+
+KN = 1e3
+MPA = 1e6
+MM = 1e-3
+
+
+def case_name(result: Result, value, index) -> str | None:
+    """The case's name where ``value`` is finite (a minimum over the cases), else None."""
+    return result.study.cases.names[int(index)] if np.isfinite(value) else None
+
+
+def section_summary(result: Result, given, section) -> dict:
+    marin = section.marin
+    return {
+        "name": section.name,
+        "position_mm": jsonout.number(given.position_m / MM),
+        "diameter_mm": jsonout.number(given.diameter_m / MM),
+        "kf_bending": jsonout.number(section.kf_bending),
+        "kf_torsion": jsonout.number(section.kf_torsion),
+        "marin": {key: jsonout.number(value) for key, value in (
+            ("ka", marin.surface), ("kb", marin.size), ("kc", marin.load),
+            ("kd", marin.temperature), ("ke", marin.reliability))},
+        "endurance_limit_MPa": jsonout.number(section.endurance_pa / MPA),
+        "min_safety": jsonout.number(section.min_safety),
+        "min_safety_case": case_name(result, section.min_safety, section.min_safety_case),
+        "yield_safety": jsonout.number(section.yield_safety),
+        "yield_safety_case": case_name(result, section.yield_safety, section.yield_case),
+        "fatigue_life_h": jsonout.number(section.fatigue_life_h),
+        "fatigue_life_km": jsonout.number(section.fatigue_life_km),
+        "infinite_life": bool(np.isinf(section.fatigue_life_h)),
+    }
+
+
+def permissible_summary(result: Result) -> dict | None:
+    permissible = result.shaft.permissible
+    if permissible is None:
+        return None
+    return {"load_position_mm": jsonout.number(permissible.position_m / MM),
+            "inside_curve": bool(permissible.inside),
+            "permissible_radial_load_kN": jsonout.number(permissible.permissible_n / KN)}
+
+
+def shaft_summary(result: Result) -> dict | None:
+    shaft = result.shaft
+    if shaft is None:
+        return None
+    material = result.study.shaft
+    return {
+        "method": "Shigley's Mechanical Engineering Design, 10th ed.",
+        "criterion": shaft.criterion,
+        "required_safety": shaft.required_safety,
+        "ultimate_strength_MPa": jsonout.number(material.ultimate_pa / MPA),
+        "yield_strength_MPa": jsonout.number(material.yield_pa / MPA),
+        "fatigue_strength_fraction": jsonout.number(shaft.fatigue_strength_fraction),
+        "sections": [section_summary(result, given, section)
+                     for given, section in zip(material.sections, shaft.sections)],
+        "permissible": permissible_summary(result),
+    }
+
+
+def case_section(section, index: int) -> dict:
+    return {
+        "bending_Nm": jsonout.number(section.loads.bending_nm[index]),
+        "torque_Nm": jsonout.number(section.loads.torque_nm[index]),
+        "axial_kN": jsonout.number(section.loads.axial_n[index] / KN),
+        "stress_amplitude_MPa": jsonout.number(section.stresses.alternating_pa[index] / MPA),
+        "stress_mean_MPa": jsonout.number(section.stresses.mean_pa[index] / MPA),
+        "safety": jsonout.number(section.safety[index]),
+        "yield_safety": jsonout.number(section.case_yield_safety[index]),
+        "life_h": jsonout.number(section.case_life_h[index]),
+        "damage_share": jsonout.number(section.damage_share[index]),
+    }
+
+
+def extend_cases(document: dict, result: Result) -> None:
+    shaft = result.shaft
+    permissible = None if shaft is None else shaft.permissible
+    for index, entry in enumerate(document["cases"]):
+        entry["permissible_utilisation"] = (
+            None if permissible is None else jsonout.number(permissible.utilisation[index]))
+        if permissible is not None:
+            entry["radial_wheel_force_kN"] = jsonout.number(
+                permissible.radial_wheel_force_n[index] / KN)
+        if shaft is not None:
+            entry["shaft"] = {section.name: case_section(section, index)
+                              for section in shaft.sections}
+
+
+def optional_number(value) -> float | None:
+    return None if value is None else jsonout.number(value)
+
+
+def verdict_summary(result: Result) -> dict | None:
+    found = overall_verdict(result)
+    if found is None:
+        return None
+    items = [{"item": item.name, "value": optional_number(item.value), "limit": item.limit,
+              "load_margin": optional_number(item.margin), "passed": item.passed}
+             for item in found.items]
+    worst = found.items.index(found.worst)
+    return {"passed": found.passed, "worst": items[worst], "items": items}
+
+
+def extend_document(document: dict, result: Result) -> None:
+    """Add the shaft check and the overall verdict to a result document (in place)."""
+    extend_cases(document, result)
+    document["shaft"] = shaft_summary(result)
+    document["overall_verdict"] = verdict_summary(result)

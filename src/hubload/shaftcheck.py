@@ -1,0 +1,197 @@
+"""Engine of the shaft check: sections -> loads -> stresses -> safety and life; supplier curve.
+
+The same rigid-shaft statics as the bearings feed it. Per-case arrays end in the
+case axis; study fields may carry leading batch axes (parameter studies), which
+broadcast through every step. Method: docs/shaft.md.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+from hubload.casefile.study import PermissibleCurve, Shaft, ShaftSection, Study
+from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
+from hubload.model.kinematics import distance_km
+from hubload.model.shaft import fatigue, strength, stress
+from hubload.modified_life import per_study
+
+MM = 1e-3
+
+
+@dataclass(frozen=True)
+class SectionResult:
+    """One section over the duty spectrum. Fatigue safety is NaN for standstill cases
+    (no stress cycles); their stresses count for first-cycle yield only. Per-case
+    arrays end in the case axis; the rest is per study (batch axes only)."""
+
+    name: str
+    kf_bending: np.ndarray
+    kf_torsion: np.ndarray
+    marin: strength.MarinFactors
+    endurance_pa: np.ndarray
+    loads: stress.SectionLoads
+    stresses: stress.SectionStresses
+    safety: np.ndarray
+    case_yield_safety: np.ndarray
+    case_life_h: np.ndarray
+    damage_share: np.ndarray
+    min_safety: np.ndarray
+    min_safety_case: np.ndarray
+    yield_safety: np.ndarray
+    yield_case: np.ndarray
+    fatigue_life_h: np.ndarray
+    fatigue_life_km: np.ndarray
+    sn_exponent: np.ndarray          # -1/b of the S-N line: life ~ stress^-k
+
+
+@dataclass(frozen=True)
+class PermissibleResult:
+    """The supplier's curve read at the wheel offset; NaN where the offset is off the curve."""
+
+    position_m: np.ndarray           # the wheel offset, per study
+    inside: np.ndarray
+    permissible_n: np.ndarray
+    radial_wheel_force_n: np.ndarray
+    utilisation: np.ndarray
+
+
+@dataclass(frozen=True)
+class ShaftResult:
+    criterion: str
+    required_safety: float
+    fatigue_strength_fraction: np.ndarray
+    sections: tuple[SectionResult, ...]
+    permissible: PermissibleResult | None
+
+
+def notch_factors(shaft: Shaft, section: ShaftSection):
+    """(Kf, Kfs): q as given, from the notch radius (Neuber), or 1 (Kf = Kt, conservative)."""
+    def sensitivity(torsion: bool):
+        if section.notch_sensitivity is not None:
+            return section.notch_sensitivity
+        if section.notch_radius_m is not None:
+            return strength.notch_sensitivity(section.notch_radius_m, shaft.ultimate_pa, torsion)
+        return 1.0
+    return (strength.fatigue_notch_factor(section.kt_bending, sensitivity(False)),
+            strength.fatigue_notch_factor(section.kt_torsion, sensitivity(True)))
+
+
+def lowest(values, rotating):
+    """Smallest value over the case axis among the rotating cases, and its case index."""
+    masked = np.where(rotating, values, np.inf)
+    return np.min(masked, axis=-1), np.argmin(masked, axis=-1)
+
+
+def section_result(study: Study, section: ShaftSection, fraction, mean_speed_rpm) -> SectionResult:
+    shaft, cases, wheel, pair = study.shaft, study.cases, study.wheel, study.pair
+    kf, kfs = notch_factors(shaft, section)
+    marin = strength.marin_factors(shaft.ultimate_pa, shaft.surface, section.diameter_m,
+                                   shaft.temperature_c, shaft.reliability_percent)
+    endurance_pa = strength.endurance_limit_pa(shaft.ultimate_pa, marin)
+    loads = stress.section_loads(
+        section.position_m, section.carries_torque, cases.wheel_load_n, cases.side_force_n,
+        cases.tractive_force_n, wheel.offset_m, wheel.loaded_radius_m, wheel.rolling_radius_m,
+        pair.outboard.position_m, pair.inboard.position_m, pair.arrangement)
+    stresses = stress.von_mises_stresses(loads, section.diameter_m, kf, kfs)
+    rotating = cases.speed_rpm > 0
+    safety = np.where(rotating, stress.fatigue_safety(
+        stresses, endurance_pa, shaft.ultimate_pa, shaft.yield_pa, shaft.criterion), np.nan)
+    case_yield = stress.yield_safety(stresses, shaft.yield_pa)
+    _, sn_slope = fatigue.basquin_constants(shaft.ultimate_pa, endurance_pa, fraction)
+    cycles = fatigue.cycles_to_failure(
+        fatigue.equivalent_reversed_stress_pa(stresses.alternating_pa, stresses.mean_pa,
+                                              shaft.ultimate_pa),
+        shaft.ultimate_pa, endurance_pa, fraction)
+    case_life_h = fatigue.case_life_h(cycles, cases.speed_rpm)
+    damage = damage_rate_per_hour(cases.time_fraction, case_life_h)
+    life_h = spectrum_life_h(damage)
+    min_safety, min_case = lowest(safety, rotating)
+    yield_safety, yield_case = lowest(case_yield, True)
+    return SectionResult(
+        name=section.name, kf_bending=per_study(kf), kf_torsion=per_study(kfs),
+        marin=strength.MarinFactors(**{key: per_study(value)
+                                       for key, value in vars(marin).items()}),
+        endurance_pa=per_study(endurance_pa),
+        loads=loads, stresses=stresses, safety=safety, case_yield_safety=case_yield,
+        case_life_h=case_life_h, damage_share=damage_shares(damage), min_safety=min_safety,
+        min_safety_case=min_case, yield_safety=yield_safety, yield_case=yield_case,
+        fatigue_life_h=life_h,
+        fatigue_life_km=distance_km(life_h, mean_speed_rpm, wheel.rolling_radius_m),
+        sn_exponent=per_study(-1.0 / sn_slope))
+
+
+def read_curve(position_m, curve: PermissibleCurve):
+    """Permissible load [N] at ``position_m`` (per study), linear between the curve's
+    points, NaN outside the curve (no extrapolation). Curves may carry batch axes."""
+    x = np.asarray(position_m, dtype=float)[..., None]
+    xp, fp = curve.load_position_m, curve.radial_load_n
+    load = np.full(np.broadcast_shapes(x.shape[:-1], xp.shape[:-1]), np.nan)
+    for k in range(xp.shape[-1] - 1):
+        x0, x1 = xp[..., k:k + 1], xp[..., k + 1:k + 2]
+        f0, f1 = fp[..., k:k + 1], fp[..., k + 1:k + 2]
+        on_segment = ((x >= x0) & (x <= x1))[..., 0]
+        load = np.where(on_segment, (f0 + (f1 - f0) * (x - x0) / (x1 - x0))[..., 0], load)
+    return load
+
+
+def permissible_result(study: Study) -> PermissibleResult | None:
+    """Utilisation of the supplier's curve per case: resultant radial wheel force
+    (wheel load and tractive force) over the permissible load at the wheel offset.
+    Linear interpolation inside the curve; outside it nothing is assessed (NaN)."""
+    curve = study.shaft.permissible
+    if curve is None:
+        return None
+    offset = per_study(study.wheel.offset_m)
+    permissible = read_curve(offset, curve)
+    radial = np.hypot(study.cases.wheel_load_n, study.cases.tractive_force_n)
+    return PermissibleResult(position_m=offset, inside=np.isfinite(permissible),
+                             permissible_n=permissible, radial_wheel_force_n=radial,
+                             utilisation=radial / permissible[..., None])
+
+
+def evaluate_shaft(study: Study, mean_speed_rpm) -> ShaftResult | None:
+    """The shaft check of a study, or None when the file has no [shaft] table.
+
+    ``mean_speed_rpm`` [r/min], the spectrum's time-weighted mean, turns lives into km.
+    """
+    if study.shaft is None:
+        return None
+    fraction = strength.fatigue_strength_fraction(study.shaft.ultimate_pa)
+    return ShaftResult(
+        criterion=study.shaft.criterion, required_safety=per_study(study.shaft.required_safety),
+        fatigue_strength_fraction=per_study(fraction),
+        sections=tuple(section_result(study, section, fraction, mean_speed_rpm)
+                       for section in study.shaft.sections),
+        permissible=permissible_result(study))
+
+
+def shaft_warnings(study: Study, result: ShaftResult | None) -> list[str]:
+    """Plain-language warnings for a single study (no parameter arrays)."""
+    if result is None or any(np.ndim(section.fatigue_life_h) for section in result.sections):
+        return []
+    warnings = []
+    inboard_mm = float(study.pair.inboard.position_m) / MM
+    for section in study.shaft.sections:
+        if float(section.position_m) <= inboard_mm:
+            warnings.append(
+                f"Shaft section '{section.name}' lies inboard of both bearings: only the drive "
+                f"torque acts there, no bending. Check its position_mm (positive outboard).")
+    permissible = result.permissible
+    if permissible is None:
+        return warnings
+    curve = study.shaft.permissible
+    if not bool(permissible.inside):
+        warnings.append(
+            f"The wheel offset ({float(permissible.position_m) / MM:g} mm) lies outside the "
+            f"supplier's permissible-load curve ({curve.load_position_m[0] / MM:g} to "
+            f"{curve.load_position_m[-1] / MM:g} mm). The curve is not extrapolated: the "
+            f"permissible load is not assessed. Ask the supplier for this position.")
+        return warnings
+    over = [f"'{name}' ({100 * u:.0f} %)" for name, u in
+            zip(study.cases.names, permissible.utilisation) if u > 1.0]
+    if over:
+        warnings.append(f"The radial wheel force exceeds the supplier's permissible load in "
+                        f"case(s) {', '.join(over)}.")
+    return warnings
