@@ -117,7 +117,7 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
         {label: b.case_life_h for label, b in bearings.items()},
         lambda life_h: per_study_km(life_h, mean_rpm, study))
     single = np.ndim(system_h) == 0 and (modified is None or np.ndim(modified.system_life_h) == 0)
-    shaft = shaftcheck.evaluate_shaft(study, mean_rpm)
+    shaft = shaftcheck.evaluate_shaft(study, lambda life_h: per_study_km(life_h, mean_rpm, study))
     return Result(
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),

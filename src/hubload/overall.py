@@ -61,13 +61,14 @@ class OverallVerdict:
 
 def shaft_items(result: Result) -> list[CheckItem]:
     shaft, target = result.shaft, result.study.target_life_h
+    required = float(shaft.required_safety)
     items = []
     for section in shaft.sections:
         name = section.name
         items.append(CheckItem(f"shaft '{name}' fatigue safety ({shaft.criterion})",
-                               float(section.min_safety), shaft.required_safety))
+                               float(section.min_safety), required))
         items.append(CheckItem(f"shaft '{name}' yield safety", float(section.yield_safety),
-                               shaft.required_safety))
+                               required))
         if target is not None:
             items.append(CheckItem(f"shaft '{name}' fatigue life", float(section.fatigue_life_h),
                                    target, "h", life_exponent=float(section.sn_exponent)))

@@ -13,7 +13,6 @@ import numpy as np
 
 from hubload.casefile.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
-from hubload.model.kinematics import distance_km
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.modified_life import per_study
 
@@ -84,7 +83,7 @@ def lowest(values, rotating):
     return np.min(masked, axis=-1), np.argmin(masked, axis=-1)
 
 
-def section_result(study: Study, section: ShaftSection, fraction, mean_speed_rpm) -> SectionResult:
+def section_result(study: Study, section: ShaftSection, fraction, to_km) -> SectionResult:
     shaft, cases, wheel, pair = study.shaft, study.cases, study.wheel, study.pair
     kf, kfs = notch_factors(shaft, section)
     marin = strength.marin_factors(shaft.ultimate_pa, shaft.surface, section.diameter_m,
@@ -118,7 +117,7 @@ def section_result(study: Study, section: ShaftSection, fraction, mean_speed_rpm
         case_life_h=case_life_h, damage_share=damage_shares(damage), min_safety=min_safety,
         min_safety_case=min_case, yield_safety=yield_safety, yield_case=yield_case,
         fatigue_life_h=life_h,
-        fatigue_life_km=distance_km(life_h, mean_speed_rpm, wheel.rolling_radius_m),
+        fatigue_life_km=to_km(life_h),
         sn_exponent=per_study(-1.0 / sn_slope))
 
 
@@ -151,10 +150,10 @@ def permissible_result(study: Study) -> PermissibleResult | None:
                              utilisation=radial / permissible[..., None])
 
 
-def evaluate_shaft(study: Study, mean_speed_rpm) -> ShaftResult | None:
+def evaluate_shaft(study: Study, to_km) -> ShaftResult | None:
     """The shaft check of a study, or None when the file has no [shaft] table.
 
-    ``mean_speed_rpm`` [r/min], the spectrum's time-weighted mean, turns lives into km.
+    ``to_km`` turns per-study lives [h] into distances [km] (the engine's rule).
     """
     if study.shaft is None:
         return None
@@ -162,7 +161,7 @@ def evaluate_shaft(study: Study, mean_speed_rpm) -> ShaftResult | None:
     return ShaftResult(
         criterion=study.shaft.criterion, required_safety=per_study(study.shaft.required_safety),
         fatigue_strength_fraction=per_study(fraction),
-        sections=tuple(section_result(study, section, fraction, mean_speed_rpm)
+        sections=tuple(section_result(study, section, fraction, to_km)
                        for section in study.shaft.sections),
         permissible=permissible_result(study))
 

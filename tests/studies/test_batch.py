@@ -35,6 +35,10 @@ def assert_same(batched, single) -> None:
         assert batched.keys() == single.keys()
         for key in single:
             assert_same(batched[key], single[key])
+    elif isinstance(single, (list, tuple)):
+        assert len(batched) == len(single)
+        for batched_item, single_item in zip(batched, single):
+            assert_same(batched_item, single_item)
     elif isinstance(single, (np.ndarray, float)):
         assert np.shape(batched) == np.shape(single)
         np.testing.assert_allclose(batched, single, rtol=1e-13)

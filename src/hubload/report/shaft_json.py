@@ -61,7 +61,7 @@ def shaft_summary(result: Result) -> dict | None:
     return {
         "method": "Shigley's Mechanical Engineering Design, 10th ed.",
         "criterion": shaft.criterion,
-        "required_safety": shaft.required_safety,
+        "required_safety": jsonout.number(shaft.required_safety),
         "ultimate_strength_MPa": jsonout.number(material.ultimate_pa / MPA),
         "yield_strength_MPa": jsonout.number(material.yield_pa / MPA),
         "fatigue_strength_fraction": jsonout.number(shaft.fatigue_strength_fraction),

@@ -61,7 +61,7 @@ def toml_value(value: Any) -> str:
         return "true" if value else "false"
     if isinstance(value, str):
         return f'"{value}"'
-    if isinstance(value, list):
+    if isinstance(value, (list, tuple)):
         return "[" + ", ".join(toml_value(v) for v in value) + "]"
     return f"{value:g}" if isinstance(value, float) else str(value)
 

@@ -228,9 +228,9 @@ SHAFT_PERMISSIBLE = Table(
         "the load (same axis as the wheel offset); interpolated linearly, never extrapolated.",
     fields=(
         Field("load_position_mm", "number-list", "Positions of the curve's points [mm], "
-              "strictly increasing.", required=True, example=[0, 50, 100, 150]),
+              "strictly increasing.", required=True, example=(0, 50, 100, 150)),
         Field("radial_load_kN", "number-list", "Permissible radial wheel load at each position "
-              "[kN].", required=True, exclusive_minimum=0, example=[60, 45, 35, 28]),
+              "[kN].", required=True, exclusive_minimum=0, example=(60, 45, 35, 28)),
     ),
 )
 
