@@ -145,9 +145,11 @@ def permissible_result(study: Study) -> PermissibleResult | None:
     offset = per_study(study.wheel.offset_m)
     permissible = read_curve(offset, curve)
     radial = np.hypot(study.cases.wheel_load_n, study.cases.tractive_force_n)
+    utilisation = radial / permissible[..., None]
     return PermissibleResult(position_m=offset, inside=np.isfinite(permissible),
-                             permissible_n=permissible, radial_wheel_force_n=radial,
-                             utilisation=radial / permissible[..., None])
+                             permissible_n=permissible,
+                             radial_wheel_force_n=np.broadcast_to(radial, utilisation.shape),
+                             utilisation=utilisation)
 
 
 def evaluate_shaft(study: Study, to_km) -> ShaftResult | None:

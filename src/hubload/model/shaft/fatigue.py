@@ -45,7 +45,7 @@ def cycles_to_failure(reversed_pa, ultimate_pa, endurance_pa, fraction):
     """Cycles to failure N at a fully reversed stress [Pa] [2, 3].
 
     Infinite at or below Se; the Basquin line down to 10^3 cycles (f Sut); the
-    low-cycle line [3] above f Sut (N < 1 above Sut: failure in the first cycle).
+    low-cycle line [3] above f Sut; one cycle at or above Sut (the first cycle breaks it).
     """
     stress = np.asarray(reversed_pa, dtype=float)
     a, b = basquin_constants(ultimate_pa, endurance_pa, fraction)
@@ -54,7 +54,7 @@ def cycles_to_failure(reversed_pa, ultimate_pa, endurance_pa, fraction):
     with np.errstate(over="ignore", divide="ignore"):
         high_cycle = np.power(positive / a, 1.0 / b)
         low_cycle = np.power(positive / ultimate_pa, 3.0 / np.log10(fraction))
-    finite = np.where(stress > knee_pa, low_cycle, high_cycle)
+    finite = np.where(stress > knee_pa, np.maximum(low_cycle, 1.0), high_cycle)
     return np.where(stress <= endurance_pa, np.inf, finite)
 
 
