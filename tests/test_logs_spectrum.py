@@ -206,3 +206,27 @@ def test_slow_samples_below_kappa_0_1_are_reported_as_a_share_of_time(tmp_path):
     document = spectrum_json(log, "--case-file", YARD_LOADER)
     assert document["flags_time_fraction"]["kappa_outside_scope"] == pytest.approx(0.25)
     assert any("kappa < 0.1" in warning for warning in document["warnings"])
+
+
+def test_shaft_sections_over_a_log_match_the_shaft_check_of_the_same_cases(
+        tmp_path, write_case_file):
+    # the shaft check of `check` on the same two cases is the reference; the harsh
+    # case (side force outboard, high traction) gives the sections a finite life
+    document = tomllib.loads(YARD_LOADER.read_text())
+    cases = [{"time_percent": 30, "wheel_load_kN": 30, "side_force_kN": -12,
+              "tractive_force_kN": 15, "speed_rpm": 60},
+             {"time_percent": 70, "wheel_load_kN": 12, "tractive_force_kN": 2, "speed_rpm": 90}]
+    document["case"] = [{"name": f"case {i}", **case} for i, case in enumerate(cases)]
+    case_file = write_case_file(document)
+    checked = json.loads(CliRunner().invoke(main, ["check", case_file, "--json"]).output)
+    log = write_log(tmp_path / "harsh.csv", spectrum_log(cases, seconds=100))
+    found = spectrum_json(log, "--case-file", case_file)
+    for want, got, classed in zip(checked["shaft"]["sections"],
+                                  found["shaft"]["direct"]["sections"],
+                                  found["shaft"]["classed"]["sections"]):
+        assert got["name"] == want["name"]
+        assert got["fatigue_life_h"] == pytest.approx(want["fatigue_life_h"], rel=1e-9)
+        assert classed["fatigue_life_h"] == pytest.approx(want["fatigue_life_h"], rel=1e-9)
+        assert got["min_safety"] == pytest.approx(want["min_safety"], rel=1e-12)
+        assert got["yield_safety"] == pytest.approx(want["yield_safety"], rel=1e-12)
+    assert any("lowest fatigue safety" in warning for warning in found["warnings"])

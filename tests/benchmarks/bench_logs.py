@@ -44,12 +44,13 @@ def reader_only(path: Path) -> dict:
 
 
 def full_pass(path: Path) -> dict:
-    """process_log's loop with timers around its stages (same functions, same order)."""
+    """process_log's loop with timers around its stages (same functions, same order;
+    the shaft check of the demo file included)."""
     import numpy as np
 
     from hubload.casefile.machine import load_machine
     from hubload.engine import evaluate
-    from hubload.logs import pipeline
+    from hubload.logs import pipeline, shaft
     from hubload.logs.clean import Cleaner
     from hubload.logs.columns import plan_columns
     from hubload.logs.reader import headers, read_chunks
@@ -63,7 +64,8 @@ def full_pass(path: Path) -> dict:
     start = time.perf_counter()
     plan = plan_columns(headers(path), {}, str(path))
     cleaner = Cleaner(str(path), plan.headers)
-    table = dwell.empty_table(len(pipeline.CLASS_CHANNELS), len(pipeline.WEIGHTS),
+    weight_names = pipeline.WEIGHTS + shaft.damage_names(study)
+    table = dwell.empty_table(len(pipeline.CLASS_CHANNELS), len(weight_names),
                               pipeline.MIN_EXPONENTS)
     classes = pipeline.LogOptions().classes
     stream = cleaner.run(read_chunks(path, plan.headers))
@@ -78,7 +80,7 @@ def full_pass(path: Path) -> dict:
         result = evaluate(with_cases(study, cases), with_warnings=False)
         hold_h = samples.hold_s / pipeline.SECONDS_PER_HOUR
         damages = [iso281.damage_rate_per_hour(hold_h, life) for life in
-                   pipeline.case_lives(result)]
+                   pipeline.case_lives(result)] + shaft.sample_damages(result, hold_h)
         np.max(result.bearings["outboard"].static_equivalent_n)
         now = time.perf_counter()
         spent["direct damage (engine)"] += now - mark
@@ -89,7 +91,7 @@ def full_pass(path: Path) -> dict:
     spent["read and clean"] += time.perf_counter() - mark
     total = time.perf_counter() - start
     summary = pipeline.LogSummary(str(path), plan, cleaner.report, table,
-                                  dict.fromkeys(pipeline.LABELS, 0.0), {})
+                                  dict.fromkeys(pipeline.LABELS, 0.0), {}, weights=weight_names)
     now = time.perf_counter()
     result = spectrum_result(summary, study)
     spent["lives and classed spectrum"] = time.perf_counter() - now

@@ -8,6 +8,7 @@ by the chunk size and the number of occupied classes; there is no loop per row.
 
 from __future__ import annotations
 
+import functools
 from dataclasses import dataclass, field
 from pathlib import Path
 
@@ -17,6 +18,7 @@ from hubload.casefile.study import Study
 from hubload.engine import evaluate
 from hubload.errors import InputError
 from hubload.logs.clean import Cleaner, CleaningReport
+from hubload.logs import shaft
 from hubload.logs.columns import ColumnPlan, plan_columns
 from hubload.logs.reader import headers, read_chunks
 from hubload.logs.samples import (FLAGS, flag_time_s, operating_points, sample_cases,
@@ -66,9 +68,11 @@ class LogSummary:
     peak_static_load_n: dict[str, float]
     flag_time_s: dict[str, float]
     logged_temperature: bool = False
+    weights: tuple[str, ...] = WEIGHTS               # names of the table's sums, in order
+    shaft: dict[str, np.ndarray] | None = None      # shaft.chunk_extremes over the log
 
     def total(self, weight: str) -> float:
-        return float(np.sum(self.table.sums[WEIGHTS.index(weight)]))
+        return float(np.sum(self.table.sums[self.weights.index(weight)]))
 
     @property
     def duration_h(self) -> float:
@@ -102,8 +106,10 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
                         has_motor=study.motor is not None, has_vehicle=study.vehicle is not None,
                         has_lubrication=study.lubrication is not None)
     cleaner = Cleaner(str(path), plan.headers, options.gaps, options.max_gap_s)
-    table = dwell.empty_table(len(CLASS_CHANNELS), len(WEIGHTS), MIN_EXPONENTS)
+    weight_names = WEIGHTS + shaft.damage_names(study)
+    table = dwell.empty_table(len(CLASS_CHANNELS), len(weight_names), MIN_EXPONENTS)
     peak = dict.fromkeys(LABELS, 0.0)
+    shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
     for samples in cleaner.run(read_chunks(path, plan.headers)):
         points = operating_points(samples, plan, study, str(path))
@@ -114,7 +120,8 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
         result = evaluate(with_cases(study, cases, temperature_c), with_warnings=False)
         hold_h = samples.hold_s / SECONDS_PER_HOUR
         damages = [iso281.damage_rate_per_hour(hold_h, life_h)
-                   for life_h in case_lives(result)]
+                   for life_h in case_lives(result)] + shaft.sample_damages(result, hold_h)
+        shaft_extremes = shaft.worst(shaft_extremes, shaft.chunk_extremes(result))
         flagged[KAPPA_FLAG] += kappa_outside_time_s(result, samples.hold_s)
         for label in LABELS:
             peak[label] = max(peak[label], float(np.max(
@@ -125,7 +132,8 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
                       peak_static_load_n=peak, flag_time_s=flagged,
-                      logged_temperature="temperature_C" in plan.headers)
+                      logged_temperature="temperature_C" in plan.headers,
+                      weights=weight_names, shaft=shaft_extremes)
 
 
 def case_lives(result) -> list[np.ndarray]:
@@ -147,7 +155,8 @@ def kappa_outside_time_s(result, hold_s: np.ndarray) -> float:
 
 def class_inputs(cases, hold_s: np.ndarray, temperature_c: np.ndarray,
                  damages: list[np.ndarray]):
-    """Classed values (kN, r/min) and the per-sample weights in the order of WEIGHTS.
+    """Classed values (kN, r/min) and the per-sample weights in the order of WEIGHTS
+    (then the shaft sections' damage).
 
     Forces enter the revolution-weighted sums as |F|^p (p = 10/3, the roller
     bearing life exponent) so that a class level can be their damage-equivalent
@@ -177,4 +186,6 @@ def merge_summaries(name: str, summaries: list[LogSummary],
                for flag in summaries[0].flag_time_s}
     return LogSummary(name=name, plan=None, cleaning=cleaning, table=table,
                       peak_static_load_n=peak, flag_time_s=flagged,
-                      logged_temperature=any(s.logged_temperature for s in summaries))
+                      logged_temperature=any(s.logged_temperature for s in summaries),
+                      weights=summaries[0].weights,
+                      shaft=functools.reduce(shaft.worst, (s.shaft for s in summaries)))

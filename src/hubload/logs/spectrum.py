@@ -27,8 +27,8 @@ import numpy as np
 
 from hubload.casefile.study import Cases, Study
 from hubload.engine import Result, evaluate
-from hubload.logs.pipeline import (CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT,
-                                   WEIGHTS, LogSummary)
+from hubload.logs import shaft
+from hubload.logs.pipeline import CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT, LogSummary
 from hubload.logs.samples import with_cases
 from hubload.model import dwell, iso281
 
@@ -61,10 +61,11 @@ class SpectrumResult:
     modified_life_h: dict[str, float] | None = None   # L10m (Lnm), with [lubrication]
     modified_system_life_h: float | None = None
     modified_classing_error: float | None = None
+    shaft_life_h: list[float] | None = None          # fatigue life per section, with [shaft]
 
 
 def sums(summary: LogSummary) -> dict[str, np.ndarray]:
-    return dict(zip(WEIGHTS, summary.table.sums))
+    return dict(zip(summary.weights, summary.table.sums))
 
 
 def class_order(summary: LogSummary) -> np.ndarray:
@@ -130,7 +131,7 @@ def class_names(table: dwell.DwellTable, order: np.ndarray) -> tuple[str, ...]:
 def class_shares(summary: LogSummary, channel: int, weights: dict[str, float]) -> list[ClassShare]:
     """Share of time and of the pair's direct damage in each class of one channel."""
     keys, marginal_sums = dwell.marginal(summary.table, channel)
-    cell = dict(zip(WEIGHTS, marginal_sums))
+    cell = dict(zip(summary.weights, marginal_sums))
     width = summary.table.widths[channel]
     total_time = np.sum(cell["time_s"])
     damage = sum(weights[label] * cell[f"damage_{label}"] for label in LABELS)
@@ -174,7 +175,9 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
         summary=summary, damage=damage, life_h=life_h, system_life_h=system_h,
         static_safety=static_safety, classed=classed,
         classing_error=relative_error(float(classed.system_life_h), system_h),
-        shares=shares, warnings=static_warnings(static_safety) + flag_warnings(summary))
+        shares=shares, shaft_life_h=shaft_lives(summary, study),
+        warnings=static_warnings(static_safety) + flag_warnings(summary)
+        + shaft_warnings(summary, study))
     return with_modified_lives(result) if classed.modified is not None else result
 
 
@@ -189,6 +192,30 @@ def with_modified_lives(result: SpectrumResult) -> SpectrumResult:
     classed_h = float(result.classed.modified.system_life_h)
     return dataclasses.replace(result, modified_life_h=modified_h, modified_system_life_h=system_h,
                                modified_classing_error=relative_error(classed_h, system_h))
+
+
+def shaft_lives(summary: LogSummary, study: Study) -> list[float] | None:
+    """Direct fatigue life [h] of each shaft section; inf when no sample reaches the
+    endurance limit (Shigley: no damage below it)."""
+    if study.shaft is None:
+        return None
+    duration_h = summary.duration_h
+    return [duration_h / damage if damage > 0 else float("inf")
+            for damage in (summary.total(name) for name in shaft.damage_names(study))]
+
+
+def shaft_warnings(summary: LogSummary, study: Study) -> list[str]:
+    if summary.shaft is None:
+        return []
+    found = [f"Shaft section '{section.name}': lowest fatigue safety {safety:.2f} in the log, "
+             f"below the required {study.shaft.required_safety:g}."
+             for section, safety in zip(study.shaft.sections, summary.shaft["min_safety"])
+             if safety < study.shaft.required_safety]
+    utilisation = float(summary.shaft["max_utilisation"][0])
+    if utilisation > 1.0:
+        found.append(f"The radial wheel force reaches {100 * utilisation:.0f} % of the "
+                     "supplier's permissible load in the log.")
+    return found
 
 
 def relative_error(classed_h: float, direct_h: float) -> float | None:

@@ -45,6 +45,23 @@ def direct_entry(result: SpectrumResult) -> dict:
     }
 
 
+def shaft_entries(result: SpectrumResult) -> dict:
+    """``shaft`` blocks of direct and classed (empty without [shaft])."""
+    if result.shaft_life_h is None:
+        return {}
+    study_shaft = result.classed.study.shaft
+    extremes = result.summary.shaft
+    direct = {"sections": [{
+        "name": section.name, "fatigue_life_h": number(life),
+        "min_safety": number(extremes["min_safety"][i]),
+        "yield_safety": number(extremes["yield_safety"][i]),
+    } for i, (section, life) in enumerate(zip(study_shaft.sections, result.shaft_life_h))],
+        "max_permissible_utilisation": number(extremes["max_utilisation"][0])}
+    classed = {"sections": [{"name": s.name, "fatigue_life_h": number(s.fatigue_life_h)}
+                            for s in result.classed.shaft.sections]}
+    return {"direct": direct, "classed": classed}
+
+
 def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
     classed = result.classed
     cases = classed.study.cases
@@ -85,6 +102,7 @@ def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None)
         "cleaning": cleaning_entry(result, policy),
         "direct": direct_entry(result),
         "classed": classed_entry(result, spectrum_file),
+        **({} if result.shaft_life_h is None else {"shaft": shaft_entries(result)}),
         "classing_error": None if result.classing_error is None
         else number(result.classing_error),
         **({} if result.modified_life_h is None else {

@@ -38,6 +38,21 @@ def lives_table(result: SpectrumResult) -> Table:
     return table
 
 
+def shaft_table(result: SpectrumResult) -> Table | None:
+    if result.shaft_life_h is None:
+        return None
+    extremes = result.summary.shaft
+    table = Table(title="Shaft sections over the log", title_justify="left")
+    for heading in ("section", "direct fatigue life h", "classed fatigue life h",
+                    "lowest safety", "yield safety"):
+        table.add_column(heading, justify="left" if heading == "section" else "right")
+    for i, (section, life) in enumerate(zip(result.classed.shaft.sections,
+                                            result.shaft_life_h)):
+        table.add_row(section.name, hours(life), hours(section.fatigue_life_h),
+                      f"{extremes['min_safety'][i]:.2f}", f"{extremes['yield_safety'][i]:.2f}")
+    return table
+
+
 def shares_table(result: SpectrumResult, key: str, title: str, unit: str) -> Table:
     table = Table(title=title, title_justify="left")
     for heading in (f"class {unit}", "time", "damage"):
@@ -97,6 +112,9 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
         console.print(f"  {line}")
     console.print(lives_table(result))
     console.print(error_line(result))
+    shaft = shaft_table(result)
+    if shaft is not None:
+        console.print(shaft)
     console.print(shares_table(result, "wheel_load_kN", "Direct damage by wheel load", "kN"))
     console.print(shares_table(result, "speed_rpm", "Direct damage by wheel speed", "r/min"))
     console.print(top_cases_table(result))
