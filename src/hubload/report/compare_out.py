@@ -9,7 +9,7 @@ from rich.table import Table
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.jsonout import number
-from hubload.report.series import all_series, damage_shares_of
+from hubload.report.series import MISSING, all_series, damage_shares_of, shaft_min_safety
 from hubload.report.terminal import hours, share
 from hubload.studies.compare import Comparison
 
@@ -68,7 +68,14 @@ def lives_table(comparison: Comparison) -> Table:
             hours(value) + ("" if index == 0 else f" ({ratio_text(ratios[index])})")
             for index, value in enumerate(values)))
     table.add_row("worst s0", *(worst_safety(e.document) for e in entries))
+    shafts = [shaft_min_safety(e.document) for e in entries]
+    if any(value is not MISSING for value in shafts):
+        table.add_row("shaft min safety", *("-" if v is MISSING else
+                                            ("infinite" if v is None else f"{v:.2f}")
+                                            for v in shafts))
     table.add_row("verdict", *(verdict_text(e.document) for e in entries))
+    if any(isinstance(e.document.get("overall_verdict"), dict) for e in entries):
+        table.add_row("overall verdict", *(overall_text(e.document) for e in entries))
     table.add_row("dominant case", *(f"{dominant_text(e.document)}, "
                                      f"{damage_shares_of(e.document).life}" for e in entries))
     return table
@@ -85,6 +92,14 @@ def verdict_text(document: dict) -> str:
         return "no target"
     return (f"[green]pass[/] ({verdict['life']})" if verdict["passed"]
             else f"[red]FAIL[/] ({verdict['life']})")
+
+
+def overall_text(document: dict) -> str:
+    overall = document.get("overall_verdict")
+    if not isinstance(overall, dict):
+        return "-"
+    worst = (overall.get("worst") or {}).get("item", "")
+    return "[green]pass[/]" if overall.get("passed") else f"[red]FAIL[/] ({worst})"
 
 
 def dominant_text(document: dict) -> str:

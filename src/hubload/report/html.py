@@ -141,7 +141,7 @@ def nested_sections(document: dict) -> str:
     """Tables for any further result block (e.g. the shaft's sections)."""
     parts = []
     for key, value in document.items():
-        if key in ("bearings", "system", "cases", "verdict", "dominant_case") \
+        if key in ("bearings", "system", "cases", "verdict", "dominant_case", "overall_verdict") \
                 or not isinstance(value, dict):
             continue
         for sub, items in value.items():
@@ -175,7 +175,24 @@ def verdict_section(document: dict) -> str:
         _, name, share = dominant
         line += (f"<p>Dominant case: <strong>{escape(name)}</strong> ({cell('share', share)} "
                  f"of the pair's damage, {shares.life}).</p>")
-    return section("verdict", "Verdict", line)
+    return section("verdict", "Verdict", line + overall_verdict(document.get("overall_verdict")))
+
+
+def overall_verdict(overall) -> str:
+    """Every checked item against its limit (bearings, shaft, supplier curve), when given."""
+    if not isinstance(overall, dict) or not isinstance(overall.get("items"), list):
+        return ""
+    word, css = ("PASS", "pass") if overall.get("passed") else ("FAIL", "fail")
+    rows = []
+    for item in overall["items"]:
+        name = str(item.get("item", ""))
+        key = "life_h" if "life" in name else "value"  # a null life is an infinite one
+        rows.append([name, cell(key, item.get("value")), cell(key, item.get("limit")),
+                     cell("load_margin", item.get("load_margin")),
+                     "pass" if item.get("passed") else "FAIL"])
+    return (f'<p class="verdict {css}" data-key="overall_verdict.passed"><strong>{word}</strong>'
+            f" overall: every item below against its limit</p>"
+            + table(["item", "value", "limit", "load margin", ""], rows))
 
 
 def flags_section(document: dict) -> str:

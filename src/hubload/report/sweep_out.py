@@ -60,6 +60,10 @@ def table_series(sweep: Sweep) -> list:
     return [s for s in series if s.kind != "life" or s.system or s.modified == modified]
 
 
+def pass_text(passed: bool) -> str:
+    return "[green]pass[/]" if passed else "[red]FAIL[/]"
+
+
 def point_table(sweep: Sweep, kind: str) -> Table:
     documents = [p.document for p in sweep.points]
     series = [s for s in table_series(sweep) if s.kind == kind]
@@ -71,15 +75,19 @@ def point_table(sweep: Sweep, kind: str) -> Table:
     for item in series:
         table.add_column(item.label.replace(" ", "\n", 1), justify="right")
     with_verdict = kind == "life" and documents[0].get("verdict") is not None
+    with_overall = kind == "life" and isinstance(documents[0].get("overall_verdict"), dict)
     if with_verdict:
-        table.add_column("verdict")
+        table.add_column("life\nvs target")
+    if with_overall:
+        table.add_column("overall")
     columns = [item.values(documents) for item in series]
     for row, point in enumerate(sweep.points):
         cells = [f"{point.values[a.key]:g}" for a in sweep.axes]
         cells += [quantity(column[row], item.kind) for item, column in zip(series, columns)]
         if with_verdict:
-            cells.append("[green]pass[/]" if point.document["verdict"]["passed"]
-                         else "[red]FAIL[/]")
+            cells.append(pass_text(point.document["verdict"]["passed"]))
+        if with_overall:
+            cells.append(pass_text(point.document["overall_verdict"]["passed"]))
         table.add_row(*cells)
     return table
 
