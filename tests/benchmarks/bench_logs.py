@@ -43,59 +43,47 @@ def reader_only(path: Path) -> dict:
     return {"rows": rows, "seconds": time.perf_counter() - start}
 
 
-def full_pass(path: Path) -> dict:
-    """process_log's loop with timers around its stages (same functions, same order;
-    the shaft check of the demo file included)."""
-    import numpy as np
+def timed(spent: dict, stage: str, function):
+    """``function`` that adds its run time to ``spent[stage]``."""
+    def wrapper(*args, **kwargs):
+        start = time.perf_counter()
+        try:
+            return function(*args, **kwargs)
+        finally:
+            spent[stage] += time.perf_counter() - start
+    return wrapper
 
+
+def full_pass(path: Path) -> dict:
+    """The real process_log, its stages timed by wrapping the functions it calls
+    (the shaft check and L10m of the demo file included)."""
     from hubload.casefile.machine import load_machine
-    from hubload.engine import evaluate
-    from hubload.logs import pipeline, shaft
-    from hubload.logs.clean import Cleaner
-    from hubload.logs.columns import plan_columns
-    from hubload.logs.reader import headers, read_chunks
-    from hubload.logs.samples import operating_points, sample_cases, with_cases
+    from hubload.logs import pipeline
     from hubload.logs.spectrum import spectrum_result
-    from hubload.model import dwell, iso281
 
     study, _ = load_machine(CASE_FILE)
-    spent = dict.fromkeys(("read and clean", "operating points", "direct damage (engine)",
-                           "classing"), 0.0)
+    stages = {"operating points": ("operating_points", "sample_cases"),
+              "direct damage (engine)": ("evaluate", "case_lives"),
+              "classing": ("class_inputs",)}
+    spent = dict.fromkeys(["read and clean", *stages], 0.0)
+    originals = {name: getattr(pipeline, name) for names in stages.values() for name in names}
+    originals["add_samples"] = pipeline.dwell.add_samples
+    for stage, names in stages.items():
+        for name in names:
+            setattr(pipeline, name, timed(spent, stage, originals[name]))
+    pipeline.dwell.add_samples = timed(spent, "classing", originals["add_samples"])
+    try:
+        start = time.perf_counter()
+        summary = pipeline.process_log(path, study, pipeline.LogOptions())
+        total = time.perf_counter() - start
+    finally:
+        for name, function in originals.items():
+            setattr(pipeline.dwell if name == "add_samples" else pipeline, name, function)
+    spent["read and clean"] = total - sum(spent.values())
     start = time.perf_counter()
-    plan = plan_columns(headers(path), {}, str(path))
-    cleaner = Cleaner(str(path), plan.headers)
-    weight_names = pipeline.WEIGHTS + shaft.damage_names(study)
-    table = dwell.empty_table(len(pipeline.CLASS_CHANNELS), len(weight_names),
-                              pipeline.MIN_EXPONENTS)
-    classes = pipeline.LogOptions().classes
-    stream = cleaner.run(read_chunks(path, plan.headers))
-    mark = time.perf_counter()
-    for samples in stream:
-        now = time.perf_counter()
-        spent["read and clean"] += now - mark
-        points = operating_points(samples, plan, study, str(path))
-        cases = sample_cases(points, samples.hold_s)
-        mark = time.perf_counter()
-        spent["operating points"] += mark - now
-        result = evaluate(with_cases(study, cases), with_warnings=False)
-        hold_h = samples.hold_s / pipeline.SECONDS_PER_HOUR
-        damages = [iso281.damage_rate_per_hour(hold_h, life) for life in
-                   pipeline.case_lives(result)] + shaft.sample_damages(result, hold_h)
-        np.max(result.bearings["outboard"].static_equivalent_n)
-        now = time.perf_counter()
-        spent["direct damage (engine)"] += now - mark
-        values, weights = pipeline.class_inputs(cases, samples.hold_s, damages)
-        table = dwell.add_samples(table, values, weights, classes, pipeline.MIN_EXPONENTS)
-        mark = time.perf_counter()
-        spent["classing"] += mark - now
-    spent["read and clean"] += time.perf_counter() - mark
-    total = time.perf_counter() - start
-    summary = pipeline.LogSummary(str(path), plan, cleaner.report, table,
-                                  dict.fromkeys(pipeline.LABELS, 0.0), {}, weights=weight_names)
-    now = time.perf_counter()
     result = spectrum_result(summary, study)
-    spent["lives and classed spectrum"] = time.perf_counter() - now
-    return {"rows": cleaner.report.rows, "seconds": total, "spent": spent,
+    spent["lives and classed spectrum"] = time.perf_counter() - start
+    return {"rows": summary.cleaning.rows, "seconds": total, "spent": spent,
             "cases": len(result.classed.study.cases), "classing_error": result.classing_error,
             "direct_system_l10_h": result.system_life_h}
 
@@ -128,6 +116,7 @@ def report(path: Path) -> None:
     for stage, seconds in full["spent"].items():
         rate = f"{rows / seconds:>12,.0f} rows/s" if seconds > 0 else ""
         print(f"    {stage:<26} {seconds:7.2f} s  {rate}")
+    print("    (read and clean: the rest of the pass, damage sums and extremes included)")
     print(f"  classed spectrum: {full['cases']} cases, classing error "
           f"{100 * full['classing_error']:+.2f} %, direct system L10 "
           f"{full['direct_system_l10_h']:,.0f} h")
