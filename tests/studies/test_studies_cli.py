@@ -159,9 +159,9 @@ def test_compare_ratios_and_dominant_cases_match_separate_checks(tmp_path):
             entry["damage_life"]]
         assert entry["damage_life"] == (check["verdict"]["life"] if check["verdict"] else "L10")
         assert [s["share"] for s in entry["damage_shares"]] == [c[key] for c in check["cases"]]
-        assert entry["ratio_to_first"]["system L10"] == pytest.approx(
+        assert entry["ratio_to_first"]["system.l10_h"] == pytest.approx(
             check["system"]["l10_h"] / checks[0]["system"]["l10_h"], rel=1e-12)
-    assert compared["files"][1]["ratio_to_first"]["system L10"] < 1
+    assert compared["files"][1]["ratio_to_first"]["system.l10_h"] < 1
     assert compared["cautions"]
 
 

@@ -27,7 +27,7 @@ def damage_shares(document: dict) -> list[dict]:
 
 def compare_document(comparison: Comparison) -> dict:
     series = comparison.life_series()
-    ratios = {item.label: comparison.ratios(item) for item in series}
+    ratios = {item.key: comparison.ratios(item) for item in series}
     files = []
     for index, entry in enumerate(comparison.entries):
         files.append({

@@ -43,6 +43,7 @@ class Series:
     read: Callable[[dict], object]
     system: bool = False
     modified: bool = False
+    key: str = ""  # dotted JSON path of the quantity, where it is a single key
 
     def values(self, documents: Iterable[dict]) -> list[float]:
         """Values per document; a null life is infinite, a missing value NaN."""
@@ -62,19 +63,21 @@ def reader(dotted: str) -> Callable[[dict], object]:
     return lambda document: lookup(document, dotted)
 
 
+def keyed(label: str, kind: str, dotted: str, **flags) -> Series:
+    """A series read from one key of the document."""
+    return Series(label, kind, reader(dotted), key=dotted, **flags)
+
+
 def all_series(document: dict) -> list[Series]:
     """The quantities this document carries, lives first (system, then each bearing)."""
     bearings = lookup(document, "bearings")
     labels = list(bearings) if isinstance(bearings, dict) else []
-    candidates = [Series("system L10", "life", reader("system.l10_h"), system=True),
-                  Series("system L10m", "life", reader("system.l10m_h"), system=True,
-                         modified=True)]
+    candidates = [keyed("system L10", "life", "system.l10_h", system=True),
+                  keyed("system L10m", "life", "system.l10m_h", system=True, modified=True)]
     for label in labels:
-        candidates += [Series(f"{label} L10", "life", reader(f"bearings.{label}.l10_h")),
-                       Series(f"{label} L10m", "life", reader(f"bearings.{label}.l10m_h"),
-                              modified=True)]
-    candidates += [Series(f"{label} s0", "safety", reader(f"bearings.{label}.s0"))
-                   for label in labels]
+        candidates += [keyed(f"{label} L10", "life", f"bearings.{label}.l10_h"),
+                       keyed(f"{label} L10m", "life", f"bearings.{label}.l10m_h", modified=True)]
+    candidates += [keyed(f"{label} s0", "safety", f"bearings.{label}.s0") for label in labels]
     candidates.append(Series("shaft min safety", "safety", shaft_min_safety))
     return [series for series in candidates if series.read(document) is not MISSING]
 
