@@ -42,11 +42,15 @@ def main():
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Also write the damage-share chart (.png or .svg).")
 @click.option("--force", is_flag=True, help="Overwrite existing --report/--plot files.")
+@click.option("--method", type=click.Choice(["iso281", "refined"]), default=None,
+              help="iso281: the ISO 281 rule for the pair; refined: internal load distribution "
+                   "with the bearing setting (needs the internal geometry). Default: the file's "
+                   "[project] method, else iso281.")
 @reports_input_errors
-def check(file, as_json, report, plot, force):
-    """Loads, ISO 281 lives, damage shares and static safety for FILE."""
+def check(file, as_json, report, plot, force, method):
+    """Loads, lives, damage shares and static safety for FILE."""
     from hubload import commands
-    commands.check(file, as_json=as_json, report=report, plot=plot, force=force)
+    commands.check(file, as_json=as_json, report=report, plot=plot, force=force, method=method)
 
 
 @main.command()
@@ -105,6 +109,25 @@ def brief(file, out, force, required_s0):
     """A supplier brief for FILE: required ratings and open questions (Markdown)."""
     from hubload import commands
     commands.brief(file, out=out, force=force, required_s0=required_s0)
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--from", "start_um", type=float, default=-60.0, show_default=True,
+              help="First axial setting [um] (< 0 preload, > 0 end play).")
+@click.option("--to", "stop_um", type=float, default=120.0, show_default=True,
+              help="Last axial setting [um].")
+@click.option("--step", "step_um", type=float, default=5.0, show_default=True,
+              help="Step between settings [um].")
+@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write the lives against the setting as a chart (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@reports_input_errors
+def setting(file, start_um, stop_um, step_um, as_json, plot, force):
+    """Lives of each bearing and of the pair of FILE against the axial setting (refined method)."""
+    from hubload import commands
+    commands.setting(file, start_um, stop_um, step_um, as_json=as_json, plot=plot, force=force)
 
 
 @main.command()

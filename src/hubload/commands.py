@@ -16,14 +16,25 @@ from hubload.schema import FORMAT
 from hubload.schema.export import json_schema, template_text
 
 
+def load_for_method(file: str, method: str | None):
+    """The study of ``file``, computed by ``method`` when given (else the file's own)."""
+    from hubload.casefile.geometry import with_method
+
+    study = load_study(file)
+    try:
+        return with_method(study, method)
+    except InputError as error:
+        raise error.located(file) from None
+
+
 def check(file: str, as_json: bool = False, report: str | None = None,
-          plot: str | None = None, force: bool = False) -> None:
+          plot: str | None = None, force: bool = False, method: str | None = None) -> None:
     from hubload.report import files
 
     for path, suffixes in ((report, (".html", ".htm")), (plot, (".png", ".svg"))):
         if path is not None:
             files.checked_output(path, force, suffixes)
-    result = evaluate(load_study(file))
+    result = evaluate(load_for_method(file, method))
     write_check_files(file, result, report, plot, force)
     if as_json:
         click.echo(jsonout.to_json(result))
@@ -128,3 +139,26 @@ def brief(file: str, out: str | None = None, force: bool = False,
 def spectrum(**options) -> None:
     from hubload.logs.run import Request, spectrum as run_spectrum
     run_spectrum(Request(**options))
+
+
+def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
+            plot: str | None = None, force: bool = False) -> None:
+    from hubload.report import setting_out
+    from hubload.report.files import checked_output
+    from hubload.studies.setting import run_setting_sweep, setting_values_um
+
+    if plot is not None:
+        checked_output(plot, force, (".png", ".svg"))
+    settings_um = setting_values_um(start_um, stop_um, step_um)
+    found = run_setting_sweep(load_for_method(file, "refined"), settings_um)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.setting import setting_figure
+
+        save(setting_figure(found), plot, force)
+    if as_json:
+        click.echo(setting_out.to_json(found))
+    else:
+        setting_out.render(found, Console())
+        if plot is not None:
+            Console().print(f"Plot written to {plot}")

@@ -11,7 +11,7 @@ from dataclasses import dataclass, field, replace
 
 import numpy as np
 
-from hubload import modified_life, shaftcheck
+from hubload import modified_life, refined_method, shaftcheck
 from hubload.casefile.batch import picker, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
@@ -47,6 +47,8 @@ class Result:
     a1: np.ndarray | float = 1.0                       # ISO 281 a1, per study
     modified: modified_life.ModifiedLife | None = None  # with [lubrication] only
     shaft: shaftcheck.ShaftResult | None = None
+    refined: refined_method.RefinedPair | None = None   # method = "refined" only
+    geometry_ratings: dict = field(default_factory=dict)  # label -> C, C0 from the geometry
 
     @property
     def dominant_case(self) -> int:
@@ -72,12 +74,16 @@ def mean_speed_rpm(study: Study) -> np.ndarray:
 
 
 def bearing_result(bearing: Bearing, radial_n, axial_n, study: Study,
-                   mean_rpm) -> BearingResult:
+                   mean_rpm, refined: refined_method.RefinedBearing | None = None) -> BearingResult:
+    """ISO 281 lives from the loads, or the refined method's lives and Pref when given."""
     cases = study.cases
-    equivalent = iso281.equivalent_dynamic_load_n(radial_n, axial_n, bearing.e, bearing.y)
     static_equivalent = iso281.equivalent_static_load_n(radial_n, axial_n, bearing.y0)
-    case_life_h = iso281.life_hours(
-        iso281.basic_rating_life_mrev(bearing.dynamic_rating_n, equivalent), cases.speed_rpm)
+    if refined is None:
+        equivalent = iso281.equivalent_dynamic_load_n(radial_n, axial_n, bearing.e, bearing.y)
+        case_life_h = iso281.life_hours(
+            iso281.basic_rating_life_mrev(bearing.dynamic_rating_n, equivalent), cases.speed_rpm)
+    else:
+        equivalent, case_life_h = refined.reference_load_n, refined.case_life_h
     damage = iso281.damage_rate_per_hour(cases.time_fraction, case_life_h)
     life_h = iso281.spectrum_life_h(damage)
     return BearingResult(
@@ -108,9 +114,13 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
     evaluate millions of samples as cases and report their flags as shares).
     """
     mean_rpm = mean_speed_rpm(study)
+    refined = refined_method.solve(study) if study.method == "refined" else None
+    forces = bearing_forces(study) if refined is None else {
+        label: (found.radial_n, found.axial_n) for label, found in refined.bearings.items()}
     bearings = {
-        label: bearing_result(study.pair.bearings()[label], radial, axial, study, mean_rpm)
-        for label, (radial, axial) in bearing_forces(study).items()}
+        label: bearing_result(study.pair.bearings()[label], radial, axial, study, mean_rpm,
+                              None if refined is None else refined.bearings[label])
+        for label, (radial, axial) in forces.items()}
     system_h = iso281.system_life(*(b.life_h for b in bearings.values()))
     modified = modified_life.evaluate_modified(
         study, {label: b.equivalent_n for label, b in bearings.items()},
@@ -122,10 +132,11 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
-        warnings=collect_warnings(study, bearings, modified)
+        warnings=collect_warnings(study, bearings, modified, refined)
         + shaftcheck.shaft_warnings(study, shaft) if single and with_warnings else [],
         a1=modified_life.per_study(modified_life.reliability_life_factor(study)),
-        modified=modified, shaft=shaft)
+        modified=modified, shaft=shaft, refined=refined,
+        geometry_ratings=refined_method.geometry_ratings(study))
 
 
 def evaluate_many(studies: list[Study]) -> list[Result]:
@@ -140,13 +151,14 @@ def evaluate_many(studies: list[Study]) -> list[Result]:
     for index, study in enumerate(studies):
         point = take(index)
         results.append(replace(point, warnings=collect_warnings(study, point.bearings,
-                                                                 point.modified)
+                                                                 point.modified, point.refined)
                                + shaftcheck.shaft_warnings(study, point.shaft)))
     return results
 
 
 def collect_warnings(study: Study, bearings: dict[str, BearingResult],
-                     modified: modified_life.ModifiedLife | None = None) -> list[str]:
+                     modified: modified_life.ModifiedLife | None = None,
+                     refined: refined_method.RefinedPair | None = None) -> list[str]:
     """Plain-language warnings for a single study (no parameter arrays)."""
     warnings = []
     if study.cases.operating is not None:
@@ -163,6 +175,7 @@ def collect_warnings(study: Study, bearings: dict[str, BearingResult],
                 f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings "
                 f"with shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''}).")
     warnings.extend(modified_life.warnings(modified, study.cases.names))
+    warnings.extend(refined_method.warnings(study, refined))
     return warnings
 
 

@@ -8,6 +8,7 @@ from pathlib import Path
 
 import numpy as np
 
+from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import (Motor, Vehicle, derive_cases, read_motor,
                                                read_vehicle)
@@ -60,7 +61,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
     pair = read_pair(data["pair"])
     project = data.get("project", {})
     motor, vehicle = read_motor(data.get("motor")), read_vehicle(data.get("vehicle"))
-    return Study(
+    study = Study(
         source=source,
         title=project.get("title", Path(source).stem),
         target_life_h=project.get("target_life_h"),
@@ -73,6 +74,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         reliability_percent=project.get("reliability_percent", 90.0),
         shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
     )
+    return with_method(study, project.get("method", "iso281"))
 
 
 def read_wheel(data: dict) -> Wheel:
@@ -93,15 +95,17 @@ def read_pair(data: dict) -> Pair:
         raise InputError(f"expected the outboard bearing (nearer the wheel) at a larger position "
                          f"than the inboard one ({inboard.position_m / MM:g} mm), "
                          f"got {outboard.position_m / MM:g} mm", key_path="pair.outboard.position_mm")
-    return Pair(arrangement=data["arrangement"], outboard=outboard, inboard=inboard)
+    return Pair(arrangement=data["arrangement"], outboard=outboard, inboard=inboard,
+                axial_setting_m=data.get("axial_setting_um", 0.0) * 1e-6,
+                rotating_ring=data.get("rotating_ring", "inner"))
 
 
 def read_bearing(data: dict, label: str) -> Bearing:
-    if "contact_angle_deg" in data:
+    if "e" in data:   # the bearing's own factors win over those from the angle
+        e, y, y0 = data["e"], data["Y"], data["Y0"]
+    else:
         e, y, y0 = (float(v) for v in factors_from_contact_angle(
             math.radians(data["contact_angle_deg"])))
-    else:
-        e, y, y0 = data["e"], data["Y"], data["Y0"]
     if data.get("Cu_kN", 0.0) >= data["C0_kN"]:
         raise InputError(f"expected the fatigue load limit Cu below C0 ({data['C0_kN']:g} kN; "
                          f"typically C0 / 8), got {data['Cu_kN']:g} kN",
@@ -110,7 +114,8 @@ def read_bearing(data: dict, label: str) -> Bearing:
                    dynamic_rating_n=data["C_kN"] * KN, static_rating_n=data["C0_kN"] * KN,
                    e=e, y=y, y0=y0,
                    mean_diameter_m=optional_scaled(data, "mean_diameter_mm", MM),
-                   fatigue_limit_n=optional_scaled(data, "Cu_kN", KN))
+                   fatigue_limit_n=optional_scaled(data, "Cu_kN", KN),
+                   geometry=read_geometry(data, label))
 
 
 def optional_scaled(data: dict, key: str, factor: float) -> float | None:

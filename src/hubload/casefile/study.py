@@ -25,6 +25,18 @@ class Wheel:
 
 
 @dataclass(frozen=True)
+class RollerGeometry:
+    """Internal geometry of a tapered roller bearing (refined method, ratings from geometry)."""
+
+    rollers: int
+    roller_diameter_m: ArrayLike
+    roller_length_m: ArrayLike
+    contact_angle_rad: ArrayLike     # outer raceway (cup)
+    pitch_diameter_m: ArrayLike
+    crown_drop_m: ArrayLike = 0.0    # 0: straight rollers
+
+
+@dataclass(frozen=True)
 class Bearing:
     label: str
     position_m: ArrayLike
@@ -35,6 +47,7 @@ class Bearing:
     y0: ArrayLike
     mean_diameter_m: ArrayLike | None = None
     fatigue_limit_n: ArrayLike | None = None     # Cu; None: estimate from C0 (ISO 281 annex B)
+    geometry: RollerGeometry | None = None
 
 
 @dataclass(frozen=True)
@@ -42,6 +55,8 @@ class Pair:
     arrangement: str
     outboard: Bearing
     inboard: Bearing
+    axial_setting_m: ArrayLike = 0.0   # > 0 end play, < 0 preload (refined method)
+    rotating_ring: str = "inner"
 
     def bearings(self) -> dict[str, Bearing]:
         return {"outboard": self.outboard, "inboard": self.inboard}
@@ -130,3 +145,4 @@ class Study:
     lubrication: Lubrication | None = None
     reliability_percent: float = 90.0
     shaft: Shaft | None = None
+    method: str = "iso281"             # or "refined"

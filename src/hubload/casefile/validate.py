@@ -114,7 +114,7 @@ def check_choice(data: dict, choice: Choice, path: str) -> None:
         if missing:
             raise InputError(f"'{', '.join(group)}' go together: missing {', '.join(missing)}. "
                              f"{choice.doc}", key_path=join_path(path, missing[0]))
-    if len(present) > 1:
+    if choice.exclusive and len(present) > 1:
         given = " and ".join("/".join(group) for group in present)
         raise InputError(f"give only one of these, not {given}. {choice.doc}",
                          key_path=join_path(path, present[1][0]))

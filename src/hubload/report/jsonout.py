@@ -16,6 +16,7 @@ from hubload.report import shaft_json
 from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_json import add_modified_life
 from hubload.report.operating import case_entry
+from hubload.report.refined_json import add_refined
 
 KN = 1e3
 
@@ -66,7 +67,7 @@ def result_document(result: Result) -> dict:
     study = result.study
     found = verdict(result)
     dominant = result.dominant_case
-    document = add_modified_life({
+    document = add_refined(add_modified_life({
         "title": study.title,
         "source": study.source,
         "method": "iso281",
@@ -82,7 +83,7 @@ def result_document(result: Result) -> dict:
             "target_h": found.target_h, "passed": found.passed, "basis": found.basis},
         "warnings": list(result.warnings),
         "cautions": CAUTIONS,
-    }, result)
+    }, result), result)
     shaft_json.extend_document(document, result)
     return document
 

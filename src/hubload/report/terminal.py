@@ -15,6 +15,7 @@ from hubload.report.modified_terminal import (modified_bearing_table, modified_s
                                               modified_summary_headings, notes, oil_cells,
                                               oil_headings)
 from hubload.report.operating import operating_table
+from hubload.report.refined_view import life_basis, refined_tables
 
 KN = 1e3
 
@@ -51,7 +52,7 @@ def bearing_table(result: Result, label: str) -> Table:
     bearing = result.bearings[label]
     name = result.study.pair.bearings()[label].label
     title = f"{label.capitalize()} bearing" + (f" ({name})" if name != label else "")
-    table = Table(title=f"{title}: loads and ISO 281 basic life per case", title_justify="left")
+    table = Table(title=f"{title}: loads and {life_basis(result)} per case", title_justify="left")
     table.add_column("#", justify="right")
     for heading in ("Fr kN", "Fa kN", "P kN", "P0 kN", "L10 h", "damage"):
         table.add_column(heading, justify="right")
@@ -111,6 +112,8 @@ def render(result: Result, console: Console) -> None:
         console.print(bearing_table(result, label))
         if result.modified is not None:
             console.print(modified_bearing_table(result, label))
+    for table in refined_tables(result):
+        console.print(table)
     console.print(summary_table(result))
     for line in notes(result):
         console.print(f"Note: {line}")

@@ -4,7 +4,7 @@ from __future__ import annotations
 
 from typing import Any
 
-from hubload.schema.spec import Field, Table
+from hubload.schema.spec import Choice, Field, Table
 
 JSON_TYPES = {"number": "number", "integer": "integer", "string": "string", "boolean": "boolean"}
 
@@ -37,17 +37,25 @@ def table_schema(table: Table) -> dict[str, Any]:
     required += [t.name for t in table.tables if t.required]
     if required:
         node["required"] = required
-    rules = [{"oneOf": [{"required": list(group)} for group in choice.groups]}
-             if choice.required else
-             {"not": {"anyOf": [{"required": [a[0], b[0]]} for i, a in enumerate(choice.groups)
-                                for b in choice.groups[i + 1:]]}}
-             for choice in table.choices]
+    rules = [rule for choice in table.choices for rule in choice_rules(choice)]
     if rules:
         node["allOf"] = rules
     if table.array:
         return {"type": "array", "items": node, "minItems": table.min_items,
                 "description": table.doc}
     return node
+
+
+def choice_rules(choice: Choice) -> list[dict[str, Any]]:
+    """JSON Schema rules of one Choice (none for an optional group that only goes together)."""
+    groups = [{"required": list(group)} for group in choice.groups]
+    if choice.required:
+        return [{"oneOf" if choice.exclusive else "anyOf": groups}]
+    if choice.exclusive and len(choice.groups) > 1:
+        return [{"not": {"anyOf": [{"required": [a[0], b[0]]}
+                                   for i, a in enumerate(choice.groups)
+                                   for b in choice.groups[i + 1:]]}}]
+    return []
 
 
 def json_schema(table: Table) -> dict[str, Any]:

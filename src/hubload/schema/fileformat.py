@@ -23,6 +23,11 @@ PROJECT = Table(
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
               minimum=90, maximum=99.95, example=90),
+        Field("method", "string", "How the pair's lives are computed: iso281 (the ISO 281 rule "
+              "for a pair set to zero clearance) or refined (internal load distribution with the "
+              "bearing setting, ISO/TS 16281 reference life; needs each bearing's internal "
+              "geometry; see docs/refined-method.md). `hubload check --method` overrides it.",
+              default="iso281", choices=("iso281", "refined")),
     ),
 )
 
@@ -92,27 +97,54 @@ BEARING_FIELDS = (
     Field("e", "number", "Limit of Fa/Fr for X = 1, Y = 0 (ISO 281).", exclusive_minimum=0),
     Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", exclusive_minimum=0),
     Field("Y0", "number", "Static axial load factor Y0 (ISO 76).", exclusive_minimum=0),
-    Field("contact_angle_deg", "number", "Contact angle [deg]; gives e = 1.5 tan a, "
-          "Y = 0.4 cot a, Y0 = 0.22 cot a when e, Y, Y0 are not given.",
+    Field("contact_angle_deg", "number", "Contact angle of the outer raceway (cup) [deg]. "
+          "Gives e = 1.5 tan a, Y = 0.4 cot a, Y0 = 0.22 cot a when e, Y, Y0 are not given; "
+          "with them, e, Y, Y0 serve the ISO 281 rule and the angle the internal geometry.",
           exclusive_minimum=0, exclusive_maximum=60),
     Field("mean_diameter_mm", "number", "Mean diameter dm = (d + D) / 2 [mm] (bore d, outside "
           "diameter D); required with [lubrication].", exclusive_minimum=0),
     Field("Cu_kN", "number", "Fatigue load limit Cu [kN] from the bearing's data (default: "
           "estimated from C0 by ISO 281 annex B).", exclusive_minimum=0),
+    Field("rollers", "integer", "Internal geometry: number of rollers Z (with roller_diameter_mm, "
+          "roller_length_mm, pitch_diameter_mm and contact_angle_deg; needed by the refined "
+          "method, and gives C and C0 from the geometry).", minimum=3),
+    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].", exclusive_minimum=0),
+    Field("roller_length_mm", "number", "Effective roller length Lwe [mm] (contact length with "
+          "the raceway, without the chamfers).", exclusive_minimum=0),
+    Field("pitch_diameter_mm", "number", "Pitch diameter Dpw of the roller set [mm] (diameter of "
+          "the circle through the roller centres at mid-length).", exclusive_minimum=0),
+    Field("roller_profile", "string", "Roller profile along its length: straight, or "
+          "logarithmic crowning (then give crown_drop_um).", default="straight",
+          choices=("straight", "logarithmic")),
+    Field("crown_drop_um", "number", "Drop of the logarithmic profile at the ends of the "
+          "effective length [um] (both contacts together).", exclusive_minimum=0),
 )
 
 BEARING_FACTORS = Choice(
-    "load factors", groups=(("e", "Y", "Y0"), ("contact_angle_deg",)),
-    doc="Give either e, Y and Y0 from the bearing's data, or contact_angle_deg.")
+    "load factors", groups=(("e", "Y", "Y0"), ("contact_angle_deg",)), exclusive=False,
+    doc="Give e, Y and Y0 from the bearing's data, or contact_angle_deg, or both (then e, Y, Y0 "
+        "serve the ISO 281 rule and the angle the internal geometry).")
+
+BEARING_GEOMETRY = Choice(
+    "internal geometry",
+    groups=(("rollers", "roller_diameter_mm", "roller_length_mm", "pitch_diameter_mm"),),
+    required=False,
+    doc="The internal geometry (rollers, roller_diameter_mm, roller_length_mm, "
+        "pitch_diameter_mm, with contact_angle_deg) is optional for the ISO 281 rule and "
+        "required by the refined method.")
 
 
 def bearing_table(name: str, doc: str, position_mm: float) -> Table:
     examples = {"position_mm": position_mm, "C_kN": 160 if name == "outboard" else 140,
                 "C0_kN": 200 if name == "outboard" else 175, "e": 0.4, "Y": 1.5, "Y0": 0.8,
-                "mean_diameter_mm": 85 if name == "outboard" else 77}
+                "contact_angle_deg": 15, "mean_diameter_mm": 85 if name == "outboard" else 77,
+                "rollers": 19 if name == "outboard" else 18,
+                "roller_diameter_mm": 13 if name == "outboard" else 12,
+                "roller_length_mm": 22 if name == "outboard" else 20,
+                "pitch_diameter_mm": 88 if name == "outboard" else 80}
     fields = tuple(Field(**{**f.__dict__, "example": examples.get(f.key, f.example)})
                    for f in BEARING_FIELDS)
-    return Table(name=name, doc=doc, fields=fields, choices=(BEARING_FACTORS,))
+    return Table(name=name, doc=doc, fields=fields, choices=(BEARING_FACTORS, BEARING_GEOMETRY))
 
 
 PAIR = Table(
@@ -121,6 +153,13 @@ PAIR = Table(
     fields=(
         Field("arrangement", "string", "How the two bearings are mounted.",
               required=True, choices=("back-to-back", "face-to-face"), example="back-to-back"),
+        Field("axial_setting_um", "number", "Axial setting of the pair [um] for the refined "
+              "method: > 0 end play (axial free travel of the shaft), < 0 preload, 0 "
+              "line-to-line.", default=0.0, minimum=-500, maximum=2000, example=0),
+        Field("rotating_ring", "string", "Ring that turns relative to the load: inner (the "
+              "shaft carries the wheel and turns in a fixed housing) or outer (the housing turns "
+              "with the wheel on a fixed shaft); refined method.", default="inner",
+              choices=("inner", "outer")),
     ),
     tables=(
         bearing_table("outboard", "The bearing nearer the wheel.", 40),

@@ -45,12 +45,15 @@ class Choice:
     """Exactly one of several key groups must be given (or at most one if optional).
 
     Each group is a tuple of keys that come together, e.g. ("e", "Y", "Y0").
+    With ``exclusive=False`` several groups may be given together (at least one
+    when required).
     """
 
     name: str
     groups: tuple[tuple[str, ...], ...]
     required: bool = True
     doc: str = ""
+    exclusive: bool = True
 
 
 @dataclass(frozen=True)

@@ -1,0 +1,211 @@
+"""Orchestrates the refined method: study -> load distribution of the pair -> loads and lives.
+
+Part of the engine layer (computes with hubload.model.refined, no I/O). The
+pair is solved for every case (and every point of a batched study) at once;
+the engine then treats the refined loads and lives like the ISO 281 ones
+(Palmgren-Miner, system life, modified life with aISO from the reference
+equivalent load Pref of ISO/TS 16281).
+"""
+
+from __future__ import annotations
+
+import dataclasses
+from dataclasses import dataclass
+
+import numpy as np
+
+from hubload.casefile.study import Bearing, Study
+from hubload.model import iso281
+from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings
+from hubload.model.refined.life import reference_equivalent_load_n
+
+RATING_DEVIATION_WARNING = 0.15
+STATIC_RATING_PRESSURE_PA = 4000e6       # ISO 76:2006 basis of C0 for roller bearings
+LABELS = ("outboard", "inboard")
+
+
+@dataclass(frozen=True)
+class GeometryRatings:
+    """C [N] (ISO 281) and C0 [N] (ISO 76) from a bearing's internal geometry."""
+
+    dynamic_n: np.ndarray
+    static_n: np.ndarray
+
+
+@dataclass(frozen=True)
+class RefinedBearing:
+    """One bearing's refined results; per-case arrays end in the case axis."""
+
+    radial_n: np.ndarray
+    axial_n: np.ndarray
+    load_zone_rad: np.ndarray
+    max_roller_load_n: np.ndarray
+    max_contact_pressure_pa: np.ndarray
+    reference_load_n: np.ndarray     # Pref = C_geometry / L10r^(3/10)
+    case_life_h: np.ndarray          # L10r [h]; 0 where no equilibrium was found
+
+
+@dataclass(frozen=True)
+class RefinedPair:
+    bearings: dict[str, RefinedBearing]
+    axial_displacement_m: np.ndarray
+    tilt_rad: np.ndarray
+    radial_displacement_at_wheel_m: np.ndarray
+    converged: np.ndarray
+    setting_m: np.ndarray
+
+    def unsolved_cases(self) -> list[int]:
+        """Indices of the cases without equilibrium (single studies)."""
+        return [int(i) for i in np.flatnonzero(~self.converged)]
+
+
+def geometry_ratings(study: Study) -> dict[str, GeometryRatings]:
+    """C and C0 from the geometry of each bearing that gives its geometry."""
+    found = {}
+    for label, bearing in study.pair.bearings().items():
+        g = bearing.geometry
+        if g is None:
+            continue
+        args = (g.rollers, g.roller_diameter_m, g.roller_length_m, g.contact_angle_rad,
+                g.pitch_diameter_m)
+        found[label] = GeometryRatings(per_study(ratings.dynamic_rating_n(*args)),
+                                       per_study(ratings.static_rating_n(*args)))
+    return found
+
+
+def per_study(value) -> np.ndarray:
+    """A per-study value from one that broadcasts over cases: (..., 1) -> (...)."""
+    value = np.asarray(value, dtype=float)
+    return value[..., 0] if value.ndim else value
+
+
+def uniform(value) -> bool:
+    array = np.asarray(value)
+    return array.size <= 1 or bool(np.all(array == array.flat[0]))
+
+
+def scalar(value) -> float:
+    return float(np.asarray(value, dtype=float).flat[0])
+
+
+def point_parameters(study: Study):
+    """The values that shape the laminae: they must be scalars for one batched solve."""
+    values = []
+    for bearing in study.pair.bearings().values():
+        values.append(bearing.position_m)
+        values.extend(getattr(bearing.geometry, f.name)
+                      for f in dataclasses.fields(bearing.geometry))
+    return values
+
+
+def mounted_pair(study: Study, at=lambda value: value) -> tuple[MountedBearing, MountedBearing]:
+    def roller_set(bearing: Bearing) -> RollerSet:
+        g = bearing.geometry
+        return RollerSet(int(scalar(at(g.rollers))), scalar(at(g.roller_diameter_m)),
+                         scalar(at(g.roller_length_m)), scalar(at(g.contact_angle_rad)),
+                         scalar(at(g.pitch_diameter_m)), scalar(at(g.crown_drop_m)))
+
+    pair = study.pair
+    return pair_bearings(pair.arrangement, roller_set(pair.outboard),
+                         scalar(at(pair.outboard.position_m)), roller_set(pair.inboard),
+                         scalar(at(pair.inboard.position_m)))
+
+
+def respond(study: Study, bearings, at=lambda value: value):
+    cases, wheel = study.cases, study.wheel
+    return pair_response(bearings, at(cases.wheel_load_n), at(cases.side_force_n),
+                         at(cases.tractive_force_n), at(wheel.offset_m),
+                         at(wheel.loaded_radius_m), at(study.pair.axial_setting_m),
+                         rotating_ring=study.pair.rotating_ring)
+
+
+def pair_responses(study: Study):
+    """The model's response for every point and case; one solve when the geometry is shared.
+
+    A batched study whose bearing geometry or positions differ between points is
+    solved point by point (each point's cases still in one call).
+    """
+    parameters = point_parameters(study)
+    if all(uniform(value) for value in parameters):
+        return respond(study, mounted_pair(study))
+    lead = np.broadcast_shapes(*(np.shape(v)[:-1] for v in parameters if np.ndim(v) > 1))
+    points = []
+    for index in np.ndindex(lead):
+        def at(value, index=index):
+            array = np.asarray(value)
+            return array[index] if array.ndim > 1 else array
+        points.append(respond(study, mounted_pair(study, at), at))
+    return stack_points(points, lead)
+
+
+def stack_points(points: list, lead: tuple[int, ...]):
+    first = points[0]
+    if dataclasses.is_dataclass(first):
+        return type(first)(**{f.name: stack_points([getattr(p, f.name) for p in points], lead)
+                              for f in dataclasses.fields(first)})
+    if isinstance(first, tuple):
+        return tuple(stack_points([p[i] for p in points], lead) for i in range(len(first)))
+    stacked = np.stack([np.asarray(p) for p in points])
+    return stacked.reshape(lead + stacked.shape[1:])
+
+
+def solve(study: Study) -> RefinedPair:
+    """Refined loads, lives [h] and shaft displacements of the pair, per case."""
+    response = pair_responses(study)
+    geometry = geometry_ratings(study)
+    converged = np.asarray(response.converged)
+    bearings = {}
+    for label, found in zip(LABELS, response.bearings):
+        life_h = iso281.life_hours(found.life_mrev, study.cases.speed_rpm)
+        bearings[label] = RefinedBearing(
+            radial_n=found.radial_n, axial_n=found.axial_n, load_zone_rad=found.load_zone_rad,
+            max_roller_load_n=found.max_roller_load_n,
+            max_contact_pressure_pa=found.max_contact_pressure_pa,
+            reference_load_n=reference_equivalent_load_n(
+                np.expand_dims(geometry[label].dynamic_n, -1), found.life_mrev),
+            case_life_h=np.where(converged, life_h, 0.0))
+    return RefinedPair(
+        bearings=bearings, axial_displacement_m=response.axial_displacement_m,
+        tilt_rad=response.tilt_rad,
+        radial_displacement_at_wheel_m=response.radial_displacement_at_wheel_m,
+        converged=converged, setting_m=np.asarray(study.pair.axial_setting_m, dtype=float))
+
+
+def rating_warnings(study: Study) -> list[str]:
+    """Ratings from geometry more than 15 % away from the typed ones (single studies)."""
+    found = []
+    for label, rated in geometry_ratings(study).items():
+        bearing = study.pair.bearings()[label]
+        for symbol, standard, geometric, typed in (
+                ("C", "ISO 281", rated.dynamic_n, bearing.dynamic_rating_n),
+                ("C0", "ISO 76", rated.static_n, bearing.static_rating_n)):
+            deviation = float(geometric) / float(typed) - 1.0
+            if abs(deviation) > RATING_DEVIATION_WARNING:
+                found.append(
+                    f"{symbol} of the {label} bearing from its internal geometry "
+                    f"({float(geometric) / 1e3:.1f} kN, {standard}) differs by {deviation:+.0%} "
+                    f"from the typed {symbol}_kN ({float(typed) / 1e3:.1f} kN): check the "
+                    f"geometry and the rating with the bearing's data.")
+    return found
+
+
+def warnings(study: Study, refined: RefinedPair | None) -> list[str]:
+    """Plain-language warnings of a single study: ratings, equilibrium, contact pressure."""
+    found = rating_warnings(study)
+    if refined is None:
+        return found
+    names = study.cases.names
+    for index in refined.unsolved_cases():
+        found.append(
+            f"No equilibrium of the shaft was found for case '{names[index]}': the bearings "
+            f"cannot carry its loads in the refined model (or the solver failed). Its life is "
+            f"counted as zero; check the loads, the setting and the geometry.")
+    for label, bearing in refined.bearings.items():
+        worst = int(np.argmax(bearing.max_contact_pressure_pa))
+        peak = float(bearing.max_contact_pressure_pa[worst])
+        if peak > STATIC_RATING_PRESSURE_PA:
+            found.append(
+                f"Peak contact pressure {peak / 1e6:,.0f} MPa in the {label} bearing under case "
+                f"'{names[worst]}' exceeds 4000 MPa, the level on which ISO 76 bases C0: "
+                f"permanent raceway deformation is to be expected.")
+    return found

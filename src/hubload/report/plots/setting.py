@@ -1,0 +1,53 @@
+"""Chart of the pair's lives against its axial setting (refined method)."""
+
+from __future__ import annotations
+
+import numpy as np
+from matplotlib.figure import Figure
+
+from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
+                                  new_figure, styled)
+from hubload.studies.setting import SettingSweep
+
+UM = 1e-6
+
+
+def finite_or_nan(values) -> np.ndarray:
+    array = np.asarray(values, dtype=float)
+    return np.where(np.isfinite(array) & (array > 0), array, np.nan)
+
+
+@styled
+def setting_figure(sweep: SettingSweep) -> Figure:
+    """Each bearing's and the system's life (log scale) against the setting, best range shaded."""
+    figure = new_figure(8.0, 5.0)
+    axes = figure.subplots()
+    x = sweep.settings_m / UM
+    result = sweep.result
+    modified = result.modified
+    for (label, bearing), colour in zip(result.bearings.items(), BEARING_COLOURS):
+        axes.plot(x, finite_or_nan(bearing.life_h), color=colour, linewidth=1.4,
+                  linestyle="--" if modified is not None else "-", label=f"{label} L10r")
+        if modified is not None:
+            axes.plot(x, finite_or_nan(modified.bearings[label].life_h), color=colour,
+                      linewidth=1.4, label=f"{label} {sweep.life_name}")
+    axes.plot(x, finite_or_nan(result.system_life_h), color=SYSTEM_COLOUR, linewidth=2.4,
+              linestyle="--" if modified is not None else "-", label="pair L10r")
+    if modified is not None:
+        axes.plot(x, finite_or_nan(modified.system_life_h), color=SYSTEM_COLOUR, linewidth=2.4,
+                  label=f"pair {sweep.life_name}")
+    if sweep.best is not None:
+        axes.axvspan(sweep.best.low_m / UM, sweep.best.high_m / UM, color="#2ca02c", alpha=0.12,
+                     label="within 10 % of the best")
+    if sweep.study.target_life_h is not None:
+        axes.axhline(sweep.study.target_life_h, color=TARGET_COLOUR, linewidth=1.0,
+                     linestyle=":", label="target")
+    axes.axvline(0.0, color="#777777", linewidth=0.8)
+    axes.set_yscale("log")
+    axes.set_xlabel("axial setting [um]   (< 0 preload, > 0 end play)")
+    axes.set_ylabel("life [h]")
+    axes.set_title(f"{sweep.study.title}: lives against the bearing setting (refined method)",
+                   loc="left")
+    axes.legend(fontsize=7, loc="best")
+    add_caution(figure)
+    return figure

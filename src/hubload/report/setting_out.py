@@ -1,0 +1,112 @@
+"""Output of ``hubload setting``: a table of lives against the axial setting, and JSON."""
+
+from __future__ import annotations
+
+import json
+import math
+
+import numpy as np
+from rich.console import Console
+from rich.table import Table
+
+from hubload.report.cautions import CAUTIONS
+from hubload.studies.setting import BEST_RANGE_SHARE, SettingSweep
+
+UM = 1e-6
+MPA = 1e6
+
+
+def number(value) -> float | None:
+    value = float(value)
+    return value if math.isfinite(value) else None
+
+
+def hours(value) -> str:
+    value = float(value)
+    return "infinite" if not math.isfinite(value) else f"{value:,.0f}"
+
+
+def point_entry(sweep: SettingSweep, index: int) -> dict:
+    result = sweep.result
+    modified = result.modified
+    bearings = {}
+    for label, bearing in result.bearings.items():
+        found = result.refined.bearings[label]
+        bearings[label] = {
+            "l10_h": number(bearing.life_h[index]),
+            "min_load_zone_deg": number(np.degrees(np.min(found.load_zone_rad[index]))),
+            "max_contact_pressure_MPa": number(np.max(found.max_contact_pressure_pa[index]) / MPA),
+        }
+        if modified is not None:
+            bearings[label]["l10m_h"] = number(modified.bearings[label].life_h[index])
+    system = {"l10_h": number(result.system_life_h[index])}
+    if modified is not None:
+        system["l10m_h"] = number(modified.system_life_h[index])
+    return {"setting_um": number(sweep.settings_m[index] / UM), "system": system,
+            "bearings": bearings, "equilibrium": not bool(sweep.unsolved[index])}
+
+
+def sweep_document(sweep: SettingSweep) -> dict:
+    best = sweep.best
+    return {
+        "title": sweep.study.title, "source": sweep.study.source, "method": "refined",
+        "life": sweep.life_name, "target_life_h": sweep.study.target_life_h,
+        "points": [point_entry(sweep, i) for i in range(len(sweep.settings_m))],
+        "best": None if best is None else {
+            "setting_um": number(best.setting_m / UM), "life_h": number(best.life_h),
+            "range_um": [number(best.low_m / UM), number(best.high_m / UM)],
+            "criterion": f"system {sweep.life_name} within {1 - BEST_RANGE_SHARE:.0%} of the "
+                         f"best found"},
+        "warnings": warnings(sweep),
+        "cautions": CAUTIONS,
+    }
+
+
+def warnings(sweep: SettingSweep) -> list[str]:
+    unsolved = sweep.settings_m[sweep.unsolved] / UM
+    if unsolved.size == 0:
+        return []
+    return [f"No equilibrium for some cases at settings {', '.join(f'{v:g}' for v in unsolved)} "
+            f"um: their lives count as zero."]
+
+
+def to_json(sweep: SettingSweep) -> str:
+    return json.dumps(sweep_document(sweep), indent=2)
+
+
+def render(sweep: SettingSweep, console: Console) -> None:
+    document = sweep_document(sweep)
+    modified = sweep.result.modified is not None
+    table = Table(title=f"{sweep.study.title}: lives against the axial setting (refined method; "
+                        f"> 0 end play, < 0 preload)", title_justify="left")
+    table.add_column("setting um", justify="right")
+    labels = list(sweep.result.bearings)
+    for label in labels:
+        table.add_column(f"{label} L10 h", justify="right")
+        table.add_column(f"{label} zone deg", justify="right")
+    table.add_column("system L10 h", justify="right")
+    if modified:
+        table.add_column(f"system {sweep.life_name} h", justify="right")
+    best = sweep.best
+    for point in document["points"]:
+        cells = [f"{point['setting_um']:g}"]
+        for label in labels:
+            entry = point["bearings"][label]
+            cells += [hours(entry["l10_h"] or math.inf), f"{entry['min_load_zone_deg']:.0f}"]
+        cells.append(hours(point["system"]["l10_h"] or math.inf))
+        if modified:
+            cells.append(hours(point["system"]["l10m_h"] or math.inf))
+        inside = best is not None and best.low_m / UM - 1e-9 <= point["setting_um"] \
+            <= best.high_m / UM + 1e-9
+        table.add_row(*cells, style="bold green" if inside else None)
+    console.print(table)
+    console.print("zone deg: the smallest load zone over the cases.")
+    if best is None:
+        console.print("No setting gives a positive life.")
+    else:
+        console.print(f"Best setting found: {best.setting_m / UM:g} um (system {sweep.life_name} "
+                      f"{hours(best.life_h)} h); within 10 % of it from {best.low_m / UM:g} to "
+                      f"{best.high_m / UM:g} um (highlighted).")
+    for warning in document["warnings"]:
+        console.print(f"[yellow]Warning:[/] {warning}")
+    console.print(f"[dim]Caution: {CAUTIONS}[/]")
