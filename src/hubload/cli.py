@@ -28,6 +28,15 @@ def reports_input_errors(command):
     return wrapper
 
 
+def method_option():
+    """--method of every command that evaluates a file."""
+    return click.option(
+        "--method", type=click.Choice(["iso281", "refined"]), default=None,
+        help="iso281: the ISO 281 rule for the pair; refined: internal load distribution with "
+             "the bearing setting (needs the internal geometry). Default: the file's "
+             "[project] method, else iso281.")
+
+
 @click.group()
 @click.version_option(package_name="hubload")
 def main():
@@ -42,10 +51,7 @@ def main():
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Also write the damage-share chart (.png or .svg).")
 @click.option("--force", is_flag=True, help="Overwrite existing --report/--plot files.")
-@click.option("--method", type=click.Choice(["iso281", "refined"]), default=None,
-              help="iso281: the ISO 281 rule for the pair; refined: internal load distribution "
-                   "with the bearing setting (needs the internal geometry). Default: the file's "
-                   "[project] method, else iso281.")
+@method_option()
 @reports_input_errors
 def check(file, as_json, report, plot, force, method):
     """Loads, lives, damage shares and static safety for FILE."""
@@ -75,12 +81,13 @@ def template():
 @click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart (.png or .svg): lines for one key, a life map for two.")
+@method_option()
 @click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
 @reports_input_errors
-def sweep(file, specs, as_json, plot, force):
+def sweep(file, specs, as_json, plot, force, method):
     """Lives and safeties of FILE over a range (or grid) of values of its numeric keys."""
     from hubload import commands
-    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force)
+    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force, method=method)
 
 
 @main.command()
@@ -88,12 +95,13 @@ def sweep(file, specs, as_json, plot, force):
 @click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart of lives and damage shares (.png or .svg).")
+@method_option()
 @click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
 @reports_input_errors
-def compare(files, as_json, plot, force):
+def compare(files, as_json, plot, force, method):
     """Several load-case FILES side by side: lives, ratios to the first, dominant cases."""
     from hubload import commands
-    commands.compare(files, as_json=as_json, plot=plot, force=force)
+    commands.compare(files, as_json=as_json, plot=plot, force=force, method=method)
 
 
 @main.command()
@@ -104,11 +112,12 @@ def compare(files, as_json, plot, force):
 @click.option("--s0", "required_s0", type=float, default=None,
               help="Static safety s0 the required static ratings must reach "
                    "(default 2, the check's warning level).")
+@method_option()
 @reports_input_errors
-def brief(file, out, force, required_s0):
+def brief(file, out, force, required_s0, method):
     """A supplier brief for FILE: required ratings and open questions (Markdown)."""
     from hubload import commands
-    commands.brief(file, out=out, force=force, required_s0=required_s0)
+    commands.brief(file, out=out, force=force, required_s0=required_s0, method=method)
 
 
 @main.command()

@@ -67,7 +67,7 @@ def template() -> None:
 
 
 def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-          force: bool = False) -> None:
+          force: bool = False, method: str | None = None) -> None:
     from hubload.report import sweep_out
     from hubload.report.files import checked_output
     from hubload.report.progress import LateProgress
@@ -79,7 +79,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
             raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}",
                              file=plot)
     with LateProgress("sweep") as progress:
-        found = run_sweep(file, specs, on_progress=progress)
+        found = run_sweep(file, specs, on_progress=progress, method=method)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
@@ -95,14 +95,14 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 
 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-            force: bool = False) -> None:
+            force: bool = False, method: str | None = None) -> None:
     from hubload.report import compare_out
     from hubload.report.files import checked_output
     from hubload.studies.compare import run_compare
 
     if plot is not None:
         checked_output(plot, force, (".png", ".svg"))
-    found = run_compare(files)
+    found = run_compare(files, method)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import compare_figure
@@ -117,7 +117,7 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
 
 def brief(file: str, out: str | None = None, force: bool = False,
-          required_s0: float | None = None) -> None:
+          required_s0: float | None = None, method: str | None = None) -> None:
     from hubload.casefile.load import read_document
     from hubload.report.brief_md import brief_markdown
     from hubload.report.files import checked_output, write_text
@@ -128,7 +128,8 @@ def brief(file: str, out: str | None = None, force: bool = False,
         raise InputError(f"--s0 expects a positive number, got {required_s0:g}")
     if out is not None:
         checked_output(out, force)
-    text = brief_markdown(requirements_of(load_study(file), required_s0), read_document(file))
+    text = brief_markdown(requirements_of(load_for_method(file, method), required_s0),
+                          read_document(file))
     if out is None:
         click.echo(text, nl=False)
     else:

@@ -26,10 +26,11 @@ def life_label(needs: Requirements) -> str:
     return needs.life_key.removesuffix("_h").upper().replace("M", "m")
 
 
-def rating(solve: Solve, given_n: float) -> str:
+def rating(solve: Solve, bearing: BearingNeeds) -> str:
     if solve.factor is None:
         return f"- ({solve.note})"
-    return f"{kn(solve.factor * given_n)} (x{solve.factor:.3f}, {solve.method})"
+    base = bearing.geometry_rating_n if solve.on_geometry else bearing.dynamic_rating_n
+    return f"{kn(solve.factor * base)} (x{solve.factor:.3f}, {solve.method})"
 
 
 def speed_text(needs: Requirements, rpm: float) -> str:
@@ -77,12 +78,14 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
          each(lambda b: kn(b.equivalent_load_n))),
         (f"{life} now", each(lambda b: hours(b.life_h))),
         ("dynamic rating C given", each(lambda b: kn(b.dynamic_rating_n))),
+        *((("C from the internal geometry", each(lambda b: kn(b.geometry_rating_n))),)
+          if all(b.geometry_rating_n is not None for b in needs.bearings) else ()),
         (f"C for the pair's {life} = target (both C scaled by one factor)",
-         each(lambda b: rating(b.both, b.dynamic_rating_n))),
+         each(lambda b: rating(b.both, b))),
         (f"C for the pair's {life} = target (the other bearing as given)",
-         each(lambda b: rating(b.this_only, b.dynamic_rating_n))),
+         each(lambda b: rating(b.this_only, b))),
         (f"C for this bearing's own {life} = target",
-         each(lambda b: rating(b.alone, b.dynamic_rating_n))),
+         each(lambda b: rating(b.alone, b))),
         ("max static equivalent load P0", each(lambda b: f"{kn(b.max_static.value)} "
                                                           f"({b.max_static.case})")),
         ("static rating C0 given (s0 now)", each(lambda b: f"{kn(b.static_rating_n)} "
@@ -199,8 +202,9 @@ def rating_questions(needs: Requirements) -> list[tuple[str, str, str]]:
     short = [b for b in needs.bearings if b.both.factor is not None and b.both.factor > 1]
     if short:
         items.append(("Dynamic rating", "; ".join(
-            f"{b.label} C {kn(b.both.factor * b.dynamic_rating_n)} needed, "
-            f"{kn(b.dynamic_rating_n)} given" for b in short),
+            f"{b.label} C {rating(b.both, b).split(' (')[0]} needed, "
+            f"{kn(b.geometry_rating_n if b.both.on_geometry else b.dynamic_rating_n)} "
+            f"{'from the geometry' if b.both.on_geometry else 'given'}" for b in short),
             "Is a bearing with this rating available in the same envelope?"))
     static = worst(needs.bearings, lambda b: b.required_static_rating_n / b.static_rating_n)
     items.append(("Static capacity", f"P0 up to {kn(static.max_static.value)} on the "

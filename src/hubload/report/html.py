@@ -166,7 +166,8 @@ def verdict_section(document: dict) -> str:
     else:
         word, css = ("PASS", "pass") if verdict["passed"] else ("FAIL", "fail")
         relation = ">=" if verdict["passed"] else "<"
-        line = (f'<p class="verdict {css}"><strong>{word}</strong>: system {escape(verdict["life"])}'
+        line = (f'<p class="verdict {css}"><strong>{word}</strong>: system '
+                f'{escape(verdict["life"])}'
                 f' = <span data-key="verdict.life_h">{cell("life_h", verdict["life_h"])}</span>'
                 f' h {relation} target {cell("target_h", verdict["target_h"])} h</p>')
     shares = damage_shares_of(document)

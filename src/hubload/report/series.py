@@ -25,7 +25,7 @@ def lookup(document: dict, dotted: str):
 
 
 def shaft_min_safety(document: dict):
-    """Lowest ``min_safety`` over ``shaft.sections[]``; None when infinite, MISSING without shaft."""
+    """Lowest ``min_safety`` of ``shaft.sections[]``: None if infinite, MISSING without a shaft."""
     sections = lookup(document, "shaft.sections")
     if sections is MISSING or not isinstance(sections, list) or not sections:
         return MISSING

@@ -69,7 +69,8 @@ def point_table(sweep: Sweep, kind: str) -> Table:
     series = [s for s in table_series(sweep) if s.kind == kind]
     unit = " (h)" if kind == "life" else ""
     table = Table(title=("Lives" if kind == "life" else "Safety factors") + unit,
-                  title_justify="left", box=box.SIMPLE_HEAD)
+                  title_justify="left", box=box.SIMPLE_HEAD, pad_edge=False,
+                  collapse_padding=True)
     for axis in sweep.axes:
         table.add_column(axis.key, justify="right", min_width=min(len(axis.key), 24))
     for item in series:
@@ -77,7 +78,7 @@ def point_table(sweep: Sweep, kind: str) -> Table:
     with_verdict = kind == "life" and documents[0].get("verdict") is not None
     with_overall = kind == "life" and isinstance(documents[0].get("overall_verdict"), dict)
     if with_verdict:
-        table.add_column("life\nvs target")
+        table.add_column("target")
     if with_overall:
         table.add_column("overall")
     columns = [item.values(documents) for item in series]

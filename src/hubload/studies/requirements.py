@@ -18,7 +18,7 @@ from scipy.optimize import brentq
 
 from hubload.casefile.study import Study
 from hubload.engine import Result, evaluate
-from hubload.model import requirements
+from hubload.model import iso281, requirements
 from hubload.model.kinematics import kmh_to_rpm
 from hubload.report.jsonout import result_document
 
@@ -28,11 +28,16 @@ BRACKET_STEPS = 40
 
 @dataclass(frozen=True)
 class Solve:
-    """A rating factor k on C and how it was found; None when the target is out of reach."""
+    """A rating factor k on C and how it was found; None when the target is out of reach.
+
+    ``on_geometry``: the factor applies to the rating from the internal geometry (the
+    refined method rates the bearing from it), not to the C typed in the file.
+    """
 
     factor: float | None
     method: str
     note: str = ""
+    on_geometry: bool = False
 
 
 def governing_key(document: dict) -> str:
@@ -75,7 +80,7 @@ def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
         return math.inf if math.isinf(value) else math.log(value / target_h)
 
     if math.isclose(life(2.0), now, rel_tol=1e-12):
-        return Solve(None, "none", "the life does not depend on the rating C given in the file")
+        return solve_on_geometry(study, labels, whose, key, target_h)
 
     low, high = guess, guess
     for _ in range(BRACKET_STEPS):
@@ -84,6 +89,34 @@ def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
                          "brentq")
         low, high = low / 2, high * 2
     return Solve(None, "none", "the target is out of reach by this rating alone")
+
+
+def solve_on_geometry(study: Study, labels: tuple[str, ...], whose: str, key: str,
+                      target_h: float) -> Solve:
+    """Closed-form factor on the ratings from the geometry, when the life ignores the typed C.
+
+    The refined method rates each lamina from the bearing's geometry rating; every lamina
+    capacity scales with it, so the reference lives scale as C^(10/3) like ISO 281 lives
+    (ISO/TS 16281 with ISO 281:2007, 7.1) and the pair combines them by the system-life
+    rule. The factor keeps the load distribution of the present geometry.
+    """
+    document = result_document(evaluate(study))
+    bearings = document["bearings"]
+    if any(not isinstance(b.get("c_from_geometry_kN"), (int, float)) for b in bearings.values()):
+        return Solve(None, "none", "the life does not depend on the rating C given in the file")
+    lives = {label: math.inf if b.get(key) is None else float(b[key])
+             for label, b in bearings.items()}
+    if whose != "system" or len(labels) == len(lives):
+        reference = lives[whose] if whose != "system" else float(document["system"][key])
+        needed = target_h
+    else:
+        slope = iso281.WEIBULL_SLOPE_ROLLER
+        rest = sum(life ** -slope for label, life in lives.items() if label not in labels)
+        if target_h ** -slope <= rest:
+            return Solve(None, "none", "the target is out of reach by this rating alone")
+        needed, reference = (target_h ** -slope - rest) ** (-1 / slope), lives[labels[0]]
+    factor = (needed / reference) ** (1.0 / requirements.LIFE_EXPONENT_ROLLER)
+    return Solve(factor, "closed form on the geometry rating", on_geometry=True)
 
 
 @dataclass(frozen=True)
@@ -113,6 +146,7 @@ class BearingNeeds:
     equivalent_load_n: float
     life_h: float | None
     dynamic_rating_n: float
+    geometry_rating_n: float | None
     alone: Solve
     both: Solve
     this_only: Solve
@@ -140,6 +174,11 @@ class Requirements:
         return rpm / float(kmh_to_rpm(1.0, self.study.wheel.rolling_radius_m))
 
 
+def geometry_rating_n(document: dict, label: str) -> float | None:
+    value = document["bearings"][label].get("c_from_geometry_kN")
+    return None if value is None else float(value) * 1e3
+
+
 def bearing_needs(study: Study, result: Result, document: dict, label: str, key: str,
                   target_h: float | None, required_s0: float) -> BearingNeeds:
     bearing, found, names = study.pair.bearings()[label], result.bearings[label], \
@@ -156,6 +195,7 @@ def bearing_needs(study: Study, result: Result, document: dict, label: str, key:
             study.cases.time_fraction, study.cases.speed_rpm, found.equivalent_n)),
         life_h=document["bearings"][label].get(key),
         dynamic_rating_n=float(bearing.dynamic_rating_n),
+        geometry_rating_n=geometry_rating_n(document, label),
         alone=solve((label,), label), both=solve((label, *others), "system"),
         this_only=solve((label,), "system"),
         max_static=max_static, static_rating_n=float(bearing.static_rating_n),

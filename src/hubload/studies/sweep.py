@@ -145,9 +145,15 @@ def parse_vary(spec: str, document: dict, file: str) -> Axis:
 
 
 def run_sweep(file: str, specs: Sequence[str],
-              on_progress: Callable[[int, int], None] | None = None) -> Sweep:
-    """Evaluate the grid of every ``--vary`` spec (the first key varies slowest)."""
+              on_progress: Callable[[int, int], None] | None = None,
+              method: str | None = None) -> Sweep:
+    """Evaluate the grid of every ``--vary`` spec (the first key varies slowest).
+
+    ``method`` overrides the file's ``[project] method`` (as ``check --method`` does).
+    """
     document = read_document(file)
+    if method is not None:
+        document = {**document, "project": {**document.get("project", {}), "method": method}}
     try:
         base = study_from_document(document, source=file)
     except InputError as error:
