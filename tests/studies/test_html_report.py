@@ -23,11 +23,12 @@ FLAGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-
          "--enable-logging=stderr", "--v=0"]
 
 
-def write_report(scenario, tmp_path):
+def write_report(scenario, tmp_path, *options):
     report = tmp_path / f"{scenario.stem}.html"
-    result = CliRunner().invoke(main, ["check", str(scenario), "--report", str(report)])
+    result = CliRunner().invoke(main, ["check", str(scenario), "--report", str(report), *options])
     assert result.exit_code == 0, result.output
-    check = json.loads(CliRunner().invoke(main, ["check", str(scenario), "--json"]).output)
+    check = json.loads(CliRunner().invoke(main, ["check", str(scenario), "--json", *options])
+                       .output)
     return report, check
 
 
@@ -43,11 +44,15 @@ def rendered_text(dom: str, key: str) -> str:
     return match.group(1)
 
 
+RUNS = [(scenario, ()) for scenario in SCENARIOS] + [(YARD_LOADER, ("--method", "refined"))]
+
+
 @needs_chromium
-@pytest.mark.parametrize("scenario", SCENARIOS, ids=lambda p: p.stem)
+@pytest.mark.parametrize("scenario,options", RUNS,
+                         ids=[f"{s.stem}{'-' + o[-1] if o else ''}" for s, o in RUNS])
 def test_report_renders_in_chromium_without_console_messages_and_shows_key_figures(
-        scenario, tmp_path):
-    report, check = write_report(scenario, tmp_path)
+        scenario, options, tmp_path):
+    report, check = write_report(scenario, tmp_path, *options)
     run = chromium(tmp_path, "--dump-dom", report.as_uri())
     assert run.returncode == 0, run.stderr[-2000:]
     console = [line for line in run.stderr.splitlines() if ":CONSOLE" in line]

@@ -122,19 +122,32 @@ def scalars(document: dict) -> str:
 
 def case_sections(document: dict) -> str:
     cases = document["cases"]
-    simple = [k for k in cases[0] if k not in ("name", "bearings")
+    blocks = [k for k in cases[0] if k != "bearings" and isinstance(cases[0][k], dict)]
+    simple = [k for k in cases[0] if k not in ("name", "bearings", *blocks)
               and any(case.get(k) not in (None, [], "") for case in cases)]
     inputs = table(["case", *map(label, simple)],
                    [[case["name"], *(cell(k, case.get(k)) for k in simple)] for case in cases],
                    "Cases as evaluated (given and derived quantities)")
-    labels = list(cases[0]["bearings"])
-    keys = list(cases[0]["bearings"][labels[0]])
-    headings = ["case", "bearing", *map(label, keys)]
+    parts = [inputs, per_case_table(cases, "bearings", "bearing",
+                                    "Bearing loads and lives per case")]
+    parts += [per_case_table(cases, key, "item", f"Per case: {label(key)}") for key in blocks]
+    return section("cases", "Load cases", "".join(parts))
+
+
+def per_case_table(cases: list[dict], key: str, item: str, caption: str) -> str:
+    """Rows case x item for a per-case block of named entries (bearings, shaft sections)."""
+    first = cases[0][key]
+    if not all(isinstance(v, dict) for v in first.values()):
+        columns = list(first)
+        return table(["case", *map(label, columns)],
+                     [[case["name"], *(cell(c, case[key].get(c)) for c in columns)]
+                      for case in cases], caption)
+    names = list(first)
+    columns = list(dict.fromkeys(c for entry in first.values() for c in entry))
     rows = [[case["name"] if i == 0 else "", name,
-             *(cell(k, case["bearings"][name].get(k)) for k in keys)]
-            for case in cases for i, name in enumerate(labels)]
-    loads = table(headings, rows, "Bearing loads and ISO 281 lives per case")
-    return section("cases", "Load cases", inputs + loads)
+             *(cell(c, case[key].get(name, {}).get(c)) for c in columns)]
+            for case in cases for i, name in enumerate(names)]
+    return table(["case", item, *map(label, columns)], rows, caption)
 
 
 def nested_sections(document: dict) -> str:
