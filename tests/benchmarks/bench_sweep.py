@@ -16,7 +16,8 @@ import numpy as np
 import tomli_w
 
 from hubload.casefile import load_study
-from hubload.engine import evaluate
+from hubload.casefile.variation import parse_key_path, variant_studies
+from hubload.engine import evaluate, evaluate_many
 from hubload.report.jsonout import result_document
 from hubload.studies.sweep import run_sweep
 
@@ -59,6 +60,10 @@ def main():
         variants[-1].write_text(tomli_w.dumps(variant))
     spec = [f"wheel.offset_mm={OFFSETS_MM[0]}:{OFFSETS_MM[-1]}:{POINTS}"]
 
+    raw = tomllib.loads(file.read_text())
+    key = parse_key_path("wheel.offset_mm", raw)
+    points = [{key: float(v)} for v in OFFSETS_MM]
+    batched_s = best_of(5, lambda: evaluate_many(variant_studies(raw, points, str(file))))
     sweep_s = best_of(5, lambda: run_sweep(str(file), spec))
     single_s = best_of(3, lambda: [evaluate(load_study(v)) for v in variants])
     single_json_s = best_of(3, lambda: [result_document(evaluate(load_study(v)))
@@ -67,15 +72,15 @@ def main():
     check = result_document(evaluate(load_study(variants[-1])))
     assert sweep.points[-1].document["system"] == check["system"]
 
-    print(f"{POINTS}-point sweep of a {len(document['case'])}-case file "
-          f"(read once, batched engine call, JSON documents per point), best of 5:")
-    print(f"  sweep                                   {sweep_s * 1e3:8.1f} ms  "
-          f"({sweep_s / POINTS * 1e6:.0f} us per point)")
-    print(f"  single-file path x{POINTS} (load + evaluate) {single_s * 1e3:8.1f} ms  "
-          f"-> sweep is {single_s / sweep_s:.1f}x faster")
-    print(f"  single-file path x{POINTS} + JSON document   {single_json_s * 1e3:8.1f} ms  "
-          f"-> sweep is {single_json_s / sweep_s:.1f}x faster")
-    print(f"  target: < 1000 ms -> {'met' if sweep_s < 1.0 else 'NOT met'}")
+    cases = len(document["case"])
+    print(f"{POINTS}-point sweep of a {cases}-case file (best of 3-5 runs):")
+    print(f"  compute: variants + one batched engine call  {batched_s * 1e3:8.1f} ms  "
+          f"vs single-file path x{POINTS} (load + evaluate) {single_s * 1e3:8.1f} ms "
+          f"-> {single_s / batched_s:.1f}x")
+    print(f"  whole sweep incl. check's JSON per point     {sweep_s * 1e3:8.1f} ms  "
+          f"vs single-file path + JSON x{POINTS}          {single_json_s * 1e3:8.1f} ms "
+          f"-> {single_json_s / sweep_s:.1f}x")
+    print(f"  target (< 1000 ms for the whole sweep): {'met' if sweep_s < 1.0 else 'NOT met'}")
 
 
 if __name__ == "__main__":
