@@ -5,6 +5,8 @@ from __future__ import annotations
 import json
 import math
 
+import numpy as np
+
 from rich import box
 from rich.console import Console
 from rich.table import Table
@@ -15,7 +17,7 @@ from hubload.report.series import all_series
 from hubload.report.terminal import hours
 from hubload.studies.sweep import Sweep
 
-MAP_MAX_COLUMNS = 8
+MAP_MAX_COLUMNS = 7
 
 
 def sweep_document(sweep: Sweep) -> dict:
@@ -105,10 +107,11 @@ def compact_hours(value: float) -> str:
 def life_map(sweep: Sweep) -> Table:
     """Governing system life over two keys: rows = first key, columns = second key."""
     rows, columns = sweep.axes[0], sweep.axes[1]
-    step = max(1, math.ceil(len(columns.values) / MAP_MAX_COLUMNS))
-    shown = list(range(0, len(columns.values), step))
+    count = len(columns.values)
+    shown = sorted({round(i) for i in np.linspace(0, count - 1, min(count, MAP_MAX_COLUMNS))})
     table = Table(title=f"System {sweep.governing_life_name} (h); rows: {rows.key}, "
-                        f"columns: {columns.key}", title_justify="left", box=box.SIMPLE_HEAD)
+                        f"columns: {columns.key}", title_justify="left", box=box.SIMPLE_HEAD,
+                  pad_edge=False, collapse_padding=True)
     table.add_column(rows.key, justify="right", min_width=min(len(rows.key), 24))
     for j in shown:
         table.add_column(f"{columns.values[j]:.4g}", justify="right")
@@ -122,8 +125,8 @@ def life_map(sweep: Sweep) -> Table:
             cells.append(text if verdict is None else
                          (f"[green]{text}[/]" if verdict["passed"] else f"[red]{text}[/]"))
         table.add_row(*cells)
-    if step > 1:
-        table.caption = f"{len(shown)} of {len(columns.values)} columns shown; --json has all"
+    if len(shown) < count:
+        table.caption = f"{len(shown)} of {count} columns shown; --json has all"
     return table
 
 
@@ -164,6 +167,33 @@ def render(sweep: Sweep, console: Console) -> None:
     else:
         console.print(point_table(sweep, "life"))
         console.print(point_table(sweep, "safety"))
-    for line in crossing_lines(sweep):
-        console.print(line)
+    if len(sweep.axes) >= 2:
+        for table in crossing_tables(sweep):
+            console.print(table)
+    else:
+        for line in crossing_lines(sweep):
+            console.print(line)
     console.print(f"[dim]Caution: {CAUTIONS}[/]")
+
+
+def crossing_tables(sweep: Sweep) -> list:
+    """Grid sweeps: one row per crossing (values of the other keys, where, which way)."""
+    if sweep.points[0].document.get("verdict") is None:
+        return ["No target life given ([project] target_life_h): no target crossing."]
+    tables = []
+    for title, found in ((f"Where the system {sweep.governing_life_name} crosses the target",
+                          sweep.crossings()),
+                         ("Where the shaft's lowest safety crosses its required safety",
+                          sweep.shaft_crossings())):
+        rows = [(where, c) for where, crossings in found for c in crossings]
+        if not rows:
+            continue
+        table = Table(title=title, title_justify="left", box=box.SIMPLE_HEAD)
+        for axis in sweep.axes:
+            table.add_column(axis.key, justify="right")
+        table.add_column("")
+        for where, crossing in rows:
+            table.add_row(*(f"{v:g}" for v in where.values()), f"{crossing.value:.4g}",
+                          "falls below" if crossing.falls_below else "rises above")
+        tables.append(table)
+    return tables or [f"System {sweep.governing_life_name} does not cross the target on the grid."]
