@@ -31,7 +31,6 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 import numpy as np
-from scipy import optimize
 
 from hubload.model.refined.layout import Laminae
 
@@ -153,6 +152,10 @@ def line_search(field: ContactField, z, external, step, gradient, cases):
 
 def minimise_one(field: ContactField, z0, external, case):
     """One case by scipy's trust-region Newton method; returns (z, converged)."""
+    # Imported here: scipy.optimize costs a third of a second at start-up and only the
+    # rare case that the vectorised Newton iteration leaves unconverged needs it.
+    from scipy import optimize
+
     index = np.array([case])
 
     def energy_and_gradient(z):
@@ -164,8 +167,9 @@ def minimise_one(field: ContactField, z0, external, case):
         return field.hessian(field.loads(z[:, None], index)[1])[0]
 
     found = optimize.minimize(energy_and_gradient, z0, jac=True, hess=hessian,
-                              method="trust-exact", options={"gtol": 1e-3 * RELATIVE_TOLERANCE * (np.max(np.abs(external)) + 1.0),
-                                       "maxiter": 500})
+                              method="trust-exact",
+                              options={"gtol": 1e-3 * RELATIVE_TOLERANCE
+                                       * (np.max(np.abs(external)) + 1.0), "maxiter": 500})
     load = field.loads(found.x[:, None], index)[0]
     residual = field.influence.T @ load - external[:, None]
     ok = converged_mask(np.abs(field.influence).T @ load, residual, external[:, None])[0]

@@ -31,9 +31,9 @@ References
 from __future__ import annotations
 
 from dataclasses import dataclass
+from statistics import NormalDist
 
 import numpy as np
-from scipy.special import ndtri
 
 PA_PER_MPA = 1e6
 PA_PER_KPSI = 6.894757e6
@@ -120,8 +120,13 @@ def temperature_factor(temperature_c):
 
 
 def reliability_factor(reliability_percent):
-    """Reliability factor ke = 1 - 0.08 za [8] for a reliability in [50, 100) %."""
-    return 1.0 - RELIABILITY_SLOPE * ndtri(np.asarray(reliability_percent, dtype=float) / 100.0)
+    """Reliability factor ke = 1 - 0.08 za [8] for a reliability in [50, 100) %.
+
+    za is the standard normal quantile; the standard library's (Wichura's algorithm AS 241)
+    keeps scipy.special out of the CLI's start-up.
+    """
+    quantile = np.vectorize(NormalDist().inv_cdf, otypes=[float])
+    return 1.0 - RELIABILITY_SLOPE * quantile(np.asarray(reliability_percent, dtype=float) / 100.0)
 
 
 @dataclass(frozen=True)
