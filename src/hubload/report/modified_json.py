@@ -8,6 +8,8 @@ from __future__ import annotations
 
 import math
 
+import numpy as np
+
 from hubload.engine import Result
 from hubload.model.lubrication import CELSIUS_ZERO_K
 
@@ -55,6 +57,10 @@ def add_modified_life(document: dict, result: Result) -> dict:
         })
     document["system"].update({"l10m_h": number(modified.system_life_h),
                                "l10m_km": number(modified.system_life_km)})
+    dominant = int(np.argmax(modified.system_damage_share))
+    document["dominant_case_modified"] = (
+        {"index": dominant, "name": result.study.cases.names[dominant]}
+        if modified.system_damage_share[dominant] > 0 else None)
     return document
 
 
