@@ -8,7 +8,6 @@ spectrum stretched to 10 cases.
 
 import copy
 import tempfile
-import time
 import tomllib
 from pathlib import Path
 
@@ -20,6 +19,7 @@ from hubload.casefile.variation import parse_key_path, variant_studies
 from hubload.engine import evaluate, evaluate_many
 from hubload.report.jsonout import result_document
 from hubload.studies.sweep import run_sweep
+from timing import best_of
 
 ROOT = Path(__file__).resolve().parents[2]
 POINTS = 200
@@ -36,15 +36,6 @@ def ten_case_document() -> dict:
     for case in cases:
         case["time_percent"] = 10.0
     return document
-
-
-def best_of(repeats, function):
-    times = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        function()
-        times.append(time.perf_counter() - start)
-    return min(times)
 
 
 def main():

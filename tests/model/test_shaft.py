@@ -9,9 +9,8 @@ import numpy as np
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-from sympy import Symbol, symbols
-from sympy.physics.continuum_mechanics.beam import Beam
 
+from beam_reference import sympy_two_support_beam
 from hubload.model.iso281 import damage_rate_per_hour
 from hubload.model.shaft import fatigue, strength, stress
 
@@ -179,33 +178,15 @@ def test_unknown_criterion_is_refused():
 
 # --- section loads against sympy's beam solver -------------------------------------------
 
-def sympy_moment_and_shear(force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m,
-                           section_x_m):
-    """Bending moment and shear at a section of a two-support shaft with one force and one
-    couple, by sympy.physics.continuum_mechanics.beam (independent reference)."""
-    r_out, r_in = symbols("r_out r_in")
-    origin = min(load_x_m, outboard_x_m, inboard_x_m, section_x_m) - 0.1
-    length = max(load_x_m, outboard_x_m, inboard_x_m, section_x_m) - origin + 0.1
-    beam = Beam(length, Symbol("E"), Symbol("I"))
-    beam.apply_load(r_out, outboard_x_m - origin, -1)
-    beam.apply_load(r_in, inboard_x_m - origin, -1)
-    beam.apply_load(force_n, load_x_m - origin, -1)
-    beam.apply_load(-couple_nm, load_x_m - origin, -2)   # sympy: clockwise-positive couples
-    beam.bc_deflection = [(outboard_x_m - origin, 0), (inboard_x_m - origin, 0)]
-    beam.solve_for_reaction_loads(r_out, r_in)
-    at = {Symbol("x"): section_x_m - origin}
-    return float(beam.bending_moment().subs(at)), float(beam.shear_force().subs(at))
-
-
 @pytest.mark.parametrize("section_x_m", [0.085, 0.060, 0.010, -0.030])
 def test_section_moment_both_planes_match_sympy_beam_solver(section_x_m):
     # Reference: sympy's beam solver, one beam per plane, resultant = vector sum.
     wheel, side, tractive, offset, loaded_r = 20e3, 6e3, -9e3, 0.095, 0.385
     outboard, inboard = 0.028, -0.052
-    vertical, shear_v = sympy_moment_and_shear(wheel, -loaded_r * side, offset, outboard,
-                                               inboard, section_x_m)
-    horizontal, shear_h = sympy_moment_and_shear(tractive, 0.0, offset, outboard, inboard,
-                                                 section_x_m)
+    vertical, shear_v = sympy_two_support_beam(wheel, -loaded_r * side, offset, outboard,
+                                               inboard, section_x_m)[2:]
+    horizontal, shear_h = sympy_two_support_beam(tractive, 0.0, offset, outboard, inboard,
+                                                 section_x_m)[2:]
     loads = stress.section_loads(section_x_m, True, wheel, side, tractive, offset, loaded_r,
                                  0.395, outboard, inboard, "back-to-back")
     assert loads.bending_nm == pytest.approx(np.hypot(vertical, horizontal), rel=1e-9)
@@ -220,10 +201,10 @@ def test_dished_wheel_loads_the_shaft_through_its_flange_like_sympy_beam_solver(
     # transfer couples (rigid wheel), so every section inboard of the flange is loaded.
     wheel, side, tractive, offset, loaded_r, flange = 10e3, 3e3, 4e3, -0.018, 0.290, 0.035
     outboard, inboard = 0.022, -0.041
-    vertical, _ = sympy_moment_and_shear(wheel, (offset - flange) * wheel - loaded_r * side,
-                                         flange, outboard, inboard, section_x_m)
-    horizontal, _ = sympy_moment_and_shear(tractive, (offset - flange) * tractive, flange,
-                                           outboard, inboard, section_x_m)
+    vertical, _ = sympy_two_support_beam(wheel, (offset - flange) * wheel - loaded_r * side,
+                                         flange, outboard, inboard, section_x_m)[2:]
+    horizontal, _ = sympy_two_support_beam(tractive, (offset - flange) * tractive, flange,
+                                           outboard, inboard, section_x_m)[2:]
     loads = stress.section_loads(section_x_m, False, wheel, side, tractive, offset, loaded_r,
                                  0.298, outboard, inboard, "face-to-face")
     assert loads.bending_nm == pytest.approx(np.hypot(vertical, horizontal), rel=1e-9)

@@ -4,33 +4,12 @@ import numpy as np
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-from sympy import Symbol, symbols
-from sympy.physics.continuum_mechanics.beam import Beam
 
+from beam_reference import sympy_two_support_beam
 from hubload.model import statics
 
 finite = st.floats(-1e5, 1e5, allow_nan=False)
 position = st.floats(-0.3, 0.3, allow_nan=False)
-
-
-def sympy_plane(force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m, section_x_m):
-    """Reactions and the bending moment at a section from sympy.physics.continuum_mechanics.
-
-    sympy's beam starts at 0, so every position is shifted by the leftmost point; its
-    applied moments are clockwise-positive, ours counter-clockwise-positive.
-    """
-    r_out, r_in = symbols("r_out r_in")
-    origin = min(load_x_m, outboard_x_m, inboard_x_m, section_x_m) - 0.1
-    length = max(load_x_m, outboard_x_m, inboard_x_m, section_x_m) - origin + 0.1
-    beam = Beam(length, Symbol("E"), Symbol("I"))
-    beam.apply_load(r_out, outboard_x_m - origin, -1)
-    beam.apply_load(r_in, inboard_x_m - origin, -1)
-    beam.apply_load(force_n, load_x_m - origin, -1)
-    beam.apply_load(-couple_nm, load_x_m - origin, -2)
-    beam.bc_deflection = [(outboard_x_m - origin, 0), (inboard_x_m - origin, 0)]
-    beam.solve_for_reaction_loads(r_out, r_in)
-    moment = beam.bending_moment().subs(Symbol("x"), section_x_m - origin)
-    return (float(beam.reaction_loads[r_out]), float(beam.reaction_loads[r_in]), float(moment))
 
 
 @pytest.mark.parametrize("force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m, section_x_m", [
@@ -41,8 +20,8 @@ def sympy_plane(force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m, section
 def test_plane_reactions_and_moment_match_sympy_beam_solver(
         force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m, section_x_m):
     # Reference: sympy.physics.continuum_mechanics.beam.Beam (independent beam solver).
-    ref_out, ref_in, ref_moment = sympy_plane(force_n, couple_nm, load_x_m, outboard_x_m,
-                                              inboard_x_m, section_x_m)
+    ref_out, ref_in, ref_moment, _ = sympy_two_support_beam(
+        force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m, section_x_m)
     out_n, in_n = statics.plane_reactions(force_n, couple_nm, load_x_m, outboard_x_m, inboard_x_m)
     assert out_n == pytest.approx(ref_out, rel=1e-9)
     assert in_n == pytest.approx(ref_in, rel=1e-9)

@@ -111,8 +111,10 @@ class OperatingPoints:
         return found
 
     def warnings(self, names: tuple[str, ...]) -> list[str]:
-        return [f"Case '{name}': {flag.message}."
-                for index, name in enumerate(names) for flag in self.flags(index)]
+        flagged = np.flatnonzero(self.slips | self.tyre_slides | self.pressure_above_rating
+                                 | self.speed_above_rating)
+        return [f"Case '{names[index]}': {flag.message}."
+                for index in flagged for flag in self.flags(index)]
 
 
 def read_motor(data: dict | None) -> Motor | None:
