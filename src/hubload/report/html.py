@@ -210,9 +210,9 @@ def overall_verdict(overall) -> str:
 
 
 def flags_section(document: dict) -> str:
+    # The warnings already carry every case's flags ("Case 'name': ..."), so they are not
+    # listed a second time from cases[].flags.
     items = [escape(w) for w in document.get("warnings", [])]
-    for case in document["cases"]:
-        items += [f"{escape(case['name'])}: {escape(flag)}" for flag in case.get("flags") or []]
     body = ("<ul>" + "".join(f"<li>{i}</li>" for i in items) + "</ul>") if items \
         else "<p>No warnings or flags.</p>"
     return section("flags", "Warnings and flags", body)

@@ -46,7 +46,7 @@ def setting_figure(sweep: SettingSweep) -> Figure:
     axes.set_yscale("log")
     axes.set_xlabel("axial setting [um]   (< 0 preload, > 0 end play)")
     axes.set_ylabel("life [h]")
-    axes.set_title(f"{sweep.study.title}: lives against the bearing setting (refined method)",
+    axes.set_title(f"{sweep.study.title}\nlives against the bearing setting (refined method)",
                    loc="left")
     axes.legend(fontsize=7, loc="best")
     add_caution(figure)

@@ -48,7 +48,7 @@ def damage_share_figure(document: dict) -> Figure:
     figure = new_figure(8.0, 1.6 + 0.45 * len(document["cases"]))
     axes = figure.subplots()
     draw_shares(axes, document, with_bearings=True)
-    axes.set_title(f"{document['title']}: damage shares by case", loc="left")
+    axes.set_title(f"{document['title']}\ndamage shares by case", loc="left")
     axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
     add_caution(figure)
     return figure
@@ -73,7 +73,7 @@ def loads_figure(document: dict) -> Figure:
     axes.invert_yaxis()
     axes.set_xlabel("bearing load [kN]")
     axes.grid(axis="y", visible=False)
-    axes.set_title(f"{document['title']}: bearing loads by case", loc="left")
+    axes.set_title(f"{document['title']}\nbearing loads by case", loc="left")
     axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
     add_caution(figure)
     return figure

@@ -64,7 +64,7 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     mark_file_value(axes, sweep)
     lives_axes.set_yscale("log")
     lives_axes.set_ylabel("life [h]")
-    lives_axes.set_title(f"{sweep.title}: lives against {axis.key}", loc="left")
+    lives_axes.set_title(f"{sweep.title}\nlives against {axis.key}", loc="left")
     lives_axes.legend(fontsize=7, loc="best")
     if safety:
         plot_safeties(axes[1], x, documents, safety, colours)
