@@ -165,7 +165,21 @@ def test_iso4406_code_between_rows_uses_the_dirtier_row():
 
 
 def test_iso4406_code_cleaner_than_the_table_uses_its_cleanest_row():
-    assert lub.iso4406_level("oil-filtered", 11, 8).level.label == "-/13/10"
+    match = lub.iso4406_level("oil-filtered", 11, 8)
+    assert match.level.label == "-/13/10" and not match.exact
+    assert "cleaner than the cleanest row" in match.note and "between" not in match.note
+    assert "between rows" in lub.iso4406_level("oil-filtered", 13, 11).note
+
+
+def test_e_c_above_kappa_4_is_evaluated_at_4_as_a_iso():
+    """ISO 281:2007 bounds kappa at 4 in the life modification factor (9.3, from memory);
+    eC only feeds aISO, so it takes the same bounded kappa (as kappa < 0.1 is evaluated at
+    0.1 for both). Hand computed, -/19/16 with on-line filtration, dm 85 mm:
+    a = 0.0216 * 4^0.68 * 85^0.55 = 0.63831; eC = a (1 - 2.3362 / 85^(1/3)) = 0.29915."""
+    level = lub.iso4406_level("oil-filtered", 19, 16).level
+    assert lub.contamination_factor(4.0, 85 * MM, level) == pytest.approx(0.29915, abs=2e-5)
+    assert lub.contamination_factor(9.0, 85 * MM, level) == lub.contamination_factor(
+        4.0, 85 * MM, level)
 
 
 def test_iso4406_code_dirtier_than_the_table_gives_e_c_zero():
@@ -242,6 +256,17 @@ def test_modified_life_grows_with_cleanliness(method, viscosity, speed_rpm, load
                                   load_ratio_cu_p=load_ratio)
               for level in lub.CONTAMINATION_LEVELS[method]]
     assert all(dirty <= clean for clean, dirty in zip(ratios, ratios[1:]))
+
+
+@given(st.floats(1.0, 100.0), st.sampled_from(ALL_LEVELS), st.floats(0.01, 2.0))
+def test_modified_life_gains_nothing_above_kappa_4(excess, level, load_ratio):
+    """ISO 281:2007: kappa > 4 is taken as 4 (from memory), for eC and aISO alike."""
+    at_4 = lub.life_modification_factor(4.0, lub.contamination_factor(4.0, 85 * MM, level),
+                                        load_ratio, 1.0)
+    kappa = 4.0 * excess
+    above = lub.life_modification_factor(kappa, lub.contamination_factor(kappa, 85 * MM, level),
+                                         load_ratio, 1.0)
+    assert above == at_4
 
 
 @given(st.floats(1.0, 2000.0), st.sampled_from(ALL_LEVELS), st.floats(90.0, 99.95),

@@ -151,6 +151,7 @@ class Iso4406Match:
 
     level: ContaminationLevel
     exact: bool
+    cleaner_than_table: bool = False
 
     @property
     def note(self) -> str:
@@ -159,24 +160,33 @@ class Iso4406Match:
         if self.level is BEYOND_TABLE:
             return ("dirtier than the dirtiest row of ISO 281 annex A (-/21/18): eC = 0 taken, "
                     "which gives the lowest aISO (0.1)")
+        if self.cleaner_than_table:
+            return (f"cleaner than the cleanest row of ISO 281 annex A: that row, "
+                    f"{self.level.label}, is used (conservative)")
         return f"between rows of ISO 281 annex A: the dirtier row {self.level.label} is used"
 
 
 def iso4406_level(method: str, code_6um: int, code_14um: int) -> Iso4406Match:
     """The cleanest annex A row at least as dirty as the code R6/R14 in both sizes [4, 7]."""
+    cleanest_6, cleanest_14 = ISO4406_ROWS[0]
     for level, (row_6, row_14) in zip(CONTAMINATION_LEVELS[method], ISO4406_ROWS):
         if code_6um <= row_6 and code_14um <= row_14:
-            return Iso4406Match(level, exact=(code_6um, code_14um) == (row_6, row_14))
+            return Iso4406Match(
+                level, exact=(code_6um, code_14um) == (row_6, row_14),
+                cleaner_than_table=(code_6um, code_14um) != (row_6, row_14)
+                and code_6um <= cleanest_6 and code_14um <= cleanest_14)
     return Iso4406Match(BEYOND_TABLE, exact=False)
 
 
 def contamination_factor(kappa, mean_diameter_m, level: ContaminationLevel):
     """Contamination factor eC (0..1) by ISO 281 annex A [4].
 
-    kappa below 0.1 is evaluated at 0.1 (outside the standard's scope, [3]);
-    dm = mean diameter [m].
+    kappa is taken within 0.1..4, the same bounded value as in aISO [3]: eC only
+    feeds aISO, whose equations stop at kappa = 4 (a thicker film adds no life),
+    so a larger kappa must not raise eC either; below 0.1 (outside the
+    standard's scope) it is a bounding estimate. dm = mean diameter [m].
     """
-    kappa_eval = np.maximum(kappa, KAPPA_SCOPE_MIN)
+    kappa_eval = np.clip(kappa, KAPPA_SCOPE_MIN, KAPPA_EVALUATION_MAX)
     dm_mm = np.asarray(mean_diameter_m, dtype=float) / MM
     a = np.minimum(level.k * np.power(kappa_eval, 0.68) * np.power(dm_mm, 0.55), 1.0)
     return np.clip(a * (1.0 - level.c / np.cbrt(dm_mm)), 0.0, 1.0)
