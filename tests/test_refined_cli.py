@@ -153,6 +153,24 @@ def test_setting_sweep_json_points_and_best_range(document, write_case_file):
     assert all(b <= a * (1 + 1e-9) for a, b in zip(lives, lives[1:]))
 
 
+def test_setting_points_are_the_checks_of_files_with_that_setting(document, write_case_file):
+    # Independent path: each point against `check --method refined` of a file whose
+    # [pair] axial_setting_um is that value; the settings come out as typed (no m/um noise).
+    path = write_case_file(symmetric_radial(document))
+    sweep = json.loads(run("setting", path, "--from", "-60", "--to", "60", "--step", "7",
+                           "--json").output)
+    settings = [p["setting_um"] for p in sweep["points"]]
+    assert settings == [-60 + 7 * i for i in range(18)]
+    for point in sweep["points"][::6]:
+        document["pair"]["axial_setting_um"] = point["setting_um"]
+        single = json.loads(run("check", write_case_file(document, "single.toml"), "--method",
+                                "refined", "--json").output)
+        assert point["system"]["l10_h"] == pytest.approx(single["system"]["l10_h"], rel=1e-9)
+        for label, bearing in point["bearings"].items():
+            assert bearing["l10_h"] == pytest.approx(single["bearings"][label]["l10_h"],
+                                                     rel=1e-9)
+
+
 @pytest.mark.parametrize("suffix", [".png", ".svg"])
 def test_setting_plot_is_written_and_never_overwritten_without_force(
         document, write_case_file, tmp_path, suffix):

@@ -17,7 +17,7 @@ import numpy as np
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281
 from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings
-from hubload.model.refined.life import reference_equivalent_load_n
+from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
 
 RATING_DEVIATION_WARNING = 0.15
 STATIC_RATING_PRESSURE_PA = 4000e6       # ISO 76:2006 basis of C0 for roller bearings
@@ -68,8 +68,9 @@ def geometry_ratings(study: Study) -> dict[str, GeometryRatings]:
             continue
         args = (g.rollers, g.roller_diameter_m, g.roller_length_m, g.contact_angle_rad,
                 g.pitch_diameter_m)
-        found[label] = GeometryRatings(per_study(ratings.dynamic_rating_n(*args)),
-                                       per_study(ratings.static_rating_n(*args)))
+        found[label] = GeometryRatings(
+            per_study(ratings.dynamic_rating_n(*args) * bearing.geometry_rating_factor),
+            per_study(ratings.static_rating_n(*args)))
     return found
 
 
@@ -156,13 +157,15 @@ def solve(study: Study) -> RefinedPair:
     converged = np.asarray(response.converged)
     bearings = {}
     for label, found in zip(LABELS, response.bearings):
-        life_h = iso281.life_hours(found.life_mrev, study.cases.speed_rpm)
+        life_mrev = found.life_mrev * life_factor_of_rating_factor(
+            study.pair.bearings()[label].geometry_rating_factor)
+        life_h = iso281.life_hours(life_mrev, study.cases.speed_rpm)
         bearings[label] = RefinedBearing(
             radial_n=found.radial_n, axial_n=found.axial_n, load_zone_rad=found.load_zone_rad,
             max_roller_load_n=found.max_roller_load_n,
             max_contact_pressure_pa=found.max_contact_pressure_pa,
             reference_load_n=reference_equivalent_load_n(
-                np.expand_dims(geometry[label].dynamic_n, -1), found.life_mrev),
+                np.expand_dims(geometry[label].dynamic_n, -1), life_mrev),
             case_life_h=np.where(converged, life_h, 0.0))
     return RefinedPair(
         bearings=bearings, axial_displacement_m=response.axial_displacement_m,

@@ -1,18 +1,25 @@
 """Studies under the refined method (--method refined): each sweep point is the separate
 `check --method refined` of a written file, comparisons carry the refined lives, and the
-brief solves the rating needed on the geometry rating that the refined lives use."""
+brief solves the rating needed on the geometry rating that the refined lives use (with the
+refined lives' own exponent, ISO/TS 16281)."""
 
 from __future__ import annotations
 
 import copy
 import json
-import re
 
+import numpy as np
 import pytest
 from click.testing import CliRunner
 
+from hubload.casefile import load_study
+from hubload.casefile.geometry import with_method
 from hubload.casefile.variation import parse_key_path
 from hubload.cli import main
+from hubload.model.refined.layout import RollerSet
+from hubload.model.refined.life import (
+    lamina_ratings_n, life_factor_of_rating_factor, reference_life_mrev)
+from hubload.studies.requirements import life_at, requirements_of
 from studies_helpers import SCENARIOS, YARD_LOADER, assert_close, read_toml, set_key, write_toml
 
 FILE_LEVEL_KEYS = ("title", "source", "method", "cases", "cautions")
@@ -55,18 +62,56 @@ def test_refined_compare_carries_the_refined_lives():
                      rel=1e-9)
 
 
-def test_refined_brief_solves_on_the_geometry_rating():
-    # ISO/TS 16281 lamina capacities all scale with the bearing's rating, so a bearing's
-    # reference life goes with C^(10/3) (ISO 281:2007, 7.1): C_needed = C_geometry (T/L)^0.3.
-    markdown = CliRunner().invoke(main, ["brief", str(YARD_LOADER), "--method",
-                                         "refined"]).output
-    result = check(YARD_LOADER, "--method", "refined")
-    target, life_key = result["verdict"]["target_h"], f"{result['verdict']['life'].lower()}_h"
-    line = next(l for l in markdown.splitlines() if l.startswith("| C for this bearing's own"))
-    cells = [c.strip() for c in line.strip("|").split("|")][1:]
-    for label, cell in zip(result["bearings"], cells):
-        bearing = result["bearings"][label]
-        expected = bearing["c_from_geometry_kN"] * (target / bearing[life_key]) ** 0.3
-        assert float(re.match(r"([\d,.]+) kN", cell).group(1).replace(",", "")) == \
-            pytest.approx(expected, abs=0.006)
-        assert "geometry" in cell
+def refined_study(document: dict, tmp_path, name: str):
+    return with_method(load_study(write_toml(document, tmp_path / name)), "refined")
+
+
+def test_refined_brief_ratings_give_back_exactly_the_target_life(tmp_path):
+    # The inverse solve under the refined method scales the geometry rating (and with it
+    # every lamina capacity); checked on the engine for the governing life (L10m here).
+    document = read_toml(YARD_LOADER)
+    study = refined_study(document, tmp_path, "refined.toml")
+    needs = requirements_of(study, 2.0)
+    for bearing in needs.bearings:
+        others = [b.label for b in needs.bearings if b.label != bearing.label]
+        for solve, labels, whose in ((bearing.alone, {bearing.label}, bearing.label),
+                                     (bearing.both, {bearing.label, *others}, "system"),
+                                     (bearing.this_only, {bearing.label}, "system")):
+            if solve.factor is None:
+                continue
+            assert solve.on_geometry
+            life = life_at(study, {label: solve.factor for label in labels},
+                           needs.life_key, whose)
+            assert life == pytest.approx(study.target_life_h, rel=1e-9), (bearing.label, whose)
+
+
+def test_refined_required_rating_follows_the_line_contact_life_exponent(tmp_path):
+    # ISO/TS 16281: L10r = [sum (q_e/q_c)^(9/2)]^(-8/9), so scaling every lamina rating
+    # by k scales L10r by k^4 (Lundberg-Palmgren line contact), not by ISO 281's k^(10/3):
+    # C_needed = C_geometry (T / L10r)^(1/4) for the basic life (no [lubrication]).
+    document = read_toml(YARD_LOADER)
+    document.pop("lubrication")
+    for case in document["case"]:
+        case.pop("temperature_C", None)
+    study = refined_study(document, tmp_path, "basic.toml")
+    result = check(write_toml(document, tmp_path / "basic_check.toml"), "--method", "refined")
+    needs = requirements_of(study, 2.0)
+    for bearing in needs.bearings:
+        life = result["bearings"][bearing.label]["l10_h"]
+        expected = (result["verdict"]["target_h"] / life) ** 0.25
+        assert bearing.alone.factor == pytest.approx(expected, rel=1e-9)
+        assert bearing.alone.on_geometry
+
+
+def test_scaled_lamina_ratings_scale_the_reference_life_by_the_fourth_power():
+    # The ISO/TS 16281 sum written out with every lamina rating times k, against the
+    # model's life times life_factor_of_rating_factor(k).
+    rollers = RollerSet(20, 10e-3, 18e-3, np.radians(15.0), 80e-3)
+    loads = np.random.default_rng(3).uniform(0.0, 120.0, (20, 30))
+    inner, outer = lamina_ratings_n(rollers, 30)
+    k = 1.37
+    q_ei = np.mean(loads ** 4, axis=0) ** 0.25
+    q_eo = np.mean(loads ** 4.5, axis=0) ** (1 / 4.5)
+    by_formula = np.sum((k * inner / q_ei) ** -4.5 + (k * outer / q_eo) ** -4.5) ** (-8 / 9)
+    assert reference_life_mrev(rollers, loads) * life_factor_of_rating_factor(k) == \
+        pytest.approx(by_formula, rel=1e-12)

@@ -9,6 +9,7 @@ import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
+from hubload.casefile import load_study
 from hubload.studies.crossing import target_crossings
 from hubload.studies.sweep import run_sweep
 from studies_helpers import YARD_LOADER, read_toml, write_toml
@@ -84,3 +85,22 @@ def test_crossing_of_an_exponential_life_curve_is_exact(a, b, target):
 def test_crossing_next_to_an_infinite_life_is_marked_not_interpolated():
     found = target_crossings([0, 1, 2], [None, 500.0, 100.0], 1000.0)
     assert len(found) == 1 and not found[0].interpolated and found[0].value == 1.0
+
+
+def test_crossing_next_to_a_zero_life_is_marked_not_interpolated():
+    # A zero life (a case without equilibrium in the refined model) has no logarithm:
+    # the crossing sits at the usable point instead of failing.
+    found = target_crossings([0, 1, 2], [5000.0, 2000.0, 0.0], 1000.0)
+    assert len(found) == 1 and not found[0].interpolated and found[0].value == 1.0
+
+
+def test_a_whole_number_key_is_written_back_as_a_whole_number(tmp_path):
+    # points[].values must be valid file values: rollers is an integer key of the format.
+    document = read_toml(YARD_LOADER)
+    sweep = run_sweep(str(YARD_LOADER), ["pair.inboard.rollers=18:20:3"])
+    for point, rollers in zip(sweep.points, (18, 19, 20)):
+        value = point.values["pair.inboard.rollers"]
+        assert isinstance(value, int) and value == rollers
+        document["pair"]["inboard"]["rollers"] = value
+        assert load_study(write_toml(document, tmp_path / f"r{value}.toml")).pair.inboard \
+            .geometry.rollers == rollers

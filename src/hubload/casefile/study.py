@@ -48,6 +48,9 @@ class Bearing:
     mean_diameter_m: ArrayLike | None = None
     fatigue_limit_n: ArrayLike | None = None     # Cu; None: estimate from C0 (ISO 281 annex B)
     geometry: RollerGeometry | None = None
+    # Factor on the ratings from the geometry (1 for a file): the brief's inverse solve
+    # scales the lamina capacities of the refined method with it.
+    geometry_rating_factor: ArrayLike = 1.0
 
 
 @dataclass(frozen=True)

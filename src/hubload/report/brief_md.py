@@ -30,7 +30,8 @@ def rating(solve: Solve, bearing: BearingNeeds) -> str:
     if solve.factor is None:
         return f"- ({solve.note})"
     base = bearing.geometry_rating_n if solve.on_geometry else bearing.dynamic_rating_n
-    return f"{kn(solve.factor * base)} (x{solve.factor:.3f}, {solve.method})"
+    basis = ", on the geometry rating" if solve.on_geometry else ""
+    return f"{kn(solve.factor * base)} (x{solve.factor:.3f}, {solve.method}{basis})"
 
 
 def speed_text(needs: Requirements, rpm: float) -> str:
@@ -102,8 +103,9 @@ def bearing_section(needs: Requirements) -> list[str]:
     lines += ["", "Pm is the constant load that does the spectrum's damage at the mean speed "
               "(revolution-weighted 10/3-mean of P; standstill cases turn no revolutions). "
               "Required C values are solved on the same calculation as `hubload check`: "
-              "closed form C (L_target / L)^(3/10) when the engine confirms it, else a root "
-              "search (brentq).", ""]
+              "closed form C (L_target / L)^(1/p) when the engine confirms it (p = 10/3 for "
+              "ISO 281 lives; p = 4 for the refined method's ISO/TS 16281 lives, on the "
+              "rating from the geometry), else a root search (brentq).", ""]
     shaft = shaft_min_safety(needs.document)
     if shaft is not MISSING:
         lines += [f"Shaft: lowest fatigue safety factor over its sections "

@@ -21,6 +21,11 @@ def number(value) -> float | None:
     return value if math.isfinite(value) else None
 
 
+def microns(metres) -> float | None:
+    """A setting [m] in um, rounded to 1e-6 um: the m -> um round trip leaves last-digit noise."""
+    return number(round(float(metres) / UM, 6))
+
+
 def hours(value) -> str:
     value = float(value)
     return "infinite" if not math.isfinite(value) else f"{value:,.0f}"
@@ -42,7 +47,7 @@ def point_entry(sweep: SettingSweep, index: int) -> dict:
     system = {"l10_h": number(result.system_life_h[index])}
     if modified is not None:
         system["l10m_h"] = number(modified.system_life_h[index])
-    return {"setting_um": number(sweep.settings_m[index] / UM), "system": system,
+    return {"setting_um": microns(sweep.settings_m[index]), "system": system,
             "bearings": bearings, "equilibrium": not bool(sweep.unsolved[index])}
 
 
@@ -53,8 +58,8 @@ def sweep_document(sweep: SettingSweep) -> dict:
         "life": sweep.life_name, "target_life_h": sweep.study.target_life_h,
         "points": [point_entry(sweep, i) for i in range(len(sweep.settings_m))],
         "best": None if best is None else {
-            "setting_um": number(best.setting_m / UM), "life_h": number(best.life_h),
-            "range_um": [number(best.low_m / UM), number(best.high_m / UM)],
+            "setting_um": microns(best.setting_m), "life_h": number(best.life_h),
+            "range_um": [microns(best.low_m), microns(best.high_m)],
             "criterion": f"system {sweep.life_name} within {1 - BEST_RANGE_SHARE:.0%} of the "
                          f"best found"},
         "warnings": warnings(sweep),

@@ -23,9 +23,9 @@ def target_crossings(values, lives_h, target_h: float) -> list[Crossing]:
     Between two points on either side of the target the crossing is interpolated
     linearly in log(life): rating lives follow powers of the loads, so log(life)
     is nearly linear in most parameters (common practice for life curves). An
-    infinite life (None, inf) counts as above the target; a crossing next to it
-    is placed at the finite point and marked as not interpolated. Missing lives
-    (NaN) break the curve.
+    infinite life (None, inf) counts as above the target and a zero life (a case
+    without equilibrium) below it; a crossing next to either is placed at the
+    other point and marked as not interpolated. Missing lives (NaN) break the curve.
     """
     x = np.asarray(values, dtype=float)
     life = np.array([np.inf if v is None else v for v in lives_h], dtype=float)
@@ -37,8 +37,9 @@ def target_crossings(values, lives_h, target_h: float) -> list[Crossing]:
         if (a >= target_h) == (b >= target_h):
             continue
         falls = bool(b < target_h)
-        if math.isinf(a) or math.isinf(b):
-            crossings.append(Crossing(float(x[i] if math.isfinite(a) else x[i + 1]), falls,
+        if not all(0 < life < math.inf for life in (a, b)):
+            usable = 0 < a < math.inf
+            crossings.append(Crossing(float(x[i] if usable else x[i + 1]), falls,
                                       interpolated=False))
             continue
         fraction = (math.log(target_h) - math.log(a)) / (math.log(b) - math.log(a))

@@ -2,9 +2,11 @@
 
 Required dynamic ratings are solved inversely on the engine itself, for whichever
 life the verdict uses (L10, or L10m when lubrication is given): the closed form
-C (L_target / L)^(3/10) is tried first and kept when the engine confirms it hits
-the target; otherwise (a life that is not a pure power of C) scipy's brentq finds
-the rating factor on the engine's life.
+C (L_target / L)^(1/p) is tried first -- p = 10/3 for ISO 281 lives, p = 4 for the
+refined method's ISO/TS 16281 lives, whose factor applies to the rating from the
+geometry -- and kept when the engine confirms it hits the target; otherwise (a
+life that is not a pure power of C, e.g. L10m) scipy's brentq finds the rating
+factor on the engine's life.
 """
 
 from __future__ import annotations
@@ -18,8 +20,9 @@ from scipy.optimize import brentq
 
 from hubload.casefile.study import Study
 from hubload.engine import Result, evaluate
-from hubload.model import iso281, requirements
+from hubload.model import requirements
 from hubload.model.kinematics import kmh_to_rpm
+from hubload.model.refined.life import RATING_LIFE_EXPONENT
 from hubload.report.jsonout import result_document
 
 CLOSED_FORM_RTOL = 1e-9
@@ -48,10 +51,15 @@ def governing_key(document: dict) -> str:
 
 
 def scaled(study: Study, factors: dict[str, float]) -> Study:
-    """The study with each named bearing's dynamic rating C multiplied by its factor."""
-    bearings = {label: dataclasses.replace(bearing, dynamic_rating_n=bearing.dynamic_rating_n
-                                           * factors.get(label, 1.0))
-                for label, bearing in study.pair.bearings().items()}
+    """The study with each named bearing's dynamic rating C multiplied by its factor.
+
+    The rating from the internal geometry is scaled too: the refined method's lamina
+    capacities follow it, so its lives respond to the factor as the ISO 281 ones do.
+    """
+    bearings = {label: dataclasses.replace(
+        bearing, dynamic_rating_n=bearing.dynamic_rating_n * factors.get(label, 1.0),
+        geometry_rating_factor=bearing.geometry_rating_factor * factors.get(label, 1.0))
+        for label, bearing in study.pair.bearings().items()}
     return dataclasses.replace(study, pair=dataclasses.replace(study.pair, **bearings))
 
 
@@ -62,61 +70,43 @@ def life_at(study: Study, factors: dict[str, float], key: str, whose: str) -> fl
     return math.inf if node.get(key) is None else float(node[key])
 
 
+def life_exponent(study: Study) -> float:
+    """Exponent of a case life in the rating factor: 10/3 (ISO 281), 4 (refined method)."""
+    return RATING_LIFE_EXPONENT if study.method == "refined" else requirements.LIFE_EXPONENT_ROLLER
+
+
 def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
                  target_h: float) -> Solve:
-    """Factor k on the C of ``labels`` so that the life of ``whose`` equals ``target_h``."""
+    """Factor k on the C of ``labels`` so that the life of ``whose`` equals ``target_h``.
+
+    Under the refined method the factor applies to the rating from the geometry.
+    """
+    on_geometry = study.method == "refined"
+
     def life(k: float) -> float:
         return life_at(study, {label: k for label in labels}, key, whose)
 
     now = life(1.0)
     if math.isinf(now) or now <= 0:
         return Solve(None, "none", "no fatigue damage: every rating meets the target")
-    guess = (target_h / now) ** (1.0 / requirements.LIFE_EXPONENT_ROLLER)
+    guess = (target_h / now) ** (1.0 / life_exponent(study))
     if math.isclose(life(guess), target_h, rel_tol=CLOSED_FORM_RTOL):
-        return Solve(guess, "closed form")
+        return Solve(guess, "closed form", on_geometry=on_geometry)
 
     def excess(k: float) -> float:
         value = life(k)
         return math.inf if math.isinf(value) else math.log(value / target_h)
 
     if math.isclose(life(2.0), now, rel_tol=1e-12):
-        return solve_on_geometry(study, labels, whose, key, target_h)
+        return Solve(None, "none", "the life does not depend on the rating C")
 
     low, high = guess, guess
     for _ in range(BRACKET_STEPS):
         if excess(low) < 0 < excess(high):
             return Solve(brentq(excess, low, high, xtol=1e-14, rtol=4 * np.finfo(float).eps),
-                         "brentq")
+                         "brentq", on_geometry=on_geometry)
         low, high = low / 2, high * 2
     return Solve(None, "none", "the target is out of reach by this rating alone")
-
-
-def solve_on_geometry(study: Study, labels: tuple[str, ...], whose: str, key: str,
-                      target_h: float) -> Solve:
-    """Closed-form factor on the ratings from the geometry, when the life ignores the typed C.
-
-    The refined method rates each lamina from the bearing's geometry rating; every lamina
-    capacity scales with it, so the reference lives scale as C^(10/3) like ISO 281 lives
-    (ISO/TS 16281 with ISO 281:2007, 7.1) and the pair combines them by the system-life
-    rule. The factor keeps the load distribution of the present geometry.
-    """
-    document = result_document(evaluate(study))
-    bearings = document["bearings"]
-    if any(not isinstance(b.get("c_from_geometry_kN"), (int, float)) for b in bearings.values()):
-        return Solve(None, "none", "the life does not depend on the rating C given in the file")
-    lives = {label: math.inf if b.get(key) is None else float(b[key])
-             for label, b in bearings.items()}
-    if whose != "system" or len(labels) == len(lives):
-        reference = lives[whose] if whose != "system" else float(document["system"][key])
-        needed = target_h
-    else:
-        slope = iso281.WEIBULL_SLOPE_ROLLER
-        rest = sum(life ** -slope for label, life in lives.items() if label not in labels)
-        if target_h ** -slope <= rest:
-            return Solve(None, "none", "the target is out of reach by this rating alone")
-        needed, reference = (target_h ** -slope - rest) ** (-1 / slope), lives[labels[0]]
-    factor = (needed / reference) ** (1.0 / requirements.LIFE_EXPONENT_ROLLER)
-    return Solve(factor, "closed form on the geometry rating", on_geometry=True)
 
 
 @dataclass(frozen=True)

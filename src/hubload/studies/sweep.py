@@ -175,7 +175,8 @@ def run_sweep(file: str, specs: Sequence[str],
                  for values in grid[start:start + BATCH_POINTS]]
         studies = variant_studies(document, chunk, file)
         for values, result in zip(chunk, evaluate_many(studies)):
-            points.append(SweepPoint(values={path.text: v for path, v in values.items()},
+            points.append(SweepPoint(values={path.text: int(v) if path.integer else v
+                                             for path, v in values.items()},
                                      result=result, document=point_document(result)))
         if on_progress is not None:
             on_progress(len(points), total)

@@ -45,6 +45,9 @@ STANDING_MEAN_EXPONENT = 4.5
 LAMINA_LIFE_EXPONENT = 4.5
 WEIBULL_SLOPE = 9.0 / 8.0
 ISO281_LIFE_EXPONENT = 10.0 / 3.0
+# L10r goes with the lamina ratings to the power (9/2)(8/9) = 4: Lundberg and Palmgren's
+# line-contact life exponent [2], not ISO 281's 10/3.
+RATING_LIFE_EXPONENT = LAMINA_LIFE_EXPONENT / WEIBULL_SLOPE
 
 
 def lamina_ratings_n(rollers: RollerSet, laminae: int):
@@ -87,6 +90,15 @@ def reference_life_mrev(rollers: RollerSet, lamina_loads_n, rotating_ring="inner
     with np.errstate(divide="ignore"):
         return np.where(damage > 0, np.power(np.where(damage > 0, damage, 1.0),
                                              -1.0 / WEIBULL_SLOPE), np.inf)
+
+
+def life_factor_of_rating_factor(rating_factor):
+    """Factor [-] on L10r when every lamina rating is multiplied by ``rating_factor`` [1].
+
+    L10r = [sum (q_e / q_c)^(9/2)]^(-8/9) scales with the ratings to the power
+    (9/2)(8/9) = 4, the line-contact life exponent of Lundberg and Palmgren [2].
+    """
+    return np.power(rating_factor, RATING_LIFE_EXPONENT)
 
 
 def reference_equivalent_load_n(dynamic_rating_n, life_mrev):
