@@ -115,3 +115,14 @@ def test_scaled_lamina_ratings_scale_the_reference_life_by_the_fourth_power():
     by_formula = np.sum((k * inner / q_ei) ** -4.5 + (k * outer / q_eo) ** -4.5) ** (-8 / 9)
     assert reference_life_mrev(rollers, loads) * life_factor_of_rating_factor(k) == \
         pytest.approx(by_formula, rel=1e-12)
+
+
+def test_refined_brief_states_the_setting_its_lives_assume(tmp_path):
+    # The ISO 281 pair rule assumes line-to-line; the refined lives use the file's setting.
+    document = read_toml(YARD_LOADER)
+    document["pair"]["axial_setting_um"] = 35
+    path = write_toml(document, tmp_path / "endplay.toml")
+    refined = CliRunner().invoke(main, ["brief", str(path), "--method", "refined"]).output
+    basic = CliRunner().invoke(main, ["brief", str(path)]).output
+    assert "axial setting of 35 um (end play)" in refined and "line-to-line" not in refined
+    assert "assumes a line-to-line setting" in basic

@@ -4,6 +4,8 @@ from __future__ import annotations
 
 import math
 
+import numpy as np
+
 from hubload.report.cautions import CAUTIONS
 from hubload.report.series import MISSING, lookup, shaft_min_safety
 from hubload.studies.requirements import BearingNeeds, Requirements, Solve
@@ -32,6 +34,16 @@ def rating(solve: Solve, bearing: BearingNeeds) -> str:
     base = bearing.geometry_rating_n if solve.on_geometry else bearing.dynamic_rating_n
     basis = ", on the geometry rating" if solve.on_geometry else ""
     return f"{kn(solve.factor * base)} (x{solve.factor:.3f}, {solve.method}{basis})"
+
+
+def setting_assumption(needs: Requirements) -> str:
+    """What the lives assume about the bearing setting, by method."""
+    if needs.study.method != "refined":
+        return "The pair rule used here assumes a line-to-line setting."
+    setting_um = float(np.max(needs.study.pair.axial_setting_m)) / 1e-6
+    kind = "end play" if setting_um > 0 else "preload" if setting_um < 0 else "line-to-line"
+    return (f"The refined lives here assume an axial setting of {setting_um:g} um ({kind}) "
+            "in operation.")
 
 
 def speed_text(needs: Requirements, rpm: float) -> str:
@@ -177,9 +189,9 @@ def questions(needs: Requirements) -> list[str]:
                       "limit?"))
     items.append(("Bearing setting", f"max axial load {kn(axial.max_axial.value)} on the "
                   f"{axial.label} bearing in '{axial.max_axial.case}'",
-                  "The pair rule used here assumes a line-to-line setting. Which end play or "
-                  "preload do you set at assembly, with which tolerance, and how does the life "
-                  "change over that range?"))
+                  f"{setting_assumption(needs)} Which end play or preload do you set at "
+                  "assembly, with which tolerance, and how does the life change over that "
+                  "range?"))
     utilisation = max((c.get("permissible_utilisation") for c in needs.document["cases"]
                        if isinstance(c.get("permissible_utilisation"), (int, float))),
                       default=None)
