@@ -1,11 +1,16 @@
 """End-to-end: every bundled scenario checks through the CLI, in text and JSON."""
 
+import copy
 import json
 from pathlib import Path
 
 import pytest
+import tomli_w
 from click.testing import CliRunner
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
+from conftest import BASE_DOCUMENT
 from hubload.cli import main
 
 SCENARIOS = sorted(Path(__file__).parent.parent.joinpath("load_cases").glob("*.toml"))
@@ -20,3 +25,20 @@ def test_bundled_scenario_checks_in_text_and_json(scenario):
     document = json.loads(runner.invoke(main, ["check", str(scenario), "--json"]).output)
     assert document["system"]["l10_h"] is None or document["system"]["l10_h"] > 0
     assert set(document["bearings"]) == {"outboard", "inboard"}
+
+
+@settings(max_examples=30, deadline=None)
+@given(name=st.text(alphabet="ab[]/\\=#", min_size=1, max_size=10))
+def test_names_with_brackets_print_as_written(tmp_path_factory, name):
+    # Titles and case names are the user's text, not terminal markup (common practice:
+    # a report shows what the file says); "[/]" once ended the run with a traceback.
+    document = copy.deepcopy(BASE_DOCUMENT)
+    document["project"]["title"] = f"title {name}"
+    document["case"][0]["name"] = name
+    path = tmp_path_factory.mktemp("names") / "case.toml"
+    path.write_text(tomli_w.dumps(document))
+    text = CliRunner().invoke(main, ["check", str(path)])
+    assert text.exit_code == 0, text.output
+    assert f"title {name}" in text.output
+    assert f"│ 0 │ {name} " in text.output
+    assert "([project] target_life_h)" in text.output or "PASS" in text.output or "FAIL" in text.output

@@ -7,6 +7,7 @@ import math
 import numpy as np
 from rich.console import Console
 from rich.table import Table
+from rich.text import Text
 
 from hubload.engine import Result
 from hubload.overall import CheckItem, overall_verdict
@@ -46,7 +47,7 @@ def sections_table(result: Result) -> Table:
     table.add_column("life h", justify="right", no_wrap=True, min_width=8)
     for given, section in zip(result.study.shaft.sections, shaft.sections):
         table.add_row(
-            section.name, f"{float(given.position_m) / MM:g}",
+            Text(section.name), f"{float(given.position_m) / MM:g}",
             f"{float(given.diameter_m) / MM:g}", f"{float(section.kf_bending):.2f}",
             f"{float(section.kf_torsion):.2f}", f"{float(section.endurance_pa) / MPA:.0f}",
             factor(section.min_safety, shaft.required_safety),
@@ -75,7 +76,7 @@ def cases_table(result: Result) -> Table:
     table = Table(title=title, title_justify="left")
     table.add_column("#", justify="right")
     for section in shaft.sections:
-        table.add_column(section.name, justify="right")
+        table.add_column(Text(section.name), justify="right")
     if permissible is not None:
         table.add_column("radial kN", justify="right")
         table.add_column("utilisation", justify="right")
@@ -108,7 +109,7 @@ def render_shaft(result: Result, console: Console) -> None:
     console.print(sections_table(result))
     console.print(cases_table(result))
     for line in infinite_life_lines(result):
-        console.print(line)
+        console.print(Text(line))
 
 
 def item_value(item: CheckItem) -> str:
@@ -136,10 +137,12 @@ def render_overall(result: Result, console: Console) -> None:
                              ("result", "left")):
         table.add_column(heading, justify=justify)
     for item in found.items:
-        table.add_row(item.name, item_value(item), item_limit(item),
+        table.add_row(Text(item.name), item_value(item), item_limit(item),
                       "[green]pass[/]" if item.passed else "[red]FAIL[/]")
     console.print(table)
     worst = found.worst
-    verdict = "[green]PASS[/]" if found.passed else "[red]FAIL[/]"
-    console.print(f"Overall verdict (bearings and shaft): {verdict}; worst item: {worst.name} = "
-                  f"{item_value(worst)} (limit {item_limit(worst)}).")
+    verdict = ("PASS", "green") if found.passed else ("FAIL", "red")
+    console.print(Text.assemble("Overall verdict (bearings and shaft): ", verdict,
+                                f"; worst item: {worst.name} = ",
+                                Text.from_markup(item_value(worst)),
+                                f" (limit {item_limit(worst)})."))

@@ -1,4 +1,8 @@
-"""Rich tables for ``hubload check``."""
+"""Rich tables for ``hubload check``.
+
+Text from the file (titles, names) and messages quoting it go out as rich Text, never as
+markup: a case named "[wet]" must print as written.
+"""
 
 from __future__ import annotations
 
@@ -7,6 +11,7 @@ import math
 import numpy as np
 from rich.console import Console
 from rich.table import Table
+from rich.text import Text
 
 from hubload.engine import Result, verdict
 from hubload.report import shaft_terminal
@@ -42,7 +47,7 @@ def cases_table(result: Result) -> Table:
     for heading in oil_headings(result):
         table.add_column(heading, justify="right")
     for index, name in enumerate(cases.names):
-        table.add_row(str(index), name, share(cases.time_fraction[index]),
+        table.add_row(str(index), Text(name), share(cases.time_fraction[index]),
                       f"{cases.speed_rpm[index]:.1f}", share(result.system_damage_share[index]),
                       *oil_cells(result, index))
     return table
@@ -52,7 +57,8 @@ def bearing_table(result: Result, label: str) -> Table:
     bearing = result.bearings[label]
     name = result.study.pair.bearings()[label].label
     title = f"{label.capitalize()} bearing" + (f" ({name})" if name != label else "")
-    table = Table(title=f"{title}: loads and {life_basis(result)} per case", title_justify="left")
+    table = Table(title=Text(f"{title}: loads and {life_basis(result)} per case"),
+                  title_justify="left")
     table.add_column("#", justify="right")
     for heading in ("Fr kN", "Fa kN", "P kN", "P0 kN", "L10 h", "damage"):
         table.add_column(heading, justify="right")
@@ -74,7 +80,7 @@ def summary_table(result: Result) -> Table:
         table.add_column(heading, justify="right")
     for label, bearing in result.bearings.items():
         name = pair[label].label if pair[label].label != label else ""
-        table.add_row(label, name, hours(bearing.life_h), hours(bearing.life_km),
+        table.add_row(label, Text(name), hours(bearing.life_h), hours(bearing.life_km),
                       f"{float(bearing.static_safety):.2f}", *modified_summary_cells(result, label))
     table.add_row("pair (system)", "", hours(result.system_life_h),
                   hours(result.system_life_km), "", *modified_summary_cells(result, None),
@@ -82,10 +88,10 @@ def summary_table(result: Result) -> Table:
     return table
 
 
-def verdict_line(result: Result) -> str:
+def verdict_line(result: Result) -> str | Text:
     found = verdict(result)
     if found is None:
-        return "No target life given ([project] target_life_h): no verdict."
+        return Text("No target life given ([project] target_life_h): no verdict.")
     basis = f" ({found.basis})" if found.basis else ""
     if found.passed:
         return (f"[green]PASS[/]: system {found.life_name} = {hours(found.life_h)} h "
@@ -94,17 +100,17 @@ def verdict_line(result: Result) -> str:
             f"< target {hours(found.target_h)} h{basis}")
 
 
-def dominant_line(result: Result) -> str:
+def dominant_line(result: Result) -> Text:
     if not np.any(result.system_damage_share > 0):
-        return "No case adds fatigue damage."
+        return Text("No case adds fatigue damage.")
     index = result.dominant_case
-    return (f"Dominant case: '{result.study.cases.names[index]}' "
-            f"({share(result.system_damage_share[index])} of the pair's damage).")
+    return Text(f"Dominant case: '{result.study.cases.names[index]}' "
+                f"({share(result.system_damage_share[index])} of the pair's damage).")
 
 
 def render(result: Result, console: Console) -> None:
     """Print the full check report."""
-    console.print(f"[bold]{result.study.title}[/]  ({result.study.source})")
+    console.print(Text.assemble((result.study.title, "bold"), f"  ({result.study.source})"))
     console.print(cases_table(result))
     if (operating := operating_table(result.study)) is not None:
         console.print(operating)
@@ -116,11 +122,11 @@ def render(result: Result, console: Console) -> None:
         console.print(table)
     console.print(summary_table(result))
     for line in notes(result):
-        console.print(f"Note: {line}")
+        console.print(Text(f"Note: {line}"))
     console.print(dominant_line(result))
     shaft_terminal.render_shaft(result, console)
     console.print(verdict_line(result))
     shaft_terminal.render_overall(result, console)
     for warning in result.warnings:
-        console.print(f"[yellow]Warning:[/] {warning}")
+        console.print(Text.assemble(("Warning:", "yellow"), f" {warning}"))
     console.print(f"[dim]Caution: {CAUTIONS}[/]")
