@@ -18,8 +18,8 @@ from hubload.casefile.validate import validate_document
 from hubload.errors import InputError
 from hubload.model.iso281 import factors_from_contact_angle
 from hubload.schema import FORMAT
+from hubload.schema.fileformat import TIME_SUM_TOLERANCE_PERCENT
 
-TIME_SUM_TOLERANCE_PERCENT = 0.5
 MM = 1e-3
 KN = 1e3
 

@@ -9,6 +9,7 @@ from __future__ import annotations
 from hubload.schema.spec import Choice, Field, Table
 
 DEFAULT_ADHESION_MU = 0.6
+TIME_SUM_TOLERANCE_PERCENT = 0.5
 
 PROJECT = Table(
     name="project",
@@ -173,8 +174,9 @@ CASE = Table(
     doc="One load case of the duty spectrum (repeat the block for each case).",
     fields=(
         Field("name", "string", "Name of the case.", required=True, example="straight travel"),
-        Field("time_percent", "number", "Share of operating time [%]; all cases add to 100.",
-              required=True, minimum=0, maximum=100, example=100),
+        Field("time_percent", "number", "Share of operating time [%]; all cases add to 100 "
+              f"(within {TIME_SUM_TOLERANCE_PERCENT:g}).", required=True, minimum=0,
+              maximum=100 + TIME_SUM_TOLERANCE_PERCENT, example=100),
         Field("wheel_load_kN", "number", "Vertical force of the ground on the tyre [kN]; "
               "required unless a [vehicle] block derives it from lateral_accel_g.",
               minimum=0, example=25),
