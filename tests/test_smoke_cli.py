@@ -42,3 +42,15 @@ def test_names_with_brackets_print_as_written(tmp_path_factory, name):
     assert f"title {name}" in text.output
     assert f"│ 0 │ {name} " in text.output
     assert "([project] target_life_h)" in text.output or "PASS" in text.output or "FAIL" in text.output
+
+
+@pytest.mark.parametrize("command", [["sweep", "--vary", "wheel.offset_mm=80:120:3"], ["compare"]])
+def test_study_commands_print_bracketed_titles_as_written(write_case_file, command):
+    # Same rule as for check: the user's title is text, not terminal markup.
+    document = copy.deepcopy(BASE_DOCUMENT)
+    document["project"]["title"] = "Loader [front axle] [/]"
+    path = write_case_file(document)
+    arguments = [command[0], path, *command[1:]] + ([path] if command[0] == "compare" else [])
+    text = CliRunner().invoke(main, arguments)
+    assert text.exit_code == 0, text.output
+    assert "Loader [front axle] [/]" in text.output

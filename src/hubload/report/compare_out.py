@@ -6,6 +6,7 @@ import json
 
 from rich.console import Console
 from rich.table import Table
+from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.jsonout import number
@@ -50,7 +51,7 @@ def ratio_text(value: float | None) -> str:
 
 
 def file_lines(comparison: Comparison) -> list[str]:
-    return [f"#{i}: [bold]{e.document['title']}[/] ({e.document['source']})"
+    return [f"#{i}: [bold]{escape(e.document['title'])}[/] ({escape(e.document['source'])})"
             for i, e in enumerate(comparison.entries, start=1)]
 
 
@@ -136,5 +137,5 @@ def render(comparison: Comparison, console: Console) -> None:
         console.print(shares_table(index, entry.document))
     for entry in comparison.entries:
         for warning in entry.document.get("warnings", []):
-            console.print(f"[yellow]Warning[/] ({entry.document['title']}): {warning}")
+            console.print(f"[yellow]Warning[/] ({escape(entry.document['title'])}): {escape(warning)}")
     console.print(f"[dim]Caution: {CAUTIONS}[/]")

@@ -7,6 +7,7 @@ from pathlib import Path
 import numpy as np
 from rich.console import Console
 from rich.table import Table
+from rich.markup import escape
 
 from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
@@ -48,7 +49,7 @@ def shaft_table(result: SpectrumResult) -> Table | None:
         table.add_column(heading, justify="left" if heading == "section" else "right")
     for i, (section, life) in enumerate(zip(result.classed.shaft.sections,
                                             result.shaft_life_h)):
-        table.add_row(section.name, hours(life), hours(section.fatigue_life_h),
+        table.add_row(escape(section.name), hours(life), hours(section.fatigue_life_h),
                       f"{extremes['min_safety'][i]:.2f}", f"{extremes['yield_safety'][i]:.2f}")
     return table
 
@@ -74,7 +75,7 @@ def top_cases_table(result: SpectrumResult) -> Table:
                              ("damage", "right")):
         table.add_column(heading, justify=justify)
     for i in order:
-        table.add_row(cases.names[i], share(cases.time_fraction[i]),
+        table.add_row(escape(cases.names[i]), share(cases.time_fraction[i]),
                       f"{cases.wheel_load_n[i] / KN:.2f}", f"{cases.side_force_n[i] / KN:.2f}",
                       f"{cases.tractive_force_n[i] / KN:.2f}", f"{cases.speed_rpm[i]:.1f}",
                       share(shares[i]))
@@ -107,7 +108,7 @@ def error_line(result: SpectrumResult) -> str:
 
 
 def render_log(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
-    console.print(f"[bold]{result.summary.name}[/]")
+    console.print(f"[bold]{escape(result.summary.name)}[/]")
     for line in cleaning_lines(result):
         console.print(f"  {line}")
     console.print(lives_table(result))
@@ -121,7 +122,7 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
     if spectrum_file:
         console.print(f"Spectrum written to {spectrum_file} (hubload check runs on it).")
     for warning in result.warnings:
-        console.print(f"[yellow]Warning:[/] {warning}")
+        console.print(f"[yellow]Warning:[/] {escape(warning)}")
 
 
 def ranking_table(ranking: list[dict]) -> Table:
@@ -132,7 +133,7 @@ def ranking_table(ranking: list[dict]) -> Table:
         table.add_column(heading, justify=justify)
     for row in ranking:
         relative = row["relative_to_fleet"]
-        table.add_row(Path(row["log"]).name, f"{row['duration_h'] or 0:,.2f}",
+        table.add_row(escape(Path(row["log"]).name), f"{row['duration_h'] or 0:,.2f}",
                       hours(row["system_l10_h"] if row["system_l10_h"] is not None
                             else float("inf")),
                       "" if relative is None else f"{relative:.2f} x")

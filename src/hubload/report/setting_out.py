@@ -8,6 +8,7 @@ import math
 import numpy as np
 from rich.console import Console
 from rich.table import Table
+from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
 from hubload.studies.setting import BEST_RANGE_SHARE, SettingSweep
@@ -82,7 +83,7 @@ def to_json(sweep: SettingSweep) -> str:
 def render(sweep: SettingSweep, console: Console) -> None:
     document = sweep_document(sweep)
     modified = sweep.result.modified is not None
-    table = Table(title=f"{sweep.study.title}: lives against the axial setting (refined method; "
+    table = Table(title=f"{escape(sweep.study.title)}: lives against the axial setting (refined method; "
                         f"> 0 end play, < 0 preload)", title_justify="left")
     table.add_column("setting um", justify="right")
     labels = list(sweep.result.bearings)
@@ -113,5 +114,5 @@ def render(sweep: SettingSweep, console: Console) -> None:
                       f"{hours(best.life_h)} h); within 10 % of it from {best.low_m / UM:g} to "
                       f"{best.high_m / UM:g} um (highlighted).")
     for warning in document["warnings"]:
-        console.print(f"[yellow]Warning:[/] {warning}")
+        console.print(f"[yellow]Warning:[/] {escape(warning)}")
     console.print(f"[dim]Caution: {CAUTIONS}[/]")

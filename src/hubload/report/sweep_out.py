@@ -10,6 +10,7 @@ import numpy as np
 from rich import box
 from rich.console import Console
 from rich.table import Table
+from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.jsonout import number
@@ -161,7 +162,7 @@ def shaft_lines(sweep: Sweep) -> list[str]:
 
 
 def render(sweep: Sweep, console: Console) -> None:
-    console.print(f"[bold]{sweep.title}[/]  ({sweep.source})")
+    console.print(f"[bold]{escape(sweep.title)}[/]  ({escape(sweep.source)})")
     if len(sweep.axes) == 2:
         console.print(life_map(sweep))
     else:
