@@ -19,7 +19,7 @@ from hubload.casefile import study_from_document
 from hubload.cli import main
 from hubload.engine import evaluate
 from hubload.model.shaft.strength import fatigue_strength_fraction
-from hubload.overall import overall_verdict
+from hubload.engine.overall import overall_verdict
 
 SHAFT = {
     "ultimate_strength_MPa": 800, "yield_strength_MPa": 600, "surface": "machined",

@@ -1,6 +1,6 @@
 """The shaft check over a log: per-sample fatigue damage of each section and extremes.
 
-The engine's shaft check (hubload.shaftcheck) runs on every chunk of samples
+The engine's shaft check (hubload.engine.shaftcheck) runs on every chunk of samples
 like on a spectrum; each sample's damage is its hold time over its case life
 (Palmgren-Miner, as for the bearings), and the lowest safeties and the highest
 use of the supplier's curve are kept over the whole log.

@@ -6,7 +6,7 @@ import numpy as np
 from rich.table import Table
 
 from hubload.engine import Result
-from hubload.refined_method import RATING_DEVIATION_WARNING, STATIC_RATING_PRESSURE_PA
+from hubload.engine.refined_method import RATING_DEVIATION_WARNING, STATIC_RATING_PRESSURE_PA
 
 KN = 1e3
 

@@ -9,7 +9,7 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.engine import Result
-from hubload.overall import overall_verdict
+from hubload.engine.overall import overall_verdict
 from hubload.report import jsonout
 
 KN = 1e3

@@ -10,7 +10,7 @@ from rich.table import Table
 from rich.text import Text
 
 from hubload.engine import Result
-from hubload.overall import CheckItem, overall_verdict
+from hubload.engine.overall import CheckItem, overall_verdict
 from hubload.report import terminal
 
 KN = 1e3

@@ -14,7 +14,7 @@ import numpy as np
 from hubload.casefile.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
 from hubload.model.shaft import fatigue, strength, stress
-from hubload.modified_life import per_study
+from hubload.engine.modified_life import per_study
 
 MM = 1e-3
 

@@ -1,5 +1,9 @@
 """Orchestrates a study: cases -> bearing loads -> lives -> damage -> verdict.
 
+This package module holds the pair's loads and ISO 281 lives; its siblings add the
+modified life (``modified_life``), the refined load distribution (``refined_method``),
+the shaft check (``shaftcheck``) and the one verdict over bearings and shaft (``overall``).
+
 Everything is numpy-vectorised over the case axis (the last one). Study
 parameters may be arrays that broadcast against it, which is how parameter
 studies evaluate many variants in one call.
@@ -11,7 +15,7 @@ from dataclasses import dataclass, field, replace
 
 import numpy as np
 
-from hubload import modified_life, refined_method, shaftcheck
+from hubload.engine import modified_life, refined_method, shaftcheck
 from hubload.casefile.batch import picker, stack_studies
 from hubload.casefile.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
