@@ -80,18 +80,13 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
                              file=plot)
     with LateProgress("sweep") as progress:
         found = run_sweep(file, specs, on_progress=progress, method=method)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+    emit(found, sweep_out, as_json, plot, force, draw=sweep_figure)
 
-        figure = sweep_line_figure(found) if len(specs) == 1 else sweep_contour_figure(found)
-        save(figure, plot, force)
-    if as_json:
-        click.echo(sweep_out.to_json(found))
-    else:
-        sweep_out.render(found, Console())
-        if plot is not None:
-            Console().print(f"Plot written to {plot}")
+
+def sweep_figure(found):
+    from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+
+    return (sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure)(found)
 
 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
@@ -103,17 +98,13 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
     if plot is not None:
         checked_output(plot, force, (".png", ".svg"))
     found = run_compare(files, method)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.spectrum import compare_figure
+    emit(found, compare_out, as_json, plot, force, draw=compare_figure)
 
-        save(compare_figure(found), plot, force)
-    if as_json:
-        click.echo(compare_out.to_json(found))
-    else:
-        compare_out.render(found, Console())
-        if plot is not None:
-            Console().print(f"Plot written to {plot}")
+
+def compare_figure(found):
+    from hubload.report.plots.spectrum import compare_figure as figure
+
+    return figure(found)
 
 
 def brief(file: str, out: str | None = None, force: bool = False,
@@ -152,14 +143,25 @@ def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json:
         checked_output(plot, force, (".png", ".svg"))
     settings_um = setting_values_um(start_um, stop_um, step_um)
     found = run_setting_sweep(load_for_method(file, "refined"), settings_um)
+    emit(found, setting_out, as_json, plot, force, draw=setting_figure)
+
+
+def setting_figure(found):
+    from hubload.report.plots.setting import setting_figure as figure
+
+    return figure(found)
+
+
+def emit(found, output, as_json: bool, plot: str | None, force: bool, draw) -> None:
+    """Print a study's results as JSON or tables (``output``: its report module); write its
+    chart first when asked, ``draw`` building the figure (plotting is imported only then)."""
     if plot is not None:
         from hubload.report.plots import save
-        from hubload.report.plots.setting import setting_figure
 
-        save(setting_figure(found), plot, force)
+        save(draw(found), plot, force)
     if as_json:
-        click.echo(setting_out.to_json(found))
+        click.echo(output.to_json(found))
     else:
-        setting_out.render(found, Console())
+        output.render(found, Console())
         if plot is not None:
             Console().print(f"Plot written to {plot}")
