@@ -234,3 +234,26 @@ def test_bad_shaft_input_exits_2_with_a_clear_line(shaft_document, write_case_fi
     assert "\n" not in message and "Traceback" not in message
     assert message.startswith(f"error: {path}: {key_path}: "), message
     assert expected in message
+
+
+def test_section_inboard_of_both_bearings_is_said_to_carry_no_bending(shaft_document):
+    # Method of sections (Gere & Goodno, Mechanics of Materials, 8th ed., ch. 4): inboard of
+    # the inboard bearing every force on the rigid shaft acts outboard of the section and
+    # together they are in equilibrium, so no bending moment is left there, only the torque.
+    shaft_document["shaft"]["section"][0].update(position_mm=-70, carries_torque=True)
+    result = evaluate(single_case_study(shaft_document))
+    assert float(result.shaft.sections[0].loads.bending_nm[0]) == pytest.approx(0.0, abs=1e-6)
+    assert any("'flange fillet' lies inboard of both bearings" in warning
+               for warning in result.warnings)
+
+
+def test_section_between_bearings_outboard_of_the_mounting_face_is_not_flagged(shaft_document):
+    # Both bearings outboard of the mounting face (x = 0): a section between them carries the
+    # bending moment of the wheel (method of sections, Gere & Goodno, 8th ed., ch. 4) and must
+    # not be called free of bending. Positions are compared in one unit.
+    shaft_document["pair"]["outboard"]["position_mm"] = 90
+    shaft_document["pair"]["inboard"]["position_mm"] = 20
+    shaft_document["shaft"]["section"][0]["position_mm"] = 50
+    result = evaluate(single_case_study(shaft_document))
+    assert float(result.shaft.sections[0].loads.bending_nm[0]) > 0
+    assert not any("inboard of both bearings" in warning for warning in result.warnings)

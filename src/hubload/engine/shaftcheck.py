@@ -173,9 +173,9 @@ def shaft_warnings(study: Study, result: ShaftResult | None) -> list[str]:
     if result is None or any(np.ndim(section.fatigue_life_h) for section in result.sections):
         return []
     warnings = []
-    inboard_mm = float(study.pair.inboard.position_m) / MM
+    inboard_m = float(study.pair.inboard.position_m)
     for section in study.shaft.sections:
-        if float(section.position_m) <= inboard_mm:
+        if float(section.position_m) <= inboard_m:
             warnings.append(
                 f"Shaft section '{section.name}' lies inboard of both bearings: only the drive "
                 f"torque acts there, no bending. Check its position_mm (positive outboard).")
