@@ -7,10 +7,9 @@ as usual.
 
 from __future__ import annotations
 
-import tomllib
 from pathlib import Path
 
-from hubload.casefile.load import study_from_document
+from hubload.casefile.load import read_document, study_from_document
 from hubload.casefile.study import Study
 from hubload.errors import InputError
 
@@ -21,15 +20,7 @@ PLACEHOLDER_CASE = {"name": "placeholder", "time_percent": 100.0, "wheel_load_kN
 def load_machine(path: str | Path) -> tuple[Study, dict]:
     """The study (with a placeholder case) and the parsed document of ``path``."""
     file = str(path)
-    try:
-        document = tomllib.loads(Path(path).read_text(encoding="utf-8"))
-    except FileNotFoundError:
-        raise InputError("file not found", file=file) from None
-    except (OSError, UnicodeDecodeError) as error:
-        raise InputError(f"cannot read the file ({error})", file=file) from None
-    except tomllib.TOMLDecodeError as error:
-        raise InputError(f"TOML syntax error: {error}", file=file) from None
-    machine = {key: value for key, value in document.items() if key != "case"}
+    machine = {key: value for key, value in read_document(path).items() if key != "case"}
     try:
         study = study_from_document({**machine, "case": [PLACEHOLDER_CASE]}, source=file)
     except InputError as error:
