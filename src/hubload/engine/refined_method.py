@@ -15,6 +15,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.casefile.study import Bearing, Study
+from hubload.engine.modified_life import per_study
 from hubload.model import iso281
 from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings
 from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
@@ -72,12 +73,6 @@ def geometry_ratings(study: Study) -> dict[str, GeometryRatings]:
             per_study(ratings.dynamic_rating_n(*args) * bearing.geometry_rating_factor),
             per_study(ratings.static_rating_n(*args)))
     return found
-
-
-def per_study(value) -> np.ndarray:
-    """A per-study value from one that broadcasts over cases: (..., 1) -> (...)."""
-    value = np.asarray(value, dtype=float)
-    return value[..., 0] if value.ndim else value
 
 
 def uniform(value) -> bool:

@@ -38,9 +38,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.model.refined import contact
-
-BACK_TO_BACK = "back-to-back"
-FACE_TO_FACE = "face-to-face"
+from hubload.model.tapered_pair import outboard_carries_inboard_push
 
 
 @dataclass(frozen=True)
@@ -72,7 +70,7 @@ def pair_bearings(arrangement: str, outboard: RollerSet, outboard_x_m: float,
     inboard, so it is compressed by inboard shaft motion (s = -1); face-to-face
     the other way round (docs/conventions.md).
     """
-    outboard_sign = -1 if arrangement == BACK_TO_BACK else 1
+    outboard_sign = -1 if outboard_carries_inboard_push(arrangement) else 1
     return (MountedBearing(outboard, float(outboard_x_m), outboard_sign),
             MountedBearing(inboard, float(inboard_x_m), -outboard_sign))
 

@@ -34,6 +34,7 @@ from __future__ import annotations
 
 import numpy as np
 
+from hubload.model.iso281 import LIFE_EXPONENT_ROLLER, WEIBULL_SLOPE_ROLLER
 from hubload.model.refined.layout import RollerSet
 from hubload.model.refined.ratings import (
     RATING_FACTOR_TAPERED, REDUCTION_FACTOR_ROLLER, geometry_ratio)
@@ -43,11 +44,9 @@ RACEWAY_CAPACITY_CONSTANT = 552.0
 ROTATING_MEAN_EXPONENT = 4.0
 STANDING_MEAN_EXPONENT = 4.5
 LAMINA_LIFE_EXPONENT = 4.5
-WEIBULL_SLOPE = 9.0 / 8.0
-ISO281_LIFE_EXPONENT = 10.0 / 3.0
 # L10r goes with the lamina ratings to the power (9/2)(8/9) = 4: Lundberg and Palmgren's
 # line-contact life exponent [2], not ISO 281's 10/3.
-RATING_LIFE_EXPONENT = LAMINA_LIFE_EXPONENT / WEIBULL_SLOPE
+RATING_LIFE_EXPONENT = LAMINA_LIFE_EXPONENT / WEIBULL_SLOPE_ROLLER
 
 
 def lamina_ratings_n(rollers: RollerSet, laminae: int):
@@ -89,7 +88,7 @@ def reference_life_mrev(rollers: RollerSet, lamina_loads_n, rotating_ring="inner
                     + (equivalent_outer / rating_outer) ** LAMINA_LIFE_EXPONENT, axis=0)
     with np.errstate(divide="ignore"):
         return np.where(damage > 0, np.power(np.where(damage > 0, damage, 1.0),
-                                             -1.0 / WEIBULL_SLOPE), np.inf)
+                                             -1.0 / WEIBULL_SLOPE_ROLLER), np.inf)
 
 
 def life_factor_of_rating_factor(rating_factor):
@@ -104,4 +103,4 @@ def life_factor_of_rating_factor(rating_factor):
 def reference_equivalent_load_n(dynamic_rating_n, life_mrev):
     """Pref [N] = C / L10r^(3/10): the load whose ISO 281 life equals L10r [1]."""
     with np.errstate(divide="ignore"):
-        return dynamic_rating_n * np.power(life_mrev, -1.0 / ISO281_LIFE_EXPONENT)
+        return dynamic_rating_n * np.power(life_mrev, -1.0 / LIFE_EXPONENT_ROLLER)
