@@ -65,12 +65,16 @@ def validate_subtable(data: Any, table: Table, path: str) -> Any:
 
 
 def reject_unknown_keys(data: dict, table: Table, path: str) -> None:
-    valid = table.keys
     for key in data:
-        if key not in valid:
-            close = difflib.get_close_matches(key, valid, n=1, cutoff=0.5)
-            hint = f"did you mean '{close[0]}'?" if close else "valid keys: " + ", ".join(valid)
-            raise InputError(f"unknown key; {hint}", key_path=join_path(path, key))
+        if key not in table.keys:
+            raise InputError(f"unknown key; {nearest_key_hint(key, table)}",
+                             key_path=join_path(path, key))
+
+
+def nearest_key_hint(key: str, table: Table) -> str:
+    """'did you mean ...?' with the closest valid key of ``table``, else the valid keys."""
+    close = difflib.get_close_matches(key, table.keys, n=1, cutoff=0.5)
+    return f"did you mean '{close[0]}'?" if close else "valid keys: " + ", ".join(table.keys)
 
 
 def validate_value(value: Any, spec: Field, path: str) -> Any:

@@ -14,7 +14,8 @@ from collections.abc import Mapping
 from dataclasses import dataclass
 
 from hubload.casefile.load import study_from_validated
-from hubload.casefile.validate import validate_document, validate_number, validate_value
+from hubload.casefile.validate import (nearest_key_hint, validate_document, validate_number,
+                                      validate_value)
 from hubload.casefile.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
@@ -86,11 +87,7 @@ def step_into_table(node: object, sub: Table, index: int | None, text: str) -> o
 
 
 def unknown_key(name: str, table: Table, text: str) -> InputError:
-    import difflib
-
-    close = difflib.get_close_matches(name, table.keys, n=1, cutoff=0.5)
-    hint = f"did you mean '{close[0]}'?" if close else "valid keys: " + ", ".join(table.keys)
-    return InputError(f"unknown key '{name}'; {hint}", key_path=text)
+    return InputError(f"unknown key '{name}'; {nearest_key_hint(name, table)}", key_path=text)
 
 
 def check_numeric(field: Field, index: int | None, node: object, text: str) -> None:
