@@ -136,8 +136,8 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
         study=study, bearings=bearings, system_life_h=system_h,
         system_life_km=per_study_km(system_h, mean_rpm, study),
         system_damage_share=system_damage_share(bearings), mean_speed_rpm=mean_rpm,
-        warnings=collect_warnings(study, bearings, modified, refined)
-        + shaftcheck.shaft_warnings(study, shaft) if single and with_warnings else [],
+        warnings=collect_warnings(study, bearings, modified, refined, shaft)
+        if single and with_warnings else [],
         a1=modified_life.per_study(modified_life.reliability_life_factor(study)),
         modified=modified, shaft=shaft, refined=refined,
         geometry_ratings=refined_method.geometry_ratings(study))
@@ -154,15 +154,15 @@ def evaluate_many(studies: list[Study]) -> list[Result]:
     results = []
     for index, study in enumerate(studies):
         point = take(index)
-        results.append(replace(point, warnings=collect_warnings(study, point.bearings,
-                                                                 point.modified, point.refined)
-                               + shaftcheck.shaft_warnings(study, point.shaft)))
+        results.append(replace(point, warnings=collect_warnings(
+            study, point.bearings, point.modified, point.refined, point.shaft)))
     return results
 
 
 def collect_warnings(study: Study, bearings: dict[str, BearingResult],
                      modified: modified_life.ModifiedLife | None = None,
-                     refined: refined_method.RefinedPair | None = None) -> list[str]:
+                     refined: refined_method.RefinedPair | None = None,
+                     shaft: shaftcheck.ShaftResult | None = None) -> list[str]:
     """Plain-language warnings for a single study (no parameter arrays)."""
     warnings = []
     if study.cases.operating is not None:
@@ -180,6 +180,7 @@ def collect_warnings(study: Study, bearings: dict[str, BearingResult],
                 f"with shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''}).")
     warnings.extend(modified_life.warnings(modified, study.cases.names))
     warnings.extend(refined_method.warnings(study, refined))
+    warnings.extend(shaftcheck.shaft_warnings(study, shaft))
     return warnings
 
 
