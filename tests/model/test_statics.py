@@ -57,3 +57,18 @@ def test_reactions_broadcast_over_cases_and_batch_axes():
     fr_o, fr_i = statics.radial_loads(wheel, 0.0, 0.0, offsets, 0.4, 0.03, -0.05)
     assert fr_o.shape == (2, 3)
     assert np.all(np.diff(fr_o, axis=0) > 0)
+
+
+@settings(max_examples=100)
+@given(wheel=st.floats(0, 1e5), side=finite, tractive=finite, offset=position,
+       radius=st.floats(0.1, 0.8), point=position)
+def test_tyre_moments_are_the_cross_product_of_lever_and_ground_force(
+        wheel, side, tractive, offset, radius, point):
+    # Moment of a force about a point, M = r x F (Meriam & Kraige, Engineering Mechanics:
+    # Statics, ch. 2), evaluated by numpy's cross product: ground force (-S, W, T) at the
+    # contact patch (offset, -R, 0), point (x, 0, 0) on the axis; M_x is the drive torque.
+    expected = np.cross([offset - point, -radius, 0.0], [-side, wheel, tractive])
+    moment_y, moment_z = statics.tyre_moments_nm(point, wheel, side, tractive, offset, radius)
+    scale = max(1.0, abs(wheel), abs(side), abs(tractive))
+    assert moment_y == pytest.approx(expected[1], abs=1e-9 * scale)
+    assert moment_z == pytest.approx(expected[2], abs=1e-9 * scale)

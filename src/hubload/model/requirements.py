@@ -19,6 +19,7 @@ from __future__ import annotations
 
 import numpy as np
 
+from hubload.model import statics
 from hubload.model.iso281 import LIFE_EXPONENT_ROLLER
 
 
@@ -59,13 +60,10 @@ def wheel_moment_nm(section_x_m, wheel_load_n, side_force_n, tractive_force_n, o
                     loaded_radius_m):
     """Bending moment [N m] of the tyre forces about the shaft axis at ``section_x_m`` [m] [4].
 
-    The ground forces act at the contact patch r = (offset - x, -R, 0) from the
-    section's centre: F = (-S, W, T) (side force positive inboard). M = r x F gives
-    M_y = -(offset - x) T and M_z = (offset - x) W - R S; the bending moment the
-    motor's mounting face must carry is hypot(M_y, M_z). The moment about the axis
-    itself (-R T) is the drive torque, carried by the motor, and is not included.
+    The resultant hypot(M_y, M_z) of the ground forces' moments about the section's
+    centre (:func:`hubload.model.statics.tyre_moments_nm`, side force positive
+    inboard): the bending moment the motor's mounting face must carry. The drive
+    torque about the axis is carried by the motor and is not included.
     """
-    lever_m = np.asarray(offset_m) - section_x_m
-    vertical_nm = lever_m * wheel_load_n - np.asarray(loaded_radius_m) * side_force_n
-    horizontal_nm = -lever_m * np.asarray(tractive_force_n)
-    return np.hypot(vertical_nm, horizontal_nm)
+    return np.hypot(*statics.tyre_moments_nm(section_x_m, wheel_load_n, side_force_n,
+                                             tractive_force_n, offset_m, loaded_radius_m))

@@ -47,6 +47,19 @@ def tyre_couple_vertical_nm(side_force_n, loaded_radius_m):
     return -loaded_radius_m * side_force_n
 
 
+def tyre_moments_nm(point_x_m, wheel_load_n, side_force_n, tractive_force_n, offset_m,
+                    loaded_radius_m):
+    """Moments (M_y, M_z) [N m] of the ground forces about the point (x, 0, 0) on the axis.
+
+    The forces F = (-S, W, T) act at the contact patch, r = (offset - x, -R, 0) from
+    the point: M = r x F gives M_y = -(offset - x) T and M_z = (offset - x) W - R S [1].
+    The moment about the axis itself (-R T) is the drive torque, carried by the motor.
+    """
+    lever_m = np.asarray(offset_m) - point_x_m
+    return (-lever_m * np.asarray(tractive_force_n, dtype=float),
+            lever_m * wheel_load_n + tyre_couple_vertical_nm(side_force_n, loaded_radius_m))
+
+
 def bearing_reactions(wheel_load_n, side_force_n, tractive_force_n, offset_m,
                       loaded_radius_m, outboard_x_m, inboard_x_m):
     """Forces [N] of the outboard and inboard bearing on the shaft, both planes.

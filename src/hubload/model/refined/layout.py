@@ -37,6 +37,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
+from hubload.model import statics
 from hubload.model.refined import contact
 from hubload.model.tapered_pair import outboard_carries_inboard_push
 
@@ -152,16 +153,14 @@ def external_load_vector(wheel_load_n, side_force_n, tractive_force_n, offset_m,
                          loaded_radius_m, mid_x_m, half_spread_m):
     """Generalised external load (Fx, Fy, Fz, My/h, Mz/h) [N] on the shaft, about x_m.
 
-    The ground forces (-S, W, T) act at the contact patch (offset, -R, 0)
-    (hubload.model.statics); their moment about (x_m, 0, 0) is r x F with
-    r = (offset - x_m, -R, 0): My = -(offset - x_m) T, Mz = (offset - x_m) W - R S.
+    The ground forces (-S, W, T) act at the contact patch (offset, -R, 0); their
+    moments My, Mz about (x_m, 0, 0) are those of hubload.model.statics.tyre_moments_nm.
     The moment about the axis (drive torque) is carried by the motor.
     """
-    arm = offset_m - mid_x_m
+    moment_y_nm, moment_z_nm = statics.tyre_moments_nm(
+        mid_x_m, wheel_load_n, side_force_n, tractive_force_n, offset_m, loaded_radius_m)
     forces = np.broadcast_arrays(-np.asarray(side_force_n, dtype=float),
                                  np.asarray(wheel_load_n, dtype=float),
                                  np.asarray(tractive_force_n, dtype=float),
-                                 -arm * tractive_force_n / half_spread_m,
-                                 (arm * wheel_load_n - loaded_radius_m * side_force_n)
-                                 / half_spread_m)
+                                 moment_y_nm / half_spread_m, moment_z_nm / half_spread_m)
     return np.stack(forces)
