@@ -24,6 +24,7 @@ References
 
 from __future__ import annotations
 
+import math
 from dataclasses import dataclass
 
 import numpy as np
@@ -100,20 +101,25 @@ def aggregate(keys: np.ndarray, weights: np.ndarray) -> tuple[np.ndarray, np.nda
     if keys.shape[-1] == 0:
         return keys, np.zeros((weights.shape[0], 0))
     origin = keys.min(axis=1, keepdims=True)
-    spans = keys.max(axis=1) - origin[:, 0] + 1
-    flat = np.ravel_multi_index(tuple(keys - origin), tuple(int(s) for s in spans))
-    size = int(np.prod(spans))
+    shape = tuple(int(span) for span in keys.max(axis=1) - origin[:, 0] + 1)
+    flat = np.ravel_multi_index(tuple(keys - origin), shape)
+    size = math.prod(shape)
     if size <= 4 * flat.size:
-        counts = np.bincount(flat, minlength=size)
-        occupied = np.flatnonzero(counts)
-        sums = np.stack([np.bincount(flat, weights=w, minlength=size)[occupied]
-                         for w in weights]) if len(weights) else np.zeros((0, occupied.size))
+        occupied = np.flatnonzero(np.bincount(flat, minlength=size))
+        sums = bin_sums(flat, weights, size)[:, occupied]
     else:
         occupied, inverse = np.unique(flat, return_inverse=True)
-        sums = np.stack([np.bincount(inverse, weights=w, minlength=occupied.size)
-                         for w in weights]) if len(weights) else np.zeros((0, occupied.size))
-    cell_keys = np.stack(np.unravel_index(occupied, tuple(int(s) for s in spans))) + origin
+        sums = bin_sums(inverse, weights, occupied.size)
+    cell_keys = np.stack(np.unravel_index(occupied, shape)) + origin
     return cell_keys.astype(np.int64), sums
+
+
+def bin_sums(bins: np.ndarray, weights: np.ndarray, size: int) -> np.ndarray:
+    """Sums (k, size) of each row of ``weights`` (k, n) over the samples in each bin."""
+    sums = np.zeros((len(weights), size))
+    for row, weight in enumerate(weights):
+        sums[row] = np.bincount(bins, weights=weight, minlength=size)
+    return sums
 
 
 def coarsened(table: DwellTable, exponents) -> DwellTable:
