@@ -62,7 +62,7 @@ def basic_rating_life_mrev(dynamic_rating_n, equivalent_load_n):
 
 
 def life_hours(life_mrev, speed_rpm):
-    """Life [h] from life [10^6 rev] at speed [r/min]; inf at standstill."""
+    """Life [h] = 10^6 L / (60 n) from life [10^6 rev] at speed [r/min] [1, 7.1]; inf at standstill."""
     speed = np.asarray(speed_rpm, dtype=float)
     with np.errstate(divide="ignore", invalid="ignore"):
         hours = life_mrev * 1e6 / (60.0 * speed)
@@ -83,7 +83,8 @@ def spectrum_life_h(damage_rate):
 
 
 def damage_shares(damage_rate):
-    """Each case's share of the damage (sums to 1 over the case axis; 0 when no damage)."""
+    """Each case's share of the Palmgren-Miner damage sum [3] (sums to 1 over the case axis;
+    0 when no damage)."""
     total = np.sum(damage_rate, axis=-1, keepdims=True)
     return np.where(total > 0, damage_rate / np.where(total > 0, total, 1.0), 0.0)
 

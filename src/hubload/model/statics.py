@@ -80,7 +80,7 @@ def bearing_reactions(wheel_load_n, side_force_n, tractive_force_n, offset_m,
 
 def radial_loads(wheel_load_n, side_force_n, tractive_force_n, offset_m,
                  loaded_radius_m, outboard_x_m, inboard_x_m):
-    """Radial load [N] on the outboard and inboard bearing: vector sum of both planes."""
+    """Radial load [N] on the outboard and inboard bearing: vector sum of both planes [1]."""
     v_o, v_i, h_o, h_i = bearing_reactions(
         wheel_load_n, side_force_n, tractive_force_n, offset_m,
         loaded_radius_m, outboard_x_m, inboard_x_m)
@@ -90,7 +90,8 @@ def radial_loads(wheel_load_n, side_force_n, tractive_force_n, offset_m,
 def external_axial_force_n(side_force_n):
     """Axial force [N] of the wheel on the shaft, positive outboard (+x).
 
-    A positive side force pushes the tyre, and so the shaft, inboard.
+    A positive side force pushes the tyre, and so the shaft, inboard (sign
+    convention of this module, docs/conventions.md; axial force balance [1]).
     """
     return -np.asarray(side_force_n, dtype=float)
 

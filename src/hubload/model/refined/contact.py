@@ -18,7 +18,7 @@ References
 [3] W. C. Young, R. G. Budynas, Roark's Formulas for Stress and Strain, 7th ed.,
     McGraw-Hill 2002, table 14.1 case 2 (two parallel cylinders): maximum
     pressure p = sqrt(q E* / (pi R)), 1/E* = sum (1 - nu^2)/E, 1/R = sum 1/R_i.
-[4] J. B. Lundberg, Elastische Beruehrung zweier Halbraeume, Forsch. Ing.-Wes. 10
+[4] G. Lundberg, Elastische Beruehrung zweier Halbraeume, Forsch. Ing.-Wes. 10
     (1939): logarithmic roller profile, drop growing as ln(1 / (1 - (2 x/L)^2)).
 """
 
@@ -58,7 +58,8 @@ def lamina_stiffness_n_per_m(roller_length_m, laminae=LAMINAE, exponent=LOAD_EXP
 
 
 def lamina_offsets_m(roller_length_m, laminae=LAMINAE):
-    """Centre of each lamina along the roller [m], from the roller's mid-length."""
+    """Centre of each lamina along the roller [m], from the roller's mid-length
+    (equal widths, ISO/TS 16281 slicing [2])."""
     width = roller_length_m / laminae
     return (np.arange(laminae) + 0.5) * width - 0.5 * roller_length_m
 
@@ -84,7 +85,10 @@ def effective_modulus_pa(modulus_pa=STEEL_MODULUS_PA, poisson=STEEL_POISSON):
 def inner_contact_radius_m(roller_diameter_m, contact_angle_rad, pitch_diameter_m):
     """Equivalent radius R [m] of the roller/inner-raceway contact, normal to the line.
 
-    1/R = 2/Dwe + 2 cos(a)/(Dpw - Dwe cos(a)), i.e. R = Dwe (1 - gamma)/2; the
+    1/R = 2/Dwe + 2 cos(a)/(Dpw - Dwe cos(a)), i.e. R = Dwe (1 - gamma)/2: the sum
+    of the curvatures of the two bodies [3], with the raceway's radius normal to the
+    contact line taken as in the curvature sums of T. A. Harris, M. N. Kotzalas,
+    Essential Concepts of Bearing Technology, 5th ed., ch. 2 (from memory). The
     inner contact is the more curved one and so carries the higher pressure.
     """
     gamma = roller_diameter_m * np.cos(contact_angle_rad) / pitch_diameter_m
