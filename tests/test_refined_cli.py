@@ -196,3 +196,28 @@ def test_setting_bad_options_exit_2(document, write_case_file, args, words):
 def test_setting_needs_the_geometry(document, write_case_file):
     found = run("setting", write_case_file(document))
     assert found.exit_code == 2 and "pair.outboard.rollers" in found.output
+
+
+def test_setting_table_prints_a_zero_life_as_zero_not_infinite(document, write_case_file):
+    # A setting without equilibrium for some case gets lives of zero (its warning says so);
+    # the table must show 0 h there: a zero life read as "infinite" would pass a bad setting.
+    import dataclasses
+
+    import numpy as np
+    from rich.console import Console
+
+    from hubload.casefile import load_study
+    from hubload.report import setting_out
+    from hubload.studies.setting import run_setting_sweep
+
+    study = load_study(write_case_file(symmetric_radial(document)))
+    sweep = run_setting_sweep(study, np.array([-20.0, 0.0, 20.0]))
+    result = sweep.result
+    zeroed = dataclasses.replace(result, system_life_h=np.where([0, 1, 0], 0.0,
+                                                                 result.system_life_h))
+    console = Console(record=True, width=200)
+    setting_out.render(dataclasses.replace(sweep, result=zeroed), console)
+    rows = [[cell.strip() for cell in line.split("│")[1:-1]]
+            for line in console.export_text().splitlines() if line.startswith("│")]
+    row = next(row for row in rows if row[0] == "0")
+    assert row[-1] == "0" and "infinite" not in row

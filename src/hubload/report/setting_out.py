@@ -28,7 +28,8 @@ def microns(metres) -> float | None:
 
 
 def hours(value) -> str:
-    value = float(value)
+    """A life [h] of the table; None is JSON's infinite life, 0 a setting without equilibrium."""
+    value = math.inf if value is None else float(value)
     return "infinite" if not math.isfinite(value) else f"{value:,.0f}"
 
 
@@ -98,10 +99,10 @@ def render(sweep: SettingSweep, console: Console) -> None:
         cells = [f"{point['setting_um']:g}"]
         for label in labels:
             entry = point["bearings"][label]
-            cells += [hours(entry["l10_h"] or math.inf), f"{entry['min_load_zone_deg']:.0f}"]
-        cells.append(hours(point["system"]["l10_h"] or math.inf))
+            cells += [hours(entry["l10_h"]), f"{entry['min_load_zone_deg']:.0f}"]
+        cells.append(hours(point["system"]["l10_h"]))
         if modified:
-            cells.append(hours(point["system"]["l10m_h"] or math.inf))
+            cells.append(hours(point["system"]["l10m_h"]))
         inside = best is not None and best.low_m / UM - 1e-9 <= point["setting_um"] \
             <= best.high_m / UM + 1e-9
         table.add_row(*cells, style="bold green" if inside else None)
