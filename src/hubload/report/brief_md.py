@@ -6,6 +6,7 @@ import math
 
 import numpy as np
 
+from hubload.report import numbers
 from hubload.report.cautions import CAUTIONS
 from hubload.report.series import MISSING, lookup, shaft_min_safety
 from hubload.studies.requirements import BearingNeeds, Requirements, Solve
@@ -19,9 +20,9 @@ def kn(newtons: float) -> str:
 
 
 def hours(value) -> str:
-    if value is None or (isinstance(value, float) and math.isinf(value)):
-        return "infinite"
-    return f"{value:,.0f} h"
+    """A life with its unit ('infinite' for an infinite life or null)."""
+    text = numbers.hours(value)
+    return f"{text} h" if math.isfinite(numbers.life_h(value)) else text
 
 
 def life_label(needs: Requirements) -> str:
@@ -102,7 +103,7 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
         ("max static equivalent load P0", each(lambda b: f"{kn(b.max_static.value)} "
                                                           f"({b.max_static.case})")),
         ("static rating C0 given (s0 now)", each(lambda b: f"{kn(b.static_rating_n)} "
-                                                           f"(s0 = {b.static_safety:.2f})")),
+                                                           f"(s0 = {numbers.safety(b.static_safety)})")),
         (f"C0 for s0 >= {s0}", each(lambda b: kn(b.required_static_rating_n))),
     ]
 
@@ -121,7 +122,7 @@ def bearing_section(needs: Requirements) -> list[str]:
     shaft = shaft_min_safety(needs.document)
     if shaft is not MISSING:
         lines += [f"Shaft: lowest fatigue safety factor over its sections "
-                  f"{'infinite' if shaft is None else f'{shaft:.2f}'} (see `hubload check`).", ""]
+                  f"{numbers.safety(shaft)} (see `hubload check`).", ""]
     return lines
 
 
@@ -223,7 +224,7 @@ def rating_questions(needs: Requirements) -> list[tuple[str, str, str]]:
     static = worst(needs.bearings, lambda b: b.required_static_rating_n / b.static_rating_n)
     items.append(("Static capacity", f"P0 up to {kn(static.max_static.value)} on the "
                   f"{static.label} bearing in '{static.max_static.case}', s0 = "
-                  f"{static.static_safety:.2f}",
+                  f"{numbers.safety(static.static_safety)}",
                   f"Is s0 >= {needs.required_s0:g} enough for shocks on site, and do the ratings "
                   "C and C0 hold as mounted (housing, shaft hardness)?"))
     return items

@@ -9,9 +9,8 @@ from rich.table import Table
 from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
-from hubload.report.jsonout import number
+from hubload.report.numbers import hours, json_number, safety, share
 from hubload.report.series import MISSING, all_series, damage_shares_of, shaft_min_safety
-from hubload.report.terminal import hours, share
 from hubload.studies.compare import Comparison
 
 # Keys of the check's JSON left out per file: the case table (summarised as damage shares)
@@ -36,7 +35,7 @@ def compare_document(comparison: Comparison) -> dict:
                if key not in PER_CASE_KEYS},
             "damage_shares": damage_shares(entry.document),
             "damage_life": damage_shares_of(entry.document).life,
-            "ratio_to_first": {label: None if values[index] is None else number(values[index])
+            "ratio_to_first": {label: None if values[index] is None else json_number(values[index])
                                for label, values in ratios.items()},
         })
     return {"files": files, "cautions": CAUTIONS}
@@ -71,9 +70,7 @@ def lives_table(comparison: Comparison) -> Table:
     table.add_row("worst s0", *(worst_safety(e.document) for e in entries))
     shafts = [shaft_min_safety(e.document) for e in entries]
     if any(value is not MISSING for value in shafts):
-        table.add_row("shaft min safety", *("-" if v is MISSING else
-                                            ("infinite" if v is None else f"{v:.2f}")
-                                            for v in shafts))
+        table.add_row("shaft min safety", *("-" if v is MISSING else safety(v) for v in shafts))
     table.add_row("verdict", *(verdict_text(e.document) for e in entries))
     if any(isinstance(e.document.get("overall_verdict"), dict) for e in entries):
         table.add_row("overall verdict", *(overall_text(e.document) for e in entries))
@@ -84,7 +81,7 @@ def lives_table(comparison: Comparison) -> Table:
 
 def worst_safety(document: dict) -> str:
     safeties = [s.values([document])[0] for s in all_series(document) if s.label.endswith(" s0")]
-    return f"{min(safeties):.2f}" if safeties else "-"
+    return safety(min(safeties)) if safeties else "-"
 
 
 def verdict_text(document: dict) -> str:

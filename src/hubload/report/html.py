@@ -18,6 +18,7 @@ from hubload.engine import Result
 from hubload.report.cautions import CAUTIONS
 from hubload.report.html_style import STYLE
 from hubload.report.jsonout import result_document
+from hubload.report.numbers import hours, share
 from hubload.report.plots import svg_text
 from hubload.report.plots.spectrum import damage_share_figure, loads_figure
 from hubload.report.series import damage_shares_of
@@ -58,9 +59,9 @@ def number_text(key: str, value: float) -> str:
     if not math.isfinite(value):
         return "infinite"
     if "share" in key or key == "time_fraction" or key.endswith("utilisation"):
-        return f"{100 * value:.1f} %"
+        return share(value)
     if key.endswith(LIFE_SUFFIXES):
-        return f"{value:,.0f}" if abs(value) >= 10 else f"{value:.3g}"
+        return hours(value)
     if key in ("index", "count") or (value.is_integer() and abs(value) >= 1000):
         return f"{value:,.0f}"
     return f"{value:.2f}" if abs(value) >= 0.1 else f"{value:.3g}"

@@ -6,8 +6,6 @@ Infinite lives (and undefined values) are written as null.
 from __future__ import annotations
 
 import json
-import math
-from typing import Any
 
 import numpy as np
 
@@ -15,16 +13,11 @@ from hubload.engine import Result, verdict
 from hubload.report import shaft_json
 from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_json import add_modified_life
+from hubload.report.numbers import json_number
 from hubload.report.operating import case_entry
 from hubload.report.refined_json import add_refined
 
 KN = 1e3
-
-
-def number(value: Any) -> float | None:
-    """A finite float, or None for inf/NaN (JSON has neither)."""
-    value = float(value)
-    return value if math.isfinite(value) else None
 
 
 def case_entries(result: Result) -> list[dict]:
@@ -34,19 +27,19 @@ def case_entries(result: Result) -> list[dict]:
         bearings = {}
         for label, bearing in result.bearings.items():
             bearings[label] = {
-                "fr_kN": number(bearing.radial_n[index] / KN),
-                "fa_kN": number(bearing.axial_n[index] / KN),
-                "p_kN": number(bearing.equivalent_n[index] / KN),
-                "p0_kN": number(bearing.static_equivalent_n[index] / KN),
-                "l10_h": number(bearing.case_life_h[index]),
-                "damage_share": number(bearing.damage_share[index]),
+                "fr_kN": json_number(bearing.radial_n[index] / KN),
+                "fa_kN": json_number(bearing.axial_n[index] / KN),
+                "p_kN": json_number(bearing.equivalent_n[index] / KN),
+                "p0_kN": json_number(bearing.static_equivalent_n[index] / KN),
+                "l10_h": json_number(bearing.case_life_h[index]),
+                "damage_share": json_number(bearing.damage_share[index]),
             }
         entries.append({
             "name": name,
-            "time_fraction": number(cases.time_fraction[index]),
-            "speed_rpm": number(cases.speed_rpm[index]),
+            "time_fraction": json_number(cases.time_fraction[index]),
+            "speed_rpm": json_number(cases.speed_rpm[index]),
             "bearings": bearings,
-            "system_damage_share": number(result.system_damage_share[index]),
+            "system_damage_share": json_number(result.system_damage_share[index]),
             **case_entry(cases, index),
         })
     return entries
@@ -56,9 +49,9 @@ def bearing_summaries(result: Result) -> dict:
     pair = result.study.pair.bearings()
     return {label: {
         "name": pair[label].label,
-        "l10_h": number(bearing.life_h),
-        "l10_km": number(bearing.life_km),
-        "s0": number(bearing.static_safety),
+        "l10_h": json_number(bearing.life_h),
+        "l10_km": json_number(bearing.life_km),
+        "s0": json_number(bearing.static_safety),
     } for label, bearing in result.bearings.items()}
 
 
@@ -73,13 +66,13 @@ def result_document(result: Result) -> dict:
         "method": "iso281",
         "cases": case_entries(result),
         "bearings": bearing_summaries(result),
-        "system": {"l10_h": number(result.system_life_h),
-                   "l10_km": number(result.system_life_km)},
-        "mean_speed_rpm": number(result.mean_speed_rpm),
+        "system": {"l10_h": json_number(result.system_life_h),
+                   "l10_km": json_number(result.system_life_km)},
+        "mean_speed_rpm": json_number(result.mean_speed_rpm),
         "dominant_case": {"index": dominant, "name": study.cases.names[dominant]}
         if np.any(result.system_damage_share > 0) else None,
         "verdict": None if found is None else {
-            "life": found.life_name, "life_h": number(found.life_h),
+            "life": found.life_name, "life_h": json_number(found.life_h),
             "target_h": found.target_h, "passed": found.passed, "basis": found.basis},
         "warnings": list(result.warnings),
         "cautions": CAUTIONS,

@@ -12,7 +12,7 @@ from dataclasses import asdict
 from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.cautions import CAUTIONS
-from hubload.report.jsonout import number
+from hubload.report.numbers import json_number
 
 KN = 1e3
 
@@ -27,19 +27,19 @@ def cleaning_entry(result: SpectrumResult, policy: str) -> dict:
 
 def modified(lives: dict | None, label: str) -> dict:
     """``{"l10m_h": ...}`` when lubrication is given (the key of check's contract), else {}."""
-    return {} if lives is None else {"l10m_h": number(lives[label])}
+    return {} if lives is None else {"l10m_h": json_number(lives[label])}
 
 
 def direct_entry(result: SpectrumResult) -> dict:
     lives = result.modified_life_h
     system = None if lives is None else {"system": result.modified_system_life_h}
     return {
-        "bearings": {label: {"l10_h": number(result.life_h[label]),
+        "bearings": {label: {"l10_h": json_number(result.life_h[label]),
                              **modified(lives, label),
-                             "damage": number(result.damage[label]),
-                             "s0": number(result.static_safety[label])} for label in LABELS},
-        "system": {"l10_h": number(result.system_life_h), **modified(system, "system")},
-        "damage_by_class": {key: [{k: number(v) for k, v in asdict(share).items()}
+                             "damage": json_number(result.damage[label]),
+                             "s0": json_number(result.static_safety[label])} for label in LABELS},
+        "system": {"l10_h": json_number(result.system_life_h), **modified(system, "system")},
+        "damage_by_class": {key: [{k: json_number(v) for k, v in asdict(share).items()}
                                   for share in shares]
                             for key, shares in result.shares.items()},
     }
@@ -52,12 +52,12 @@ def shaft_entries(result: SpectrumResult) -> dict:
     study_shaft = result.classed.study.shaft
     extremes = result.summary.shaft
     direct = {"sections": [{
-        "name": section.name, "fatigue_life_h": number(life),
-        "min_safety": number(extremes["min_safety"][i]),
-        "yield_safety": number(extremes["yield_safety"][i]),
+        "name": section.name, "fatigue_life_h": json_number(life),
+        "min_safety": json_number(extremes["min_safety"][i]),
+        "yield_safety": json_number(extremes["yield_safety"][i]),
     } for i, (section, life) in enumerate(zip(study_shaft.sections, result.shaft_life_h))],
-        "max_permissible_utilisation": number(extremes["max_utilisation"][0])}
-    classed = {"sections": [{"name": s.name, "fatigue_life_h": number(s.fatigue_life_h)}
+        "max_permissible_utilisation": json_number(extremes["max_utilisation"][0])}
+    classed = {"sections": [{"name": s.name, "fatigue_life_h": json_number(s.fatigue_life_h)}
                             for s in result.classed.shaft.sections]}
     return {"direct": direct, "classed": classed}
 
@@ -71,22 +71,22 @@ def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
         "system": classed.modified.system_life_h,
         **{label: b.life_h for label, b in classed.modified.bearings.items()}}
     return {
-        "system": {"l10_h": number(classed.system_life_h), **modified(lives, "system")},
-        "bearings": {label: {"l10_h": number(classed.bearings[label].life_h),
+        "system": {"l10_h": json_number(classed.system_life_h), **modified(lives, "system")},
+        "bearings": {label: {"l10_h": json_number(classed.bearings[label].life_h),
                              **modified(lives, label)} for label in LABELS},
-        "classes": {key: {"width": number(table.widths[i]),
+        "classes": {key: {"width": json_number(table.widths[i]),
                           "count": int(len(set(table.keys[i].tolist())))}
                     for i, key in enumerate(CLASS_CHANNELS)},
         "spectrum_file": spectrum_file,
         "cases": [{
             "name": name,
-            "time_fraction": number(cases.time_fraction[i]),
-            "wheel_load_kN": number(cases.wheel_load_n[i] / KN),
-            "side_force_kN": number(cases.side_force_n[i] / KN),
-            "tractive_force_kN": number(cases.tractive_force_n[i] / KN),
-            "speed_rpm": number(cases.speed_rpm[i]),
-            **({} if temperatures is None else {"temperature_C": number(temperatures[i])}),
-            "system_damage_share": number(classed.system_damage_share[i]),
+            "time_fraction": json_number(cases.time_fraction[i]),
+            "wheel_load_kN": json_number(cases.wheel_load_n[i] / KN),
+            "side_force_kN": json_number(cases.side_force_n[i] / KN),
+            "tractive_force_kN": json_number(cases.tractive_force_n[i] / KN),
+            "speed_rpm": json_number(cases.speed_rpm[i]),
+            **({} if temperatures is None else {"temperature_C": json_number(temperatures[i])}),
+            "system_damage_share": json_number(classed.system_damage_share[i]),
         } for i, name in enumerate(cases.names)],
     }
 
@@ -97,18 +97,18 @@ def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None)
     return {
         "log": summary.name,
         "rows": summary.cleaning.rows,
-        "duration_h": number(summary.duration_h),
+        "duration_h": json_number(summary.duration_h),
         "columns": dict(summary.plan.headers) if summary.plan else None,
         "cleaning": cleaning_entry(result, policy),
         "direct": direct_entry(result),
         "classed": classed_entry(result, spectrum_file),
         **({} if result.shaft_life_h is None else {"shaft": shaft_entries(result)}),
         "classing_error": None if result.classing_error is None
-        else number(result.classing_error),
+        else json_number(result.classing_error),
         **({} if result.modified_life_h is None else {
             "classing_error_l10m": None if result.modified_classing_error is None
-            else number(result.modified_classing_error)}),
-        "flags_time_fraction": {flag: number(seconds / 3600 / summary.duration_h)
+            else json_number(result.modified_classing_error)}),
+        "flags_time_fraction": {flag: json_number(seconds / 3600 / summary.duration_h)
                                 if summary.duration_h > 0 else None
                                 for flag, seconds in summary.flag_time_s.items()},
         "notes": list(summary.cleaning.notes),
@@ -125,10 +125,10 @@ def single_document(result: SpectrumResult, policy: str, spectrum_file: str | No
 def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dict]:
     """Logs from harshest to mildest: the pair's damage per hour against the fleet's."""
     fleet_rate = damage_rate(combined)
-    rows = [{"log": r.summary.name, "duration_h": number(r.summary.duration_h),
-             "system_l10_h": number(r.system_life_h),
-             "damage_per_hour": number(damage_rate(r)),
-             "relative_to_fleet": number(damage_rate(r) / fleet_rate) if fleet_rate > 0 else None}
+    rows = [{"log": r.summary.name, "duration_h": json_number(r.summary.duration_h),
+             "system_l10_h": json_number(r.system_life_h),
+             "damage_per_hour": json_number(damage_rate(r)),
+             "relative_to_fleet": json_number(damage_rate(r) / fleet_rate) if fleet_rate > 0 else None}
             for r in results]
     return sorted(rows, key=lambda row: -(row["damage_per_hour"] or 0.0))
 

@@ -12,7 +12,7 @@ from rich.markup import escape
 from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
 from hubload.report.cautions import CAUTIONS
-from hubload.report.terminal import hours, share
+from hubload.report.numbers import hours, safety, share
 
 TOP_CASES = 10
 KN = 1e3
@@ -31,7 +31,7 @@ def lives_table(result: SpectrumResult) -> Table:
                                              hours(modified.bearings[label].life_h)]
         table.add_row(label, hours(result.life_h[label]),
                       hours(result.classed.bearings[label].life_h), *extra,
-                      f"{result.damage[label]:.3g}", f"{result.static_safety[label]:.2f}")
+                      f"{result.damage[label]:.3g}", safety(result.static_safety[label]))
     extra = [] if modified is None else [hours(result.modified_system_life_h),
                                          hours(modified.system_life_h)]
     table.add_row("pair (system)", hours(result.system_life_h),
@@ -50,7 +50,7 @@ def shaft_table(result: SpectrumResult) -> Table | None:
     for i, (section, life) in enumerate(zip(result.classed.shaft.sections,
                                             result.shaft_life_h)):
         table.add_row(escape(section.name), hours(life), hours(section.fatigue_life_h),
-                      f"{extremes['min_safety'][i]:.2f}", f"{extremes['yield_safety'][i]:.2f}")
+                      safety(extremes['min_safety'][i]), safety(extremes['yield_safety'][i]))
     return table
 
 
@@ -134,8 +134,7 @@ def ranking_table(ranking: list[dict]) -> Table:
     for row in ranking:
         relative = row["relative_to_fleet"]
         table.add_row(escape(Path(row["log"]).name), f"{row['duration_h'] or 0:,.2f}",
-                      hours(row["system_l10_h"] if row["system_l10_h"] is not None
-                            else float("inf")),
+                      hours(row["system_l10_h"]),
                       "" if relative is None else f"{relative:.2f} x")
     return table
 

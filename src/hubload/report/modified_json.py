@@ -6,57 +6,51 @@ are written: a missing modified life must not read as an infinite one (null).
 
 from __future__ import annotations
 
-import math
-
 import numpy as np
 
 from hubload.engine import Result
 from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.report.numbers import json_number
 
 KN = 1e3
 CST = 1e-6
 MM = 1e-3
 
 
-def number(value) -> float | None:
-    value = float(value)
-    return value if math.isfinite(value) else None
-
-
 def add_modified_life(document: dict, result: Result) -> dict:
     """``document`` (the result_document) with the modified-life keys added in place."""
     document["reliability_percent"] = result.study.reliability_percent
-    document["a1"] = number(result.a1)
+    document["a1"] = json_number(result.a1)
     modified = result.modified
     if modified is None:
         document["lubrication"] = None
         return document
     document["lubrication"] = lubrication_entry(result)
     for index, case in enumerate(document["cases"]):
-        case["temperature_C"] = number(result.study.lubrication.temperature_k[index]
+        case["temperature_C"] = json_number(result.study.lubrication.temperature_k[index]
                                        - CELSIUS_ZERO_K)
-        case["viscosity_cSt"] = number(modified.viscosity_m2_s[index] / CST)
-        case["system_damage_share_modified"] = number(modified.system_damage_share[index])
+        case["viscosity_cSt"] = json_number(modified.viscosity_m2_s[index] / CST)
+        case["system_damage_share_modified"] = json_number(modified.system_damage_share[index])
         for label, bearing in modified.bearings.items():
             case["bearings"][label].update({
-                "nu1_cSt": number(bearing.reference_viscosity_m2_s[index] / CST),
-                "kappa": number(bearing.kappa[index]),
+                "nu1_cSt": json_number(bearing.reference_viscosity_m2_s[index] / CST),
+                "kappa": json_number(bearing.kappa[index]),
                 "kappa_outside_scope": bool(bearing.kappa_outside_scope[index]),
-                "e_c": number(bearing.e_c[index]),
-                "a_iso": number(bearing.a_iso[index]),
-                "l10m_h": number(bearing.case_life_h[index]),
-                "damage_share_modified": number(bearing.damage_share[index]),
+                "e_c": json_number(bearing.e_c[index]),
+                "a_iso": json_number(bearing.a_iso[index]),
+                "l10m_h": json_number(bearing.case_life_h[index]),
+                "damage_share_modified": json_number(bearing.damage_share[index]),
             })
     pair = result.study.pair.bearings()
     for label, bearing in modified.bearings.items():
         document["bearings"][label].update({
-            "l10m_h": number(bearing.life_h), "l10m_km": number(bearing.life_km),
-            "mean_diameter_mm": number(pair[label].mean_diameter_m / MM),
-            "cu_kN": number(bearing.fatigue_limit_n / KN),
+            "l10m_h": json_number(bearing.life_h), "l10m_km": json_number(bearing.life_km),
+            "mean_diameter_mm": json_number(pair[label].mean_diameter_m / MM),
+            "cu_kN": json_number(bearing.fatigue_limit_n / KN),
             "cu_estimated": bearing.fatigue_limit_estimated,
         })
-    document["system"].update({"l10m_h": number(modified.system_life_h),
-                               "l10m_km": number(modified.system_life_km)})
+    document["system"].update({"l10m_h": json_number(modified.system_life_h),
+                               "l10m_km": json_number(modified.system_life_km)})
     dominant = int(np.argmax(modified.system_damage_share))
     document["dominant_case_modified"] = (
         {"index": dominant, "name": result.study.cases.names[dominant]}
@@ -71,7 +65,7 @@ def lubrication_entry(result: Result) -> dict:
         "cleanliness": lubrication.cleanliness,
         "contamination_row": modified.contamination.label,
         "contamination_note": modified.contamination_note,
-        "viscosity_40C_cSt": number(lubrication.viscosity_40c_m2_s / CST),
-        "viscosity_100C_cSt": number(lubrication.viscosity_100c_m2_s / CST),
+        "viscosity_40C_cSt": json_number(lubrication.viscosity_40c_m2_s / CST),
+        "viscosity_100C_cSt": json_number(lubrication.viscosity_100c_m2_s / CST),
         "life_symbol": modified.symbol,
     }

@@ -9,16 +9,10 @@ from rich.table import Table
 
 from hubload.engine import Result
 from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.report.numbers import hours, share
 
 CST = 1e-6
 OUTSIDE_SCOPE_MARK = "!"
-
-
-def hours(value) -> str:
-    value = float(value)
-    if not math.isfinite(value):
-        return "-" if math.isnan(value) else "infinite"
-    return f"{value:,.0f}" if value >= 10 else f"{value:.3g}"
 
 
 def factor(value, digits: int = 2) -> str:
@@ -46,7 +40,7 @@ def modified_bearing_table(result: Result, label: str) -> Table:
                       kappa_cell(bearing.kappa[index], bearing.kappa_outside_scope[index]),
                       factor(bearing.e_c[index]), factor(bearing.a_iso[index]),
                       hours(bearing.case_life_h[index]),
-                      f"{100 * float(bearing.damage_share[index]):.1f} %")
+                      share(bearing.damage_share[index]))
     return table
 
 
@@ -89,8 +83,7 @@ def notes(result: Result) -> list[str]:
     dominant = int(np.argmax(modified.system_damage_share))
     if modified.system_damage_share[dominant] > 0 and dominant != result.dominant_case:
         lines.append(f"Dominant case of the modified life: '{result.study.cases.names[dominant]}' "
-                     f"({100 * float(modified.system_damage_share[dominant]):.1f} % of the "
-                     f"pair's damage).")
+                     f"({share(modified.system_damage_share[dominant])} of the pair's damage).")
     if any(b.kappa_outside_scope.any() for b in modified.bearings.values()):
         lines.append(f"kappa marked {OUTSIDE_SCOPE_MARK}: below 0.1, outside ISO 281's scope; "
                      f"eC and aISO evaluated at kappa = 0.1 (see the warning).")

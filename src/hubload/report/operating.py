@@ -9,6 +9,7 @@ from rich import box
 from rich.table import Table
 
 from hubload.casefile.study import Cases, Study
+from hubload.report.numbers import json_number
 
 KN = 1e3
 BAR = 1e5
@@ -17,16 +18,11 @@ FLAG_LABELS = {"slip": "slip", "tyre_slides": "slide", "pressure_above_rating": 
                "speed_above_rating": "n>max"}
 
 
-def finite(value) -> float | None:
-    value = float(value)
-    return value if math.isfinite(value) else None
-
-
 def case_entry(cases: Cases, index: int) -> dict:
     """The operating-point keys of ``cases[index]`` in the JSON output."""
-    entry = {"wheel_load_kN": finite(cases.wheel_load_n[index] / KN),
-             "side_force_kN": finite(cases.side_force_n[index] / KN),
-             "tractive_force_kN": finite(cases.tractive_force_n[index] / KN)}
+    entry = {"wheel_load_kN": json_number(cases.wheel_load_n[index] / KN),
+             "side_force_kN": json_number(cases.side_force_n[index] / KN),
+             "tractive_force_kN": json_number(cases.tractive_force_n[index] / KN)}
     points = cases.operating
     if points is None:
         return {**entry, "torque_Nm": None, "flags": [], "flag_codes": []}
@@ -34,18 +30,18 @@ def case_entry(cases: Cases, index: int) -> dict:
     with_motor = math.isfinite(points.pressure_pa[index])
     return {
         **entry,
-        "torque_Nm": finite(points.torque_nm[index]),
+        "torque_Nm": json_number(points.torque_nm[index]),
         "flags": [flag.message for flag in flags],
         "flag_codes": [flag.code for flag in flags],
         "given_as": "pressure and flow" if points.hydraulic[index] else "forces",
         "mode": ("half" if points.half_mode[index] else "full") if with_motor else None,
-        "pressure_bar": finite(points.pressure_pa[index] / BAR),
-        "flow_lpm": finite(points.flow_m3s[index] / LPM),
-        "motor_power_kW": finite(points.shaft_power_w[index] / KN),
-        "speed_kmh": finite(points.speed_kmh[index]),
-        "lateral_accel_g": finite(points.lateral_accel_g[index]),
-        "tractive_force_demand_kN": finite(points.tractive_demand_n[index] / KN),
-        "adhesion_limit_kN": finite(points.adhesion_limit_n[index] / KN),
+        "pressure_bar": json_number(points.pressure_pa[index] / BAR),
+        "flow_lpm": json_number(points.flow_m3s[index] / LPM),
+        "motor_power_kW": json_number(points.shaft_power_w[index] / KN),
+        "speed_kmh": json_number(points.speed_kmh[index]),
+        "lateral_accel_g": json_number(points.lateral_accel_g[index]),
+        "tractive_force_demand_kN": json_number(points.tractive_demand_n[index] / KN),
+        "adhesion_limit_kN": json_number(points.adhesion_limit_n[index] / KN),
     }
 
 

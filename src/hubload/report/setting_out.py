@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import json
-import math
 
 import numpy as np
 from rich.console import Console
@@ -11,26 +10,16 @@ from rich.table import Table
 from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
+from hubload.report.numbers import hours, json_number
 from hubload.studies.setting import BEST_RANGE_SHARE, SettingSweep
 
 UM = 1e-6
 MPA = 1e6
 
 
-def number(value) -> float | None:
-    value = float(value)
-    return value if math.isfinite(value) else None
-
-
 def microns(metres) -> float | None:
     """A setting [m] in um, rounded to 1e-6 um: the m -> um round trip leaves last-digit noise."""
-    return number(round(float(metres) / UM, 6))
-
-
-def hours(value) -> str:
-    """A life [h] of the table; None is JSON's infinite life, 0 a setting without equilibrium."""
-    value = math.inf if value is None else float(value)
-    return "infinite" if not math.isfinite(value) else f"{value:,.0f}"
+    return json_number(round(float(metres) / UM, 6))
 
 
 def point_entry(sweep: SettingSweep, index: int) -> dict:
@@ -40,15 +29,15 @@ def point_entry(sweep: SettingSweep, index: int) -> dict:
     for label, bearing in result.bearings.items():
         found = result.refined.bearings[label]
         bearings[label] = {
-            "l10_h": number(bearing.life_h[index]),
-            "min_load_zone_deg": number(np.degrees(np.min(found.load_zone_rad[index]))),
-            "max_contact_pressure_MPa": number(np.max(found.max_contact_pressure_pa[index]) / MPA),
+            "l10_h": json_number(bearing.life_h[index]),
+            "min_load_zone_deg": json_number(np.degrees(np.min(found.load_zone_rad[index]))),
+            "max_contact_pressure_MPa": json_number(np.max(found.max_contact_pressure_pa[index]) / MPA),
         }
         if modified is not None:
-            bearings[label]["l10m_h"] = number(modified.bearings[label].life_h[index])
-    system = {"l10_h": number(result.system_life_h[index])}
+            bearings[label]["l10m_h"] = json_number(modified.bearings[label].life_h[index])
+    system = {"l10_h": json_number(result.system_life_h[index])}
     if modified is not None:
-        system["l10m_h"] = number(modified.system_life_h[index])
+        system["l10m_h"] = json_number(modified.system_life_h[index])
     return {"setting_um": microns(sweep.settings_m[index]), "system": system,
             "bearings": bearings, "equilibrium": not bool(sweep.unsolved[index])}
 
@@ -60,7 +49,7 @@ def sweep_document(sweep: SettingSweep) -> dict:
         "life": sweep.life_name, "target_life_h": sweep.study.target_life_h,
         "points": [point_entry(sweep, i) for i in range(len(sweep.settings_m))],
         "best": None if best is None else {
-            "setting_um": microns(best.setting_m), "life_h": number(best.life_h),
+            "setting_um": microns(best.setting_m), "life_h": json_number(best.life_h),
             "range_um": [microns(best.low_m), microns(best.high_m)],
             "criterion": f"system {sweep.life_name} within {1 - BEST_RANGE_SHARE:.0%} of the "
                          f"best found"},

@@ -10,7 +10,7 @@ import numpy as np
 
 from hubload.engine import Result
 from hubload.engine.overall import overall_verdict
-from hubload.report import jsonout
+from hubload.report.numbers import json_number
 
 KN = 1e3
 MPA = 1e6
@@ -26,20 +26,20 @@ def section_summary(result: Result, given, section) -> dict:
     marin = section.marin
     return {
         "name": section.name,
-        "position_mm": jsonout.number(given.position_m / MM),
-        "diameter_mm": jsonout.number(given.diameter_m / MM),
-        "kf_bending": jsonout.number(section.kf_bending),
-        "kf_torsion": jsonout.number(section.kf_torsion),
-        "marin": {key: jsonout.number(value) for key, value in (
+        "position_mm": json_number(given.position_m / MM),
+        "diameter_mm": json_number(given.diameter_m / MM),
+        "kf_bending": json_number(section.kf_bending),
+        "kf_torsion": json_number(section.kf_torsion),
+        "marin": {key: json_number(value) for key, value in (
             ("ka", marin.surface), ("kb", marin.size), ("kc", marin.load),
             ("kd", marin.temperature), ("ke", marin.reliability))},
-        "endurance_limit_MPa": jsonout.number(section.endurance_pa / MPA),
-        "min_safety": jsonout.number(section.min_safety),
+        "endurance_limit_MPa": json_number(section.endurance_pa / MPA),
+        "min_safety": json_number(section.min_safety),
         "min_safety_case": case_name(result, section.min_safety, section.min_safety_case),
-        "yield_safety": jsonout.number(section.yield_safety),
+        "yield_safety": json_number(section.yield_safety),
         "yield_safety_case": case_name(result, section.yield_safety, section.yield_case),
-        "fatigue_life_h": jsonout.number(section.fatigue_life_h),
-        "fatigue_life_km": jsonout.number(section.fatigue_life_km),
+        "fatigue_life_h": json_number(section.fatigue_life_h),
+        "fatigue_life_km": json_number(section.fatigue_life_km),
         "infinite_life": bool(np.isinf(section.fatigue_life_h)),
     }
 
@@ -48,9 +48,9 @@ def permissible_summary(result: Result) -> dict | None:
     permissible = result.shaft.permissible
     if permissible is None:
         return None
-    return {"load_position_mm": jsonout.number(permissible.position_m / MM),
+    return {"load_position_mm": json_number(permissible.position_m / MM),
             "inside_curve": bool(permissible.inside),
-            "permissible_radial_load_kN": jsonout.number(permissible.permissible_n / KN)}
+            "permissible_radial_load_kN": json_number(permissible.permissible_n / KN)}
 
 
 def shaft_summary(result: Result) -> dict | None:
@@ -61,10 +61,10 @@ def shaft_summary(result: Result) -> dict | None:
     return {
         "method": "Shigley's Mechanical Engineering Design, 10th ed.",
         "criterion": shaft.criterion,
-        "required_safety": jsonout.number(shaft.required_safety),
-        "ultimate_strength_MPa": jsonout.number(material.ultimate_pa / MPA),
-        "yield_strength_MPa": jsonout.number(material.yield_pa / MPA),
-        "fatigue_strength_fraction": jsonout.number(shaft.fatigue_strength_fraction),
+        "required_safety": json_number(shaft.required_safety),
+        "ultimate_strength_MPa": json_number(material.ultimate_pa / MPA),
+        "yield_strength_MPa": json_number(material.yield_pa / MPA),
+        "fatigue_strength_fraction": json_number(shaft.fatigue_strength_fraction),
         "sections": [section_summary(result, given, section)
                      for given, section in zip(material.sections, shaft.sections)],
         "permissible": permissible_summary(result),
@@ -73,15 +73,15 @@ def shaft_summary(result: Result) -> dict | None:
 
 def case_section(section, index: int) -> dict:
     return {
-        "bending_Nm": jsonout.number(section.loads.bending_nm[index]),
-        "torque_Nm": jsonout.number(section.loads.torque_nm[index]),
-        "axial_kN": jsonout.number(section.loads.axial_n[index] / KN),
-        "stress_amplitude_MPa": jsonout.number(section.stresses.alternating_pa[index] / MPA),
-        "stress_mean_MPa": jsonout.number(section.stresses.mean_pa[index] / MPA),
-        "safety": jsonout.number(section.safety[index]),
-        "yield_safety": jsonout.number(section.case_yield_safety[index]),
-        "life_h": jsonout.number(section.case_life_h[index]),
-        "damage_share": jsonout.number(section.damage_share[index]),
+        "bending_Nm": json_number(section.loads.bending_nm[index]),
+        "torque_Nm": json_number(section.loads.torque_nm[index]),
+        "axial_kN": json_number(section.loads.axial_n[index] / KN),
+        "stress_amplitude_MPa": json_number(section.stresses.alternating_pa[index] / MPA),
+        "stress_mean_MPa": json_number(section.stresses.mean_pa[index] / MPA),
+        "safety": json_number(section.safety[index]),
+        "yield_safety": json_number(section.case_yield_safety[index]),
+        "life_h": json_number(section.case_life_h[index]),
+        "damage_share": json_number(section.damage_share[index]),
     }
 
 
@@ -90,9 +90,9 @@ def extend_cases(document: dict, result: Result) -> None:
     permissible = None if shaft is None else shaft.permissible
     for index, entry in enumerate(document["cases"]):
         entry["permissible_utilisation"] = (
-            None if permissible is None else jsonout.number(permissible.utilisation[index]))
+            None if permissible is None else json_number(permissible.utilisation[index]))
         if permissible is not None:
-            entry["radial_wheel_force_kN"] = jsonout.number(
+            entry["radial_wheel_force_kN"] = json_number(
                 permissible.radial_wheel_force_n[index] / KN)
         if shaft is not None:
             entry["shaft"] = {section.name: case_section(section, index)
@@ -100,7 +100,7 @@ def extend_cases(document: dict, result: Result) -> None:
 
 
 def optional_number(value) -> float | None:
-    return None if value is None else jsonout.number(value)
+    return None if value is None else json_number(value)
 
 
 def verdict_summary(result: Result) -> dict | None:

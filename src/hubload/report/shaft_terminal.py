@@ -11,7 +11,7 @@ from rich.text import Text
 
 from hubload.engine import Result
 from hubload.engine.overall import CheckItem, overall_verdict
-from hubload.report import terminal
+from hubload.report.numbers import hours, safety
 
 KN = 1e3
 MPA = 1e6
@@ -20,13 +20,8 @@ MM = 1e-3
 
 def factor(value, required: float | None = None) -> str:
     """A safety factor, red when below ``required``; 'infinite' when unloaded, '-' when NaN."""
-    value = float(value)
-    if math.isnan(value):
-        return "-"
-    if math.isinf(value):
-        return "infinite"
-    text = f"{value:.2f}"
-    return f"[red]{text}[/]" if required is not None and value < required else text
+    text = safety(value)
+    return f"[red]{text}[/]" if required is not None and float(value) < required else text
 
 
 CRITERION_NAMES = {"goodman": "DE-Goodman", "asme-elliptic": "DE-ASME elliptic"}
@@ -53,7 +48,7 @@ def sections_table(result: Result) -> Table:
             factor(section.min_safety, shaft.required_safety),
             case_index(section.min_safety, section.min_safety_case),
             factor(section.yield_safety, shaft.required_safety),
-            terminal.hours(section.fatigue_life_h))
+            hours(section.fatigue_life_h))
     return table
 
 
@@ -117,13 +112,13 @@ def item_value(item: CheckItem) -> str:
         return "not assessed"
     if item.at_most:
         return utilisation(item.value)
-    return terminal.hours(item.value) + " h" if item.unit == "h" else factor(item.value)
+    return hours(item.value) + " h" if item.unit == "h" else factor(item.value)
 
 
 def item_limit(item: CheckItem) -> str:
     if item.at_most:
         return f"<= {100 * item.limit:.0f} %"
-    return f">= {terminal.hours(item.limit)} h" if item.unit == "h" else f">= {item.limit:g}"
+    return f">= {hours(item.limit)} h" if item.unit == "h" else f">= {item.limit:g}"
 
 
 def render_overall(result: Result, console: Console) -> None:

@@ -13,9 +13,8 @@ from rich.table import Table
 from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
-from hubload.report.jsonout import number
+from hubload.report.numbers import hours, json_number, life_h, safety
 from hubload.report.series import all_series
-from hubload.report.terminal import hours
 from hubload.studies.sweep import Sweep
 
 MAP_MAX_COLUMNS = 7
@@ -26,8 +25,8 @@ def sweep_document(sweep: Sweep) -> dict:
     return {
         "title": sweep.title,
         "source": sweep.source,
-        "parameters": [{"key": axis.key, "start": number(axis.values[0]),
-                        "stop": number(axis.values[-1]), "count": len(axis.values),
+        "parameters": [{"key": axis.key, "start": json_number(axis.values[0]),
+                        "stop": json_number(axis.values[-1]), "count": len(axis.values),
                         "file_value": sweep.file_values.get(axis.key)}
                        for axis in sweep.axes],
         "target_life_h": sweep.target_life_h,
@@ -50,9 +49,7 @@ def to_json(sweep: Sweep) -> str:
 
 
 def quantity(value: float, kind: str) -> str:
-    if math.isnan(value):
-        return "-"
-    return hours(value) if kind == "life" else ("infinite" if math.isinf(value) else f"{value:.2f}")
+    return hours(value) if kind == "life" else safety(value)
 
 
 def table_series(sweep: Sweep) -> list:
@@ -121,7 +118,7 @@ def life_map(sweep: Sweep) -> Table:
         for j in shown:
             point = sweep.points[i * len(columns.values) + j]
             life = point.governing_life_h
-            text = compact_hours(math.inf if life is None else life)
+            text = compact_hours(life_h(life))
             verdict = point.document.get("verdict")
             cells.append(text if verdict is None else
                          (f"[green]{text}[/]" if verdict["passed"] else f"[red]{text}[/]"))

@@ -6,8 +6,6 @@ markup: a case named "[wet]" must print as written.
 
 from __future__ import annotations
 
-import math
-
 import numpy as np
 from rich.console import Console
 from rich.table import Table
@@ -19,21 +17,11 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_terminal import (modified_bearing_table, modified_summary_cells,
                                               modified_summary_headings, notes, oil_cells,
                                               oil_headings)
+from hubload.report.numbers import hours, safety, share
 from hubload.report.operating import operating_table
 from hubload.report.refined_view import life_basis, refined_tables
 
 KN = 1e3
-
-
-def hours(value) -> str:
-    value = float(value)
-    if not math.isfinite(value):
-        return "infinite"
-    return f"{value:,.0f}" if value >= 10 else f"{value:.3g}"
-
-
-def share(value) -> str:
-    return f"{100 * float(value):.1f} %"
 
 
 def cases_table(result: Result) -> Table:
@@ -81,7 +69,7 @@ def summary_table(result: Result) -> Table:
     for label, bearing in result.bearings.items():
         name = pair[label].label if pair[label].label != label else ""
         table.add_row(label, Text(name), hours(bearing.life_h), hours(bearing.life_km),
-                      f"{float(bearing.static_safety):.2f}", *modified_summary_cells(result, label))
+                      safety(bearing.static_safety), *modified_summary_cells(result, label))
     table.add_row("pair (system)", "", hours(result.system_life_h),
                   hours(result.system_life_km), "", *modified_summary_cells(result, None),
                   style="bold")

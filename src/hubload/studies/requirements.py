@@ -24,6 +24,7 @@ from hubload.model import requirements
 from hubload.model.kinematics import kmh_to_rpm
 from hubload.model.refined.life import RATING_LIFE_EXPONENT
 from hubload.report.jsonout import result_document
+from hubload.report.numbers import life_h
 
 CLOSED_FORM_RTOL = 1e-9
 BRACKET_STEPS = 40
@@ -67,7 +68,7 @@ def life_at(study: Study, factors: dict[str, float], key: str, whose: str) -> fl
     """Life [h] (``whose`` = "system" or a bearing label) with the ratings scaled."""
     document = result_document(evaluate(scaled(study, factors)))
     node = document["system"] if whose == "system" else document["bearings"][whose]
-    return math.inf if node.get(key) is None else float(node[key])
+    return life_h(node.get(key))
 
 
 def life_exponent(study: Study) -> float:

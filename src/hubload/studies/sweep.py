@@ -19,6 +19,7 @@ from hubload.casefile.variation import KeyPath, current_value, parse_key_path, v
 from hubload.engine import Result, evaluate_many
 from hubload.errors import InputError
 from hubload.report.jsonout import result_document
+from hubload.report.numbers import life_h
 from hubload.report.series import MISSING, lookup, shaft_min_safety
 from hubload.studies.crossing import Crossing, target_crossings
 
@@ -110,7 +111,7 @@ def shaft_ratio(document: dict) -> float | None:
 def ratio_to_target(document: dict) -> float:
     """Governing life / target life of a point (inf for an infinite life)."""
     verdict = document["verdict"]
-    return math.inf if verdict["life_h"] is None else verdict["life_h"] / verdict["target_h"]
+    return life_h(verdict["life_h"]) / verdict["target_h"]
 
 
 def parse_vary(spec: str, document: dict, file: str) -> Axis:

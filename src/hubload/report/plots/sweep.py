@@ -10,6 +10,7 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   new_figure, styled)
+from hubload.report.numbers import hours, life_h
 from hubload.report.series import all_series, lookup
 from hubload.studies.sweep import Sweep
 
@@ -117,8 +118,8 @@ def plot_safeties(axes, x, documents, safety, colours) -> None:
 def sweep_contour_figure(sweep: Sweep) -> Figure:
     """Map of the governing system life over two keys, with the target contour."""
     rows, columns = sweep.axes[0], sweep.axes[1]
-    lives = np.array([math.inf if p.governing_life_h is None else p.governing_life_h
-                      for p in sweep.points], dtype=float).reshape(sweep.shape)
+    lives = np.array([life_h(p.governing_life_h) for p in sweep.points],
+                     dtype=float).reshape(sweep.shape)
     finite = lives[np.isfinite(lives)]
     figure = new_figure(8.0, 6.0)
     axes = figure.subplots()
@@ -155,7 +156,8 @@ def nice_levels(low: float, high: float) -> list[float]:
 
 
 def hours_label(value: float, _position=None) -> str:
-    return f"{value:,.0f}" if value >= 10 else f"{value:.2g}"
+    """Tick and contour labels of the life map (a matplotlib formatter)."""
+    return hours(value)
 
 
 def draw_target_contour(axes, sweep: Sweep, lives: np.ndarray) -> None:

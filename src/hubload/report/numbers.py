@@ -1,0 +1,52 @@
+"""Numbers as every output writes them: JSON values and table text.
+
+JSON has neither infinity nor NaN: an infinite life (and an undefined value) is
+written as null, and a null life read back from a document is an infinite one.
+"""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+
+
+def json_number(value) -> float | None:
+    """A finite float, or None for inf/NaN (a batched point's value may be a one-element array)."""
+    value = float(value.item() if isinstance(value, np.ndarray) else value)
+    return value if math.isfinite(value) else None
+
+
+def json_numbers(values) -> list[float | None]:
+    """:func:`json_number` of each value of a per-case array, converted in one numpy call."""
+    return [value if math.isfinite(value) else None
+            for value in np.asarray(values, dtype=float).tolist()]
+
+
+def life_h(value) -> float:
+    """A life [h] read from a JSON document: null is an infinite life."""
+    return math.inf if value is None else float(value)
+
+
+def hours(value) -> str:
+    """A life [h] as table text: whole hours from 10 h, three digits below; 'infinite' for an
+    infinite life (or null), '-' for an undefined one (NaN)."""
+    value = life_h(value)
+    if math.isnan(value):
+        return "-"
+    if math.isinf(value):
+        return "infinite"
+    return f"{value:,.0f}" if value >= 10 else f"{value:.3g}"
+
+
+def share(value) -> str:
+    """A fraction (damage or time share) as a percentage."""
+    return f"{100 * float(value):.1f} %"
+
+
+def safety(value) -> str:
+    """A safety factor as table text: 'infinite' when unloaded (or null), '-' when undefined."""
+    value = math.inf if value is None else float(value)
+    if math.isnan(value):
+        return "-"
+    return "infinite" if math.isinf(value) else f"{value:.2f}"
