@@ -102,8 +102,8 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
          each(lambda b: rating(b.alone, b))),
         ("max static equivalent load P0", each(lambda b: f"{kn(b.max_static.value)} "
                                                           f"({b.max_static.case})")),
-        ("static rating C0 given (s0 now)", each(lambda b: f"{kn(b.static_rating_n)} "
-                                                           f"(s0 = {numbers.safety(b.static_safety)})")),
+        ("static rating C0 given (s0 now)",
+         each(lambda b: f"{kn(b.static_rating_n)} (s0 = {numbers.safety(b.static_safety)})")),
         (f"C0 for s0 >= {s0}", each(lambda b: kn(b.required_static_rating_n))),
     ]
 

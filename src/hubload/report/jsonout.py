@@ -13,8 +13,8 @@ from hubload.engine import Result, verdict
 from hubload.report import shaft_json
 from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_json import add_modified_life
-from hubload.report.numbers import json_number
-from hubload.report.operating import case_entry
+from hubload.report.numbers import json_number, json_numbers, json_rows
+from hubload.report.operating import case_entries as case_entries_of
 from hubload.report.refined_json import add_refined
 
 KN = 1e3
@@ -22,27 +22,20 @@ KN = 1e3
 
 def case_entries(result: Result) -> list[dict]:
     cases = result.study.cases
-    entries = []
-    for index, name in enumerate(cases.names):
-        bearings = {}
-        for label, bearing in result.bearings.items():
-            bearings[label] = {
-                "fr_kN": json_number(bearing.radial_n[index] / KN),
-                "fa_kN": json_number(bearing.axial_n[index] / KN),
-                "p_kN": json_number(bearing.equivalent_n[index] / KN),
-                "p0_kN": json_number(bearing.static_equivalent_n[index] / KN),
-                "l10_h": json_number(bearing.case_life_h[index]),
-                "damage_share": json_number(bearing.damage_share[index]),
-            }
-        entries.append({
-            "name": name,
-            "time_fraction": json_number(cases.time_fraction[index]),
-            "speed_rpm": json_number(cases.speed_rpm[index]),
-            "bearings": bearings,
-            "system_damage_share": json_number(result.system_damage_share[index]),
-            **case_entry(cases, index),
-        })
-    return entries
+    count = len(cases)
+    bearings = {label: json_rows({
+        "fr_kN": bearing.radial_n / KN, "fa_kN": bearing.axial_n / KN,
+        "p_kN": bearing.equivalent_n / KN, "p0_kN": bearing.static_equivalent_n / KN,
+        "l10_h": bearing.case_life_h, "damage_share": bearing.damage_share}, count)
+        for label, bearing in result.bearings.items()}
+    spectrum = json_rows({"time_fraction": cases.time_fraction, "speed_rpm": cases.speed_rpm},
+                         count)
+    system_share = json_numbers(result.system_damage_share)
+    return [{"name": name, **spectrum[index],
+             "bearings": {label: rows[index] for label, rows in bearings.items()},
+             "system_damage_share": system_share[index], **operating}
+            for index, (name, operating) in enumerate(zip(cases.names, case_entries_of(cases),
+                                                          strict=True))]
 
 
 def bearing_summaries(result: Result) -> dict:

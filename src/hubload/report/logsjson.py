@@ -128,7 +128,8 @@ def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dic
     rows = [{"log": r.summary.name, "duration_h": json_number(r.summary.duration_h),
              "system_l10_h": json_number(r.system_life_h),
              "damage_per_hour": json_number(damage_rate(r)),
-             "relative_to_fleet": json_number(damage_rate(r) / fleet_rate) if fleet_rate > 0 else None}
+             "relative_to_fleet": (json_number(damage_rate(r) / fleet_rate) if fleet_rate > 0
+                                   else None)}
             for r in results]
     return sorted(rows, key=lambda row: -(row["damage_per_hour"] or 0.0))
 

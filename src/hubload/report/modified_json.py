@@ -10,7 +10,7 @@ import numpy as np
 
 from hubload.engine import Result
 from hubload.model.lubrication import CELSIUS_ZERO_K
-from hubload.report.numbers import json_number
+from hubload.report.numbers import json_number, json_rows
 
 KN = 1e3
 CST = 1e-6
@@ -26,21 +26,21 @@ def add_modified_life(document: dict, result: Result) -> dict:
         document["lubrication"] = None
         return document
     document["lubrication"] = lubrication_entry(result)
-    for index, case in enumerate(document["cases"]):
-        case["temperature_C"] = json_number(result.study.lubrication.temperature_k[index]
-                                       - CELSIUS_ZERO_K)
-        case["viscosity_cSt"] = json_number(modified.viscosity_m2_s[index] / CST)
-        case["system_damage_share_modified"] = json_number(modified.system_damage_share[index])
-        for label, bearing in modified.bearings.items():
-            case["bearings"][label].update({
-                "nu1_cSt": json_number(bearing.reference_viscosity_m2_s[index] / CST),
-                "kappa": json_number(bearing.kappa[index]),
-                "kappa_outside_scope": bool(bearing.kappa_outside_scope[index]),
-                "e_c": json_number(bearing.e_c[index]),
-                "a_iso": json_number(bearing.a_iso[index]),
-                "l10m_h": json_number(bearing.case_life_h[index]),
-                "damage_share_modified": json_number(bearing.damage_share[index]),
-            })
+    cases = document["cases"]
+    per_case = json_rows({
+        "temperature_C": result.study.lubrication.temperature_k - CELSIUS_ZERO_K,
+        "viscosity_cSt": modified.viscosity_m2_s / CST,
+        "system_damage_share_modified": modified.system_damage_share}, len(cases))
+    per_bearing = {label: json_rows({
+        "nu1_cSt": bearing.reference_viscosity_m2_s / CST, "kappa": bearing.kappa,
+        "kappa_outside_scope": np.asarray(bearing.kappa_outside_scope, dtype=bool),
+        "e_c": bearing.e_c, "a_iso": bearing.a_iso, "l10m_h": bearing.case_life_h,
+        "damage_share_modified": bearing.damage_share}, len(cases))
+        for label, bearing in modified.bearings.items()}
+    for index, case in enumerate(cases):
+        case.update(per_case[index])
+        for label, rows in per_bearing.items():
+            case["bearings"][label].update(rows[index])
     pair = result.study.pair.bearings()
     for label, bearing in modified.bearings.items():
         document["bearings"][label].update({

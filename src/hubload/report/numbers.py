@@ -23,6 +23,18 @@ def json_numbers(values) -> list[float | None]:
             for value in np.asarray(values, dtype=float).tolist()]
 
 
+def json_rows(columns: dict[str, object], count: int) -> list[dict]:
+    """One dict per case from per-case arrays (``{key: array}``, key order kept): numbers as
+    :func:`json_number`, boolean arrays as true/false; a value shared by every case is repeated."""
+    converted = []
+    for values in columns.values():
+        array = np.asarray(values)
+        if array.shape != (count,):
+            array = np.broadcast_to(array, (count,))
+        converted.append(array.tolist() if array.dtype == bool else json_numbers(array))
+    return [dict(zip(columns, row)) for row in zip(*converted)]
+
+
 def life_h(value) -> float:
     """A life [h] read from a JSON document: null is an infinite life."""
     return math.inf if value is None else float(value)

@@ -9,7 +9,7 @@ from rich import box
 from rich.table import Table
 
 from hubload.casefile.study import Cases, Study
-from hubload.report.numbers import json_number
+from hubload.report.numbers import json_numbers, json_rows
 
 KN = 1e3
 BAR = 1e5
@@ -18,31 +18,36 @@ FLAG_LABELS = {"slip": "slip", "tyre_slides": "slide", "pressure_above_rating": 
                "speed_above_rating": "n>max"}
 
 
-def case_entry(cases: Cases, index: int) -> dict:
-    """The operating-point keys of ``cases[index]`` in the JSON output."""
-    entry = {"wheel_load_kN": json_number(cases.wheel_load_n[index] / KN),
-             "side_force_kN": json_number(cases.side_force_n[index] / KN),
-             "tractive_force_kN": json_number(cases.tractive_force_n[index] / KN)}
+def case_entries(cases: Cases) -> list[dict]:
+    """The operating-point keys of each case in the JSON output."""
+    count = len(cases)
+    forces = json_rows({"wheel_load_kN": cases.wheel_load_n / KN,
+                        "side_force_kN": cases.side_force_n / KN,
+                        "tractive_force_kN": cases.tractive_force_n / KN}, count)
     points = cases.operating
     if points is None:
-        return {**entry, "torque_Nm": None, "flags": [], "flag_codes": []}
-    flags = points.flags(index)
-    with_motor = math.isfinite(points.pressure_pa[index])
-    return {
-        **entry,
-        "torque_Nm": json_number(points.torque_nm[index]),
-        "flags": [flag.message for flag in flags],
-        "flag_codes": [flag.code for flag in flags],
-        "given_as": "pressure and flow" if points.hydraulic[index] else "forces",
-        "mode": ("half" if points.half_mode[index] else "full") if with_motor else None,
-        "pressure_bar": json_number(points.pressure_pa[index] / BAR),
-        "flow_lpm": json_number(points.flow_m3s[index] / LPM),
-        "motor_power_kW": json_number(points.shaft_power_w[index] / KN),
-        "speed_kmh": json_number(points.speed_kmh[index]),
-        "lateral_accel_g": json_number(points.lateral_accel_g[index]),
-        "tractive_force_demand_kN": json_number(points.tractive_demand_n[index] / KN),
-        "adhesion_limit_kN": json_number(points.adhesion_limit_n[index] / KN),
-    }
+        return [{**entry, "torque_Nm": None, "flags": [], "flag_codes": []} for entry in forces]
+    torque = json_numbers(points.torque_nm)
+    derived = json_rows({
+        "pressure_bar": points.pressure_pa / BAR, "flow_lpm": points.flow_m3s / LPM,
+        "motor_power_kW": points.shaft_power_w / KN, "speed_kmh": points.speed_kmh,
+        "lateral_accel_g": points.lateral_accel_g,
+        "tractive_force_demand_kN": points.tractive_demand_n / KN,
+        "adhesion_limit_kN": points.adhesion_limit_n / KN}, count)
+    entries = []
+    for index, entry in enumerate(forces):
+        flags = points.flags(index)
+        with_motor = math.isfinite(points.pressure_pa[index])
+        entries.append({
+            **entry,
+            "torque_Nm": torque[index],
+            "flags": [flag.message for flag in flags],
+            "flag_codes": [flag.code for flag in flags],
+            "given_as": "pressure and flow" if points.hydraulic[index] else "forces",
+            "mode": ("half" if points.half_mode[index] else "full") if with_motor else None,
+            **derived[index],
+        })
+    return entries
 
 
 def worth_showing(study: Study) -> bool:

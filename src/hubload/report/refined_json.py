@@ -10,7 +10,7 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.engine import Result
-from hubload.report.numbers import json_number
+from hubload.report.numbers import json_number, json_rows
 
 KN = 1e3
 MPA = 1e6
@@ -35,17 +35,19 @@ def add_refined(document: dict, result: Result) -> dict:
         "life": "ISO/TS 16281 reference rating life from the lamina loads (l10_h keys)",
         "contact_pressure_limit_MPa": 4000.0,
     }
-    for index, case in enumerate(document["cases"]):
-        case.update({
-            "tilt_mrad": json_number(refined.tilt_rad[index] / MRAD),
-            "axial_displacement_um": json_number(refined.axial_displacement_m[index] / UM),
-            "radial_displacement_um": json_number(refined.radial_displacement_at_wheel_m[index] / UM),
-            "equilibrium": bool(refined.converged[index]),
-        })
-        for label, bearing in refined.bearings.items():
-            case["bearings"][label].update({
-                "load_zone_deg": json_number(np.degrees(bearing.load_zone_rad[index])),
-                "max_roller_load_kN": json_number(bearing.max_roller_load_n[index] / KN),
-                "max_contact_pressure_MPa": json_number(bearing.max_contact_pressure_pa[index] / MPA),
-            })
+    cases = document["cases"]
+    per_case = json_rows({
+        "tilt_mrad": refined.tilt_rad / MRAD,
+        "axial_displacement_um": refined.axial_displacement_m / UM,
+        "radial_displacement_um": refined.radial_displacement_at_wheel_m / UM,
+        "equilibrium": np.asarray(refined.converged, dtype=bool)}, len(cases))
+    per_bearing = {label: json_rows({
+        "load_zone_deg": np.degrees(bearing.load_zone_rad),
+        "max_roller_load_kN": bearing.max_roller_load_n / KN,
+        "max_contact_pressure_MPa": bearing.max_contact_pressure_pa / MPA}, len(cases))
+        for label, bearing in refined.bearings.items()}
+    for index, case in enumerate(cases):
+        case.update(per_case[index])
+        for label, rows in per_bearing.items():
+            case["bearings"][label].update(rows[index])
     return document

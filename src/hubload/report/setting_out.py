@@ -31,7 +31,8 @@ def point_entry(sweep: SettingSweep, index: int) -> dict:
         bearings[label] = {
             "l10_h": json_number(bearing.life_h[index]),
             "min_load_zone_deg": json_number(np.degrees(np.min(found.load_zone_rad[index]))),
-            "max_contact_pressure_MPa": json_number(np.max(found.max_contact_pressure_pa[index]) / MPA),
+            "max_contact_pressure_MPa": json_number(
+                np.max(found.max_contact_pressure_pa[index]) / MPA),
         }
         if modified is not None:
             bearings[label]["l10m_h"] = json_number(modified.bearings[label].life_h[index])

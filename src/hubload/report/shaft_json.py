@@ -10,7 +10,7 @@ import numpy as np
 
 from hubload.engine import Result
 from hubload.engine.overall import overall_verdict
-from hubload.report.numbers import json_number
+from hubload.report.numbers import json_number, json_rows
 
 KN = 1e3
 MPA = 1e6
@@ -71,32 +71,34 @@ def shaft_summary(result: Result) -> dict | None:
     }
 
 
-def case_section(section, index: int) -> dict:
-    return {
-        "bending_Nm": json_number(section.loads.bending_nm[index]),
-        "torque_Nm": json_number(section.loads.torque_nm[index]),
-        "axial_kN": json_number(section.loads.axial_n[index] / KN),
-        "stress_amplitude_MPa": json_number(section.stresses.alternating_pa[index] / MPA),
-        "stress_mean_MPa": json_number(section.stresses.mean_pa[index] / MPA),
-        "safety": json_number(section.safety[index]),
-        "yield_safety": json_number(section.case_yield_safety[index]),
-        "life_h": json_number(section.case_life_h[index]),
-        "damage_share": json_number(section.damage_share[index]),
-    }
+def case_sections(section, count: int) -> list[dict]:
+    """One section's values per case."""
+    return json_rows({
+        "bending_Nm": section.loads.bending_nm, "torque_Nm": section.loads.torque_nm,
+        "axial_kN": section.loads.axial_n / KN,
+        "stress_amplitude_MPa": section.stresses.alternating_pa / MPA,
+        "stress_mean_MPa": section.stresses.mean_pa / MPA, "safety": section.safety,
+        "yield_safety": section.case_yield_safety, "life_h": section.case_life_h,
+        "damage_share": section.damage_share}, count)
 
 
 def extend_cases(document: dict, result: Result) -> None:
+    cases = document["cases"]
     shaft = result.shaft
     permissible = None if shaft is None else shaft.permissible
-    for index, entry in enumerate(document["cases"]):
-        entry["permissible_utilisation"] = (
-            None if permissible is None else json_number(permissible.utilisation[index]))
-        if permissible is not None:
-            entry["radial_wheel_force_kN"] = json_number(
-                permissible.radial_wheel_force_n[index] / KN)
-        if shaft is not None:
-            entry["shaft"] = {section.name: case_section(section, index)
-                              for section in shaft.sections}
+    if permissible is None:
+        for entry in cases:
+            entry["permissible_utilisation"] = None
+    else:
+        for entry, row in zip(cases, json_rows({
+                "permissible_utilisation": permissible.utilisation,
+                "radial_wheel_force_kN": permissible.radial_wheel_force_n / KN}, len(cases))):
+            entry.update(row)
+    if shaft is not None:
+        sections = {section.name: case_sections(section, len(cases))
+                    for section in shaft.sections}
+        for index, entry in enumerate(cases):
+            entry["shaft"] = {name: rows[index] for name, rows in sections.items()}
 
 
 def optional_number(value) -> float | None:
