@@ -13,7 +13,6 @@ from hubload.model.lubrication import CELSIUS_ZERO_K
 CST = 1e-6
 ISO4406_PATTERN = re.compile(r"^\s*(\d{1,2}|-)\s*/\s*(\d{1,2})\s*/\s*(\d{1,2})\s*$")
 ISO4406_HIGHEST_SCALE_NUMBER = 28
-OIL_METHODS = ("oil-filtered", "oil-unfiltered")
 
 
 def read_lubrication(data: dict | None, case_blocks: list[dict], pair: Pair) -> Lubrication | None:

@@ -52,10 +52,6 @@ class DwellTable:
     def widths(self) -> np.ndarray:
         return np.ldexp(1.0, self.exponents)
 
-    @property
-    def cell_count(self) -> int:
-        return self.keys.shape[-1]
-
     def class_bounds(self) -> tuple[np.ndarray, np.ndarray]:
         """Lower and upper bound (c, m) of every occupied cell."""
         widths = self.widths[:, None]

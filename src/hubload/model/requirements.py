@@ -1,4 +1,4 @@
-"""What a bearing supplier needs: the spectrum's equivalent load, required ratings, flange moment.
+"""What a bearing supplier needs: the spectrum's equivalent load, required static rating, flange moment.
 
 References
 ----------
@@ -25,7 +25,7 @@ from hubload.model.iso281 import LIFE_EXPONENT_ROLLER
 
 def spectrum_equivalent_load_n(time_fraction, speed_rpm, equivalent_load_n,
                                exponent=LIFE_EXPONENT_ROLLER):
-    """Constant load [N] that gives the spectrum's damage at its mean speed [2].
+    """Constant load [N] that gives the spectrum's damage at its mean speed [1, 2].
 
     Damage per hour of the spectrum, sum t_j n_j (P_j / C)^p, equals that of a
     constant load Pm at the time-weighted mean speed n_m = sum t_j n_j:
@@ -39,16 +39,6 @@ def spectrum_equivalent_load_n(time_fraction, speed_rpm, equivalent_load_n,
     with np.errstate(divide="ignore", invalid="ignore"):
         mean = np.power(weighted / total, 1.0 / exponent)
     return np.where(total > 0, mean, 0.0)
-
-
-def required_dynamic_rating_n(dynamic_rating_n, life, target_life,
-                              exponent=LIFE_EXPONENT_ROLLER):
-    """Rating C [N] that turns ``life`` (at rating ``dynamic_rating_n``) into ``target_life``.
-
-    Every case life follows (C/P)^p [1], so a spectrum life scales with C^p and
-    C_required = C (L_target / L)^(1/p). Units of the two lives only need to agree.
-    """
-    return dynamic_rating_n * np.power(np.asarray(target_life) / life, 1.0 / exponent)
 
 
 def required_static_rating_n(max_static_load_n, required_safety):

@@ -21,8 +21,6 @@ import numpy as np
 
 from hubload.model import iso281
 
-KNEE_CYCLES = 1e3
-
 
 def equivalent_reversed_stress_pa(alternating_pa, mean_pa, ultimate_pa):
     """Fully reversed stress [Pa] with the same Goodman damage as (sigma_a, sigma_m) [1].
