@@ -16,6 +16,7 @@ import numpy as np
 
 BACK_TO_BACK = "back-to-back"
 FACE_TO_FACE = "face-to-face"
+ARRANGEMENTS = (BACK_TO_BACK, FACE_TO_FACE)
 
 
 def induced_axial_force_n(radial_load_n, y_factor):

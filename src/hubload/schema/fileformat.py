@@ -6,7 +6,15 @@ positive outboard (towards the wheel). Units are part of every key name.
 
 from __future__ import annotations
 
+from hubload.model.lubrication import (CONTAMINATION_LEVELS, GREASE_CLEANLINESS,
+                                       RELIABILITY_MAX_PERCENT, RELIABILITY_MIN_PERCENT)
+from hubload.model.shaft.strength import SURFACES
+from hubload.model.shaft.stress import CRITERIA
+from hubload.model.tapered_pair import ARRANGEMENTS
 from hubload.schema.spec import Choice, Field, Table
+
+# Choices and limits the model's tables define are taken from them, so that the validator
+# can never let through a value the model has no entry for.
 
 DEFAULT_ADHESION_MU = 0.6
 TIME_SUM_TOLERANCE_PERCENT = 0.5
@@ -23,7 +31,7 @@ PROJECT = Table(
               exclusive_minimum=0, example=5000),
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
-              minimum=90, maximum=99.95, example=90),
+              minimum=RELIABILITY_MIN_PERCENT, maximum=RELIABILITY_MAX_PERCENT, example=90),
         Field("method", "string", "How the pair's lives are computed: iso281 (the ISO 281 rule "
               "for a pair set to zero clearance) or refined (internal load distribution with the "
               "bearing setting, ISO/TS 16281 reference life; needs each bearing's internal "
@@ -153,7 +161,7 @@ PAIR = Table(
     doc="The pair of tapered roller bearings in the motor's front housing.",
     fields=(
         Field("arrangement", "string", "How the two bearings are mounted.",
-              required=True, choices=("back-to-back", "face-to-face"), example="back-to-back"),
+              required=True, choices=ARRANGEMENTS, example="back-to-back"),
         Field("axial_setting_um", "number", "Axial setting of the pair [um] for the refined "
               "method: > 0 end play (axial free travel of the shaft), < 0 preload, 0 "
               "line-to-line.", default=0.0, minimum=-500, maximum=2000, example=0),
@@ -223,11 +231,11 @@ LUBRICATION = Table(
               "override it).", required=True, minimum=-40, maximum=150, example=60),
         Field("method", "string", "oil-filtered: oil with on-line filtration; oil-unfiltered: "
               "no or off-line filtration; grease.", required=True,
-              choices=("oil-filtered", "oil-unfiltered", "grease"), example="oil-filtered"),
+              choices=tuple(CONTAMINATION_LEVELS), example="oil-filtered"),
         Field("iso4406", "string", 'Oil cleanliness code "R4/R6/R14" or "-/R6/R14" (ISO 4406); '
               "R6/R14 select the row of ISO 281 annex A.", example="18/16/13"),
         Field("grease_cleanliness", "string", "Cleanliness level for grease (ISO 281 annex A).",
-              choices=("high", "normal", "slight-to-typical", "severe", "very-severe")),
+              choices=GREASE_CLEANLINESS),
     ),
     choices=(Choice("cleanliness", groups=(("iso4406",), ("grease_cleanliness",)),
                     doc="Give iso4406 for the oil methods or grease_cleanliness for grease."),),
@@ -286,7 +294,7 @@ SHAFT = Table(
         Field("yield_strength_MPa", "number", "Yield strength Sy of the shaft steel [MPa].",
               required=True, exclusive_minimum=0, example=700),
         Field("surface", "string", "Surface finish at the checked sections (Marin surface "
-              "factor).", required=True, choices=("ground", "machined", "hot-rolled", "forged"),
+              "factor).", required=True, choices=SURFACES,
               example="machined"),
         Field("temperature_C", "number", "Operating temperature of the shaft [deg C] (Marin "
               "temperature factor; 1 up to 21 C).", minimum=-60, maximum=538),
@@ -294,7 +302,7 @@ SHAFT = Table(
               "reliability factor; 50 = the mean endurance limit).", default=50.0, minimum=50,
               exclusive_maximum=100, example=99),
         Field("criterion", "string", "Fatigue criterion of the safety factor.",
-              default="goodman", choices=("goodman", "asme-elliptic")),
+              default="goodman", choices=CRITERIA),
         Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
               "(default 1.5, common practice for shafts under well-known loads).",
               default=1.5, exclusive_minimum=0),
