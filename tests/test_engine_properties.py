@@ -109,6 +109,8 @@ def test_wheel_between_the_bearings_can_trade_thrust_for_radial_load():
 
 
 def test_standstill_case_adds_no_damage_but_sets_static_safety():
+    # No revolutions, no fatigue damage (ISO 281:2007 7.1 counts life in revolutions); the
+    # static safety s0 = C0 / P0 (ISO 76:2006) takes the heaviest case, the parked one.
     result = evaluate(study_with([case("move", 90, 10, 0, 0, 60), case("park", 10, 50, 0, 0, 0)]))
     outboard = result.bearings["outboard"]
     assert outboard.damage_share[1] == 0.0
@@ -117,6 +119,7 @@ def test_standstill_case_adds_no_damage_but_sets_static_safety():
 
 
 def test_time_fractions_sum_to_one_and_system_shares_sum_to_one():
+    # Property: shares of a whole (time, and the pair's Palmgren-Miner damage).
     result = evaluate(study_with([case("a", 60, 10, 2, 1, 60), case("b", 40, 20, -2, 3, 30)]))
     assert np.sum(result.study.cases.time_fraction) == pytest.approx(1.0)
     assert np.sum(result.system_damage_share) == pytest.approx(1.0)

@@ -68,6 +68,8 @@ def test_efficiencies_enter_torque_and_speed_as_in_the_issue():
 
 
 def test_half_mode_case_turns_twice_as_fast_with_half_the_torque():
+    # N = Q eta_v / V_D and T = V_D p eta_m / (2 pi) (Esposito, Fluid Power with Applications,
+    # 7th ed., ch. 6, from memory) with V_D halved; power T 2 pi N is unchanged.
     cases = [hydraulic_case("full", 50, wheel_load_kN=60, pressure_bar=200, flow_lpm=90),
              hydraulic_case("half", 50, wheel_load_kN=60, pressure_bar=200, flow_lpm=90,
                             mode="half")]
@@ -83,6 +85,8 @@ def test_half_mode_case_turns_twice_as_fast_with_half_the_torque():
        wheel=st.floats(5, 80), side=st.floats(-20, 20))
 def test_hydraulic_case_loads_the_bearings_like_the_force_case_it_stands_for(
         pressure, flow, wheel, side):
+    # Property: the bearings see only the ground forces (rigid-shaft statics), however the case
+    # was written.
     motor = {"displacement_cc": 1200, "efficiency_mechanical": 0.92,
              "efficiency_volumetric": 0.96}
     hydraulic = study_from_document(document_with([hydraulic_case(
@@ -120,6 +124,7 @@ def test_outer_and_inner_wheel_from_the_vehicle_block(document, write_case_file)
 
 
 def test_vehicle_block_without_lateral_acceleration_gives_half_the_axle_load():
+    # Static equilibrium of a symmetric axle at rest: each wheel carries half; no side force.
     study = study_from_document(document_with(
         [hydraulic_case(speed_rpm=30)], vehicle=VEHICLE))
     assert study.cases.wheel_load_n[0] == pytest.approx(15e3)
@@ -127,6 +132,8 @@ def test_vehicle_block_without_lateral_acceleration_gives_half_the_axle_load():
 
 
 def test_given_wheel_load_and_side_force_override_the_derived_ones():
+    # Derived values by Milliken & Milliken, RCVD, ch. 18 (from memory): W = A/2 + A a_y h / t
+    # and S = W a_y; a value the file gives replaces its derived one.
     cases = [hydraulic_case("load given", 50, wheel_load_kN=12, lateral_accel_g=0.2, speed_rpm=9),
              hydraulic_case("side given", 50, side_force_kN=1.5, lateral_accel_g=0.2,
                             speed_rpm=9)]
@@ -150,6 +157,8 @@ def test_tractive_force_above_adhesion_is_capped_and_flagged(document, write_cas
 
 
 def test_default_adhesion_is_0_6():
+    # Default mu = 0.6 (common practice for tyres on dry ground): cap 0.6 x 10 kN = 6 kN
+    # (Wong, Theory of Ground Vehicles, 4th ed., sec. 1.3, from memory: F <= mu W).
     study = study_from_document(document_with(
         [hydraulic_case(wheel_load_kN=10, tractive_force_kN=7, speed_rpm=5)]))
     assert study.cases.tractive_force_n[0] == pytest.approx(6e3)
@@ -171,12 +180,15 @@ def test_pressure_and_speed_above_the_motor_rating_are_flagged(write_case_file):
 
 
 def test_side_and_tractive_force_beyond_the_friction_circle_are_flagged():
+    # Friction circle (Wong, 4th ed., sec. 1.3, from memory): hypot(4, 4.5) = 6.02 kN exceeds
+    # 0.6 x 10 kN, while 4 kN alone stays below it (no slip flag).
     study = study_from_document(document_with(
         [hydraulic_case(wheel_load_kN=10, side_force_kN=4.5, tractive_force_kN=4, speed_rpm=5)]))
     assert [flag.code for flag in study.cases.operating.flags(0)] == ["tyre_slides"]
 
 
 def test_every_case_carries_the_operating_point_keys(document, write_case_file):
+    # Wheel torque = tractive force x rolling radius (0.4 m here; rolling without slip).
     for case in check_json(write_case_file(document))["cases"]:
         assert {"torque_Nm", "tractive_force_kN", "wheel_load_kN", "side_force_kN",
                 "flags"} <= set(case)

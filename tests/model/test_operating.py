@@ -43,6 +43,7 @@ def test_speed_of_an_ideal_motor_is_flow_over_displacement():
 @given(dp=signed_pressure_pa, q=flow_m3s, vg=displacement_m3, eta_v=efficiency, eta_hm=efficiency)
 def test_half_mode_doubles_speed_and_halves_torque_at_equal_flow_and_pressure(
         dp, q, vg, eta_v, eta_hm):
+    # N = Q / V_D and T = V_D p / (2 pi) (Esposito, 7th ed., ch. 6, from memory), V_D halved.
     full = operating.effective_displacement_m3(vg, False)
     half = operating.effective_displacement_m3(vg, True)
     assert operating.motor_speed_rpm(q, half, eta_v, dp) == pytest.approx(
@@ -54,6 +55,7 @@ def test_half_mode_doubles_speed_and_halves_torque_at_equal_flow_and_pressure(
 @settings(max_examples=100, deadline=None)
 @given(dp=pressure_pa, vg=displacement_m3, eta_hm=efficiency)
 def test_efficiencies_below_one_never_raise_torque_per_pressure_when_motoring(dp, vg, eta_hm):
+    # Actual torque = eta_m x theoretical torque of a motor (Esposito, 7th ed., ch. 6, from memory).
     assert (operating.hydraulic_torque_nm(dp, vg, eta_hm)
             <= operating.hydraulic_torque_nm(dp, vg, 1.0) * (1 + 1e-12))
 
@@ -87,6 +89,7 @@ def test_energy_balance_of_motor_and_pump(dp, q, vg, eta_v, eta_hm):
 @given(dp=signed_pressure_pa, q=flow_m3s, vg=displacement_m3, eta_v=efficiency, eta_hm=efficiency)
 def test_pressure_and_flow_from_torque_and_speed_invert_the_motor_relations(
         dp, q, vg, eta_v, eta_hm):
+    # Property: the force-case relations are the exact inverses of the hydraulic ones.
     torque = operating.hydraulic_torque_nm(dp, vg, eta_hm)
     speed = operating.motor_speed_rpm(q, vg, eta_v, dp)
     assert operating.motor_pressure_pa(torque, vg, eta_hm) == pytest.approx(dp, rel=1e-9,
@@ -180,6 +183,8 @@ def test_two_wheels_of_an_axle_carry_the_axle_load_and_its_lateral_force(axle, a
 @settings(max_examples=100, deadline=None)
 @given(axle=axle_load_n, a_y=st.floats(0.0, 0.6), h=cog_m, t=track_m)
 def test_outside_wheel_side_force_points_inboard(axle, a_y, h, t):
+    # Load transfer goes to the outside wheel (Gillespie 1992, ch. 9, from memory), and the
+    # ground pushes it towards the turn centre, i.e. inboard (docs/conventions.md).
     outer = operating.cornering_wheel_load_n(axle, a_y, h, t)
     assert outer >= 0.5 * axle
     assert operating.cornering_side_force_n(outer, a_y) >= 0
@@ -200,6 +205,7 @@ def test_adhesion_cap_keeps_sign_and_never_exceeds_mu_times_wheel_load(force, lo
 
 
 def test_wheel_in_the_air_transmits_no_force():
+    # F <= mu W (Wong, 4th ed., sec. 1.3, from memory) with W = 0.
     capped, slips = operating.adhesion_capped_force_n(np.array([5e3, -2e3, 0.0]), 0.0, 0.6)
     assert np.all(capped == 0) and list(slips) == [True, True, False]
 
