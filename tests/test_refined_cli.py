@@ -101,7 +101,19 @@ def test_angle_and_load_factors_together_serve_each_their_method(document, write
     # ISO 281 rule with the typed Y = 1.5 (not 0.4 cot 15 deg = 1.49): induced force 0.5 Fr / Y.
     induced = [0.5 * case[label]["fr_kN"] / 1.5 for label in ("outboard", "inboard")]
     assert max(case["outboard"]["fa_kN"], case["inboard"]["fa_kN"]) >= max(induced) - 1e-9
+    # The pair rule (ISO 281:2007 7.3.2) leaves one bearing with exactly its own induced force,
+    # which tells Y = 1.5 from the angle's 1.49 (0.5 % apart).
+    assert any(case[label]["fa_kN"] == pytest.approx(force, rel=1e-9)
+               for label, force in zip(("outboard", "inboard"), induced))
     assert found["bearings"]["outboard"]["c_from_geometry_kN"] == pytest.approx(C_GEOMETRY_KN)
+    # ISO 281:2007 7.1.1 by hand (N, mm): Cr = bm fc (Lwe cos a)^(7/9) Z^(3/4) Dwe^(29/27),
+    # bm = 1.1, fc interpolated in table 7 between 0.13 (87.1) and 0.14 (87.7), from memory.
+    alpha = math.radians(15)
+    gamma = 12 * math.cos(alpha) / 85
+    fc = 87.1 + (gamma - 0.13) / 0.01 * (87.7 - 87.1)
+    by_hand_kn = 1.1 * fc * (20 * math.cos(alpha)) ** (7 / 9) * 20 ** 0.75 * 12 ** (29 / 27) / 1e3
+    assert found["bearings"]["outboard"]["c_from_geometry_kN"] == pytest.approx(by_hand_kn,
+                                                                                 rel=1e-9)
 
 
 def test_geometry_far_from_the_typed_rating_warns(document, write_case_file):
