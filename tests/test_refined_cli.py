@@ -233,3 +233,31 @@ def test_setting_table_prints_a_zero_life_as_zero_not_infinite(document, write_c
             for line in console.export_text().splitlines() if line.startswith("│")]
     row = next(row for row in rows if row[0] == "0")
     assert row[-1] == "0" and "infinite" not in row
+
+
+def test_case_without_equilibrium_counts_as_zero_life_and_dominates(document, write_case_file,
+                                                                    monkeypatch):
+    # A case the solver cannot balance is counted with life 0 (docs/refined-method.md): by
+    # Palmgren-Miner and the series-system rule (e = 9/8) the pair's life is then 0 and that
+    # case carries all of its damage. Forced here by marking case 1 unconverged.
+    from hubload.model.refined import solver
+
+    solve = solver.solve_equilibrium
+
+    def second_case_fails(laminae, external, setting):
+        found = solve(laminae, external, setting)
+        converged = found.converged.copy()
+        converged[1] = False
+        return solver.Equilibrium(found.displacement, found.lamina_loads_n, converged,
+                                  found.iterations)
+
+    monkeypatch.setattr(solver, "solve_equilibrium", second_case_fails)
+    result = run("check", write_case_file(with_geometry(document)), "--method", "refined",
+                 "--json")
+    assert result.exit_code == 0 and "RuntimeWarning" not in result.output, result.output
+    found = json.loads(result.output)
+    assert found["system"]["l10_h"] == 0.0
+    assert found["dominant_case"]["index"] == 1
+    assert [case["system_damage_share"] for case in found["cases"]] == [0.0, 1.0]
+    assert any("No equilibrium of the shaft was found for case 'turn'" in warning
+               for warning in found["warnings"])

@@ -1,6 +1,7 @@
 """ISO 281 / ISO 76 equations against the standards' own relations."""
 
 import math
+import warnings
 
 import numpy as np
 import pytest
@@ -70,3 +71,27 @@ def test_miner_sum_and_shares():
     shares = iso281.damage_shares(rates)
     assert shares.sum() == pytest.approx(1.0)
     assert shares[2] == 0.0
+
+
+def test_zero_life_case_takes_the_whole_miner_damage():
+    # Palmgren-Miner, 1/L = sum t_j / L_j: a case that fails at once (life 0: no equilibrium in
+    # the refined model) with time in it makes the spectrum life 0 and carries all the damage;
+    # a case without time adds none, whatever its life. No NaN, no numpy warning on the way.
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")
+        rates = iso281.damage_rate_per_hour(np.array([0.5, 0.3, 0.2, 0.0]),
+                                            np.array([1000.0, 0.0, np.inf, 0.0]))
+        assert iso281.spectrum_life_h(rates) == 0.0
+        assert iso281.damage_shares(rates).tolist() == [0.0, 1.0, 0.0, 0.0]
+
+
+def test_zero_life_bearing_takes_the_whole_system_share():
+    # Bearings in series (Lundberg-Palmgren, L = (sum L_k^-e)^(-1/e)): a bearing of zero life
+    # makes the system life 0, and the system's damage is all that bearing's.
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")
+        assert iso281.system_life(0.0, 500.0) == 0.0
+        assert iso281.system_life(np.inf, 500.0) == pytest.approx(500.0)
+        shares = iso281.system_damage_shares(
+            [0.0, 500.0], [np.array([0.2, 0.8]), np.array([0.5, 0.5])])
+        assert shares.tolist() == pytest.approx([0.2, 0.8])

@@ -70,9 +70,15 @@ def life_hours(life_mrev, speed_rpm):
 
 
 def damage_rate_per_hour(time_fraction, case_life_h):
-    """Palmgren-Miner damage per hour of operation of each case [3]: t_j / L_j."""
-    with np.errstate(divide="ignore"):
-        return np.where(np.isinf(case_life_h), 0.0, time_fraction / case_life_h)
+    """Palmgren-Miner damage per hour of operation of each case [3]: t_j / L_j.
+
+    An infinite life, or no time in the case, adds nothing; a zero life (a case the
+    refined model finds no equilibrium for) with time in it adds an infinite rate.
+    """
+    time_fraction = np.asarray(time_fraction, dtype=float)
+    with np.errstate(divide="ignore", invalid="ignore"):
+        rate = time_fraction / case_life_h
+    return np.where(np.isinf(case_life_h) | (time_fraction == 0), 0.0, rate)
 
 
 def spectrum_life_h(damage_rate):
@@ -82,17 +88,37 @@ def spectrum_life_h(damage_rate):
         return np.where(total > 0, 1.0 / np.where(total > 0, total, 1.0), np.inf)
 
 
+def shares(values, axis=-1):
+    """Each value's share of their sum along ``axis`` (0 where the sum is 0).
+
+    Infinite values (the damage of a zero life) take the whole sum between them.
+    """
+    values = np.asarray(values, dtype=float)
+    infinite = np.isinf(values)
+    values = np.where(np.any(infinite, axis=axis, keepdims=True), infinite, values)
+    total = np.sum(values, axis=axis, keepdims=True)
+    return np.where(total > 0, values / np.where(total > 0, total, 1.0), 0.0)
+
+
 def damage_shares(damage_rate):
     """Each case's share of the Palmgren-Miner damage sum [3] (sums to 1 over the case axis;
     0 when no damage)."""
-    total = np.sum(damage_rate, axis=-1, keepdims=True)
-    return np.where(total > 0, damage_rate / np.where(total > 0, total, 1.0), 0.0)
+    return shares(damage_rate, axis=-1)
+
+
+def series_terms(lives, weibull_slope=WEIBULL_SLOPE_ROLLER):
+    """The terms L_k^-e of the system-life sum [4], stacked on a new first axis.
+
+    An infinite life gives 0 (it drops out), a zero life an infinite term.
+    """
+    with np.errstate(divide="ignore"):
+        return np.stack(np.broadcast_arrays(
+            *(np.power(np.asarray(life, dtype=float), -weibull_slope) for life in lives)))
 
 
 def system_life(*lives, weibull_slope=WEIBULL_SLOPE_ROLLER):
     """Life of bearings in series [4]: L = (sum L_k^-e)^(-1/e); inf lives drop out."""
-    inverse_sum = sum(np.power(np.asarray(life, dtype=float), -weibull_slope)
-                      for life in lives)
+    inverse_sum = np.sum(series_terms(lives, weibull_slope), axis=0)
     with np.errstate(divide="ignore"):
         return np.power(inverse_sum, -1.0 / weibull_slope)
 
@@ -103,11 +129,8 @@ def system_damage_shares(lives_h, damage_shares_, weibull_slope=WEIBULL_SLOPE_RO
     The bearings' per-case shares (case axis last) are weighted by their term
     L^-e of the system-life sum, i.e. their part of the system's failure probability.
     """
-    weights = [np.power(np.asarray(life, dtype=float), -weibull_slope) for life in lives_h]
-    total = sum(weights)
-    safe_total = np.where(total > 0, total, 1.0)
-    return sum(np.where(total > 0, weight / safe_total, 0.0)[..., None] * share
-               for weight, share in zip(weights, damage_shares_))
+    weights = shares(series_terms(lives_h, weibull_slope), axis=0)
+    return sum(weight[..., None] * share for weight, share in zip(weights, damage_shares_))
 
 
 def static_safety(static_rating_n, max_static_load_n):
