@@ -70,3 +70,20 @@ def test_toml_syntax_error_names_line(write_case_file):
 def test_missing_file(tmp_path):
     message = run_check(str(tmp_path / "nowhere.toml"))
     assert "file not found" in message
+
+
+def test_byte_order_mark_is_named(document, write_case_file):
+    # TOML 1.0 (toml.io): a document is UTF-8; Python's tomllib rejects a leading BOM, which
+    # some editors write. The line says what to change instead of "invalid statement".
+    import tomli_w
+    message = run_check(write_case_file("\ufeff" + tomli_w.dumps(document)))
+    assert "byte-order mark" in message
+
+
+def test_empty_number_list_is_called_empty(document, write_case_file):
+    document["shaft"] = {"ultimate_strength_MPa": 800, "yield_strength_MPa": 600,
+                         "surface": "machined",
+                         "section": [{"name": "fillet", "position_mm": 40, "diameter_mm": 50}],
+                         "permissible": {"load_position_mm": [], "radial_load_kN": []}}
+    message = run_check(write_case_file(document))
+    assert "shaft.permissible.load_position_mm" in message and "got an empty list" in message

@@ -22,6 +22,7 @@ from hubload.schema.fileformat import TIME_SUM_TOLERANCE_PERCENT
 
 MM = 1e-3
 KN = 1e3
+BYTE_ORDER_MARK = "\ufeff"
 
 
 def load_study(path: str | Path) -> Study:
@@ -43,6 +44,9 @@ def read_document(path: str | Path) -> dict:
         raise InputError("file not found", file=file) from None
     except (OSError, UnicodeDecodeError) as error:
         raise InputError(f"cannot read the file ({error})", file=file) from None
+    if text.startswith(BYTE_ORDER_MARK):
+        raise InputError("the file starts with a byte-order mark, which TOML does not allow; "
+                         "save it as UTF-8 without BOM", file=file)
     try:
         document = tomllib.loads(text)
     except tomllib.TOMLDecodeError as error:

@@ -132,7 +132,7 @@ def describe(value: Any) -> str:
     if isinstance(value, dict):
         return "a table"
     if isinstance(value, list):
-        return "a list"
+        return "a list" if value else "an empty list"
     if isinstance(value, str):
         return f"a string ({value!r})"
     return f"{type(value).__name__} ({value!r})"
