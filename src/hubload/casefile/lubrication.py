@@ -12,7 +12,7 @@ from hubload.model.lubrication import CELSIUS_ZERO_K
 
 CST = 1e-6
 ISO4406_PATTERN = re.compile(r"^\s*(\d{1,2}|-)\s*/\s*(\d{1,2})\s*/\s*(\d{1,2})\s*$")
-ISO4406_HIGHEST_SCALE_NUMBER = 28
+ISO4406_HIGHEST_SCALE_NUMBER = 28   # last row of the ISO 4406:1999 scale table (from memory)
 
 
 def read_lubrication(data: dict | None, case_blocks: list[dict], pair: Pair) -> Lubrication | None:

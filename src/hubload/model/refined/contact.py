@@ -30,7 +30,7 @@ MM = 1e-3
 LOAD_EXPONENT = 10.0 / 9.0
 PALMGREN_APPROACH_CONSTANT = 3.84e-5   # [mm N^-0.9 mm^0.8], one contact, [1]
 STEEL_MODULUS_PA = 207e9               # bearing steel, Harris & Kotzalas (from memory)
-STEEL_POISSON = 0.3
+STEEL_POISSON = 0.3                    # bearing steel (common practice)
 LAMINAE = 30                           # ISO/TS 16281 asks for at least 30 [2]
 LOG_PROFILE_SHAPE = 0.99               # 1 - (finite drop at the ends) of the log curve [4]
 
