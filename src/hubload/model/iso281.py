@@ -75,10 +75,9 @@ def damage_rate_per_hour(time_fraction, case_life_h):
     An infinite life, or no time in the case, adds nothing; a zero life (a case the
     refined model finds no equilibrium for) with time in it adds an infinite rate.
     """
-    time_fraction = np.asarray(time_fraction, dtype=float)
     with np.errstate(divide="ignore", invalid="ignore"):
-        rate = time_fraction / case_life_h
-    return np.where(np.isinf(case_life_h) | (time_fraction == 0), 0.0, rate)
+        rate = np.asarray(time_fraction, dtype=float) / case_life_h
+    return np.where(np.isnan(rate), 0.0, rate)   # 0 / 0: no time in a zero-life case
 
 
 def spectrum_life_h(damage_rate):
@@ -94,9 +93,11 @@ def shares(values, axis=-1):
     Infinite values (the damage of a zero life) take the whole sum between them.
     """
     values = np.asarray(values, dtype=float)
-    infinite = np.isinf(values)
-    values = np.where(np.any(infinite, axis=axis, keepdims=True), infinite, values)
     total = np.sum(values, axis=axis, keepdims=True)
+    infinite_total = np.isinf(total)
+    if np.any(infinite_total):
+        values = np.where(infinite_total, np.isinf(values), values)
+        total = np.sum(values, axis=axis, keepdims=True)
     return np.where(total > 0, values / np.where(total > 0, total, 1.0), 0.0)
 
 
