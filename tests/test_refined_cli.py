@@ -198,7 +198,8 @@ def test_setting_plot_is_written_and_never_overwritten_without_force(
 
 @pytest.mark.parametrize("args, words", [
     (["--step", "0"], "--step"), (["--from", "50", "--to", "10"], "--to"),
-    (["--from", "-900"], "within"),
+    (["--from", "-900"], "within"), (["--from", "nan"], "--from expects a finite number"),
+    (["--to", "inf"], "--to expects a finite number"),
 ])
 def test_setting_bad_options_exit_2(document, write_case_file, args, words):
     found = run("setting", write_case_file(symmetric_radial(document)), *args)

@@ -11,7 +11,7 @@ from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours, json_number
-from hubload.studies.setting import BEST_RANGE_SHARE, SettingSweep
+from hubload.studies.setting import BEST_RANGE_SHARE, BEST_RANGE_TEXT, SettingSweep
 
 UM = 1e-6
 MPA = 1e6
@@ -102,7 +102,7 @@ def render(sweep: SettingSweep, console: Console) -> None:
         console.print("No setting gives a positive life.")
     else:
         console.print(f"Best setting found: {best.setting_m / UM:g} um (system {sweep.life_name} "
-                      f"{hours(best.life_h)} h); within 10 % of it from {best.low_m / UM:g} to "
+                      f"{hours(best.life_h)} h); {BEST_RANGE_TEXT} from {best.low_m / UM:g} to "
                       f"{best.high_m / UM:g} um (highlighted).")
     for warning in document["warnings"]:
         console.print(f"[yellow]Warning:[/] {escape(warning)}")

@@ -20,6 +20,7 @@ UM = 1e-6
 MAX_POINTS = 2001
 SETTING_LIMITS_UM = (-500.0, 2000.0)   # the file format's limits of axial_setting_um
 BEST_RANGE_SHARE = 0.9                 # settings within 10 % of the best life found
+BEST_RANGE_TEXT = f"within {100 * (1 - BEST_RANGE_SHARE):.0f} % of the best"
 
 
 @dataclass(frozen=True)
@@ -52,7 +53,10 @@ def setting_values_um(start_um: float, stop_um: float, step_um: float) -> np.nda
     low, high = SETTING_LIMITS_UM
     if not (np.isfinite(step_um) and step_um > 0):
         raise InputError(f"--step expects a positive number of um, got {step_um:g}")
-    if not (np.isfinite(start_um) and np.isfinite(stop_um) and stop_um >= start_um):
+    for option, value in (("--from", start_um), ("--to", stop_um)):
+        if not np.isfinite(value):
+            raise InputError(f"{option} expects a finite number of um, got {value:g}")
+    if stop_um < start_um:
         raise InputError(f"--to ({stop_um:g}) must not be below --from ({start_um:g})")
     if start_um < low or stop_um > high:
         raise InputError(f"settings must lie within {low:g} to {high:g} um, "

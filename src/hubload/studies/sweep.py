@@ -132,7 +132,8 @@ def parse_vary(spec: str, document: dict, file: str) -> Axis:
     except ValueError:
         raise InputError(f"expected numbers START:STOP and a whole COUNT, got {span!r}",
                          file=file, key_path=key) from None
-    if not (math.isfinite(start) and math.isfinite(stop)) or count < 2 or start == stop:
+    # a finite span needs finite ends, and linspace overflows without it (+-1e308)
+    if not math.isfinite(stop - start) or count < 2 or start == stop:
         raise InputError(f"expected finite START != STOP and COUNT >= 2, got {span!r}",
                          file=file, key_path=key)
     values = np.linspace(start, stop, count)

@@ -7,7 +7,7 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   new_figure, styled)
-from hubload.studies.setting import SettingSweep
+from hubload.studies.setting import BEST_RANGE_TEXT, SettingSweep
 
 UM = 1e-6
 
@@ -38,7 +38,7 @@ def setting_figure(sweep: SettingSweep) -> Figure:
                   label=f"pair {sweep.life_name}")
     if sweep.best is not None:
         axes.axvspan(sweep.best.low_m / UM, sweep.best.high_m / UM, color="#2ca02c", alpha=0.12,
-                     label="within 10 % of the best")
+                     label=BEST_RANGE_TEXT)
     if sweep.study.target_life_h is not None:
         axes.axhline(sweep.study.target_life_h, color=TARGET_COLOUR, linewidth=1.0,
                      linestyle=":", label="target")
