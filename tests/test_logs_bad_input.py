@@ -96,6 +96,15 @@ def test_unknown_log_type_and_missing_log(tmp_path):
     assert "no logs in the folder" in failed(empty)
 
 
+def test_output_files_are_checked_before_the_log_is_read(tmp_path):
+    # An existing --out file (or a missing folder) is refused first: the user learns it
+    # before a long log is read, here a log that would fail on its row 3.
+    log = write_csv_text(tmp_path / "log.csv", rows_with({2: "2,,0,2,40"}))
+    existing = write_csv_text(tmp_path / "spectrum.toml", "# keep\n")
+    assert "--force" in failed(log, "--out", existing)
+    assert "does not exist" in failed(log, "--out", tmp_path / "no" / "spectrum.toml")
+
+
 def test_bad_case_file_is_reported_with_its_key_path(tmp_path, write_case_file, document):
     document["wheel"]["offset_mm"] = "far"
     case_file = write_case_file(document)

@@ -130,5 +130,6 @@ def test_bad_log_in_a_fleet_stops_the_run_unless_skipped(fleet, tmp_path):
                                         "--jobs", "1"])
     assert stopped.exit_code == 2
     assert "broken.csv: row 2, column 'time_s'" in stopped.output
+    assert len(stopped.output.strip().splitlines()) == 1  # one line, like every input error
     skipped = spectrum_json(mixed, "--case-file", YARD_LOADER, "--jobs", "1", "--skip-bad")
     assert len(skipped["logs"]) == 3 and len(skipped["skipped"]) == 1

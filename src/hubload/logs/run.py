@@ -18,7 +18,8 @@ from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
 from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c, spectrum_result
 from hubload.report import logsjson, logsview
-from hubload.report.spectrumfile import spectrum_text, write_new_file
+from hubload.report.files import checked_output, write_text
+from hubload.report.spectrumfile import spectrum_text
 
 COMBINED_NAME = "combined"
 
@@ -50,8 +51,11 @@ def spectrum(request: Request) -> None:
                          max_gap_s=request.max_gap_s, classes=parse_classes(request.classes))
     target = Path(request.log)
     if target.is_dir():
-        run_fleet(request, study, machine, options, [str(p) for p in find_logs(target)])
+        paths = [str(p) for p in find_logs(target)]
+        run_fleet(request, study, machine, options, paths, fleet_targets(request, paths))
     else:
+        if request.out:  # before the log is read: a refusal should not wait for a long log
+            checked_output(request.out, request.force)
         run_single(request, study, machine, options)
 
 
@@ -62,9 +66,9 @@ def run_single(request: Request, study: Study, machine: dict, options: LogOption
     result = spectrum_result(found, study)
     written = None
     if request.out:
-        write_new_file(request.out, spectrum_text(machine, result.classed.study.cases,
-                                                  Path(request.log).name, study.title,
-                                                  classed_temperature_c(found)), request.force)
+        write_text(request.out, spectrum_text(machine, result.classed.study.cases,
+                                              Path(request.log).name, study.title,
+                                              classed_temperature_c(found)), request.force)
         written = request.out
     if request.as_json:
         click.echo(json.dumps(logsjson.single_document(result, request.gaps, written,
@@ -74,18 +78,18 @@ def run_single(request: Request, study: Study, machine: dict, options: LogOption
 
 
 def run_fleet(request: Request, study: Study, machine: dict, options: LogOptions,
-              paths: list[str]) -> None:
+              paths: list[str], targets: dict[str, Path]) -> None:
     found = run(request, paths, study, options)
     failures = [f.message for f in found if isinstance(f, Failure)]
     if failures and not request.skip_bad:
         raise InputError(f"{len(failures)} of {len(paths)} logs could not be used "
-                         "(--skip-bad leaves them out):\n  " + "\n  ".join(failures))
+                         "(--skip-bad leaves them out): " + "; ".join(failures))
     summaries = [s for s in found if not isinstance(s, Failure)]
     if not summaries:
         raise InputError("no usable log in the folder", file=request.log)
     results = [spectrum_result(s, study) for s in summaries]
     combined = spectrum_result(merge_summaries(COMBINED_NAME, summaries, options.classes), study)
-    files = write_fleet_files(request, machine, study, results, combined)
+    files = write_fleet_files(targets, machine, study, results, combined)
     ranking = logsjson.ranking(results, combined)
     if request.as_json:
         click.echo(json.dumps(logsjson.fleet_document(results, combined, request.gaps, files,
@@ -94,31 +98,45 @@ def run_fleet(request: Request, study: Study, machine: dict, options: LogOptions
         logsview.render_fleet(combined, ranking, Console(), files, failures)
 
 
-def write_fleet_files(request: Request, machine: dict, study: Study,
-                      results: list[SpectrumResult], combined: SpectrumResult) -> dict:
-    """One spectrum per log (``<stem>.toml``) and ``combined.toml`` in the --out folder."""
+def fleet_targets(request: Request, paths: list[str]) -> dict[str, Path]:
+    """The spectrum file of each log (``<stem>.toml``) and ``combined.toml`` in the --out
+    folder, checked before any log is read; empty without --out."""
     if not request.out:
         return {}
     folder = Path(request.out)
     if folder.exists() and not folder.is_dir():
         raise InputError("expected a folder for the spectra of a folder of logs",
                          file=str(folder), key_path="--out")
-    targets = {r.summary.name: folder / f"{Path(r.summary.name).stem}.toml" for r in results}
+    targets = {path: folder / f"{Path(path).stem}.toml" for path in paths}
     targets[COMBINED_NAME] = folder / f"{COMBINED_NAME}.toml"
     if len(set(targets.values())) < len(targets):
         raise InputError("two logs would write the same spectrum file (same name stem, or a "
                          f"log named {COMBINED_NAME!r}); rename one", file=request.log)
-    if not request.force:
+    if folder.is_dir():
         for target in targets.values():
-            if target.exists():
-                raise InputError("file exists; use --force to overwrite it", file=str(target))
+            checked_output(str(target), request.force)
+    return targets
+
+
+def write_fleet_files(targets: dict[str, Path], machine: dict, study: Study,
+                      results: list[SpectrumResult], combined: SpectrumResult) -> dict:
+    """The spectrum of each usable log and the combined one, in the --out folder."""
+    if not targets:
+        return {}
+    folder = targets[COMBINED_NAME].parent
+    try:
+        folder.mkdir(parents=True, exist_ok=True)
+    except OSError as error:
+        raise InputError(f"cannot create the folder ({error.strerror})", file=str(folder),
+                         key_path="--out") from None
+    written = {}
     for result in [*results, combined]:
         name = result.summary.name
         log_name = Path(name).name if name != COMBINED_NAME else f"{len(results)} logs"
-        write_new_file(targets[name], spectrum_text(
+        written[name] = str(write_text(str(targets[name]), spectrum_text(
             machine, result.classed.study.cases, log_name, study.title,
-            classed_temperature_c(result.summary)), True)
-    return {name: str(path) for name, path in targets.items()}
+            classed_temperature_c(result.summary)), True))
+    return written
 
 
 def run(request: Request, paths: list[str], study: Study, options: LogOptions) -> list:

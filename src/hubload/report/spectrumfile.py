@@ -2,12 +2,9 @@
 
 from __future__ import annotations
 
-from pathlib import Path
-
 import tomli_w
 
 from hubload.casefile.study import Cases
-from hubload.errors import InputError
 
 KN = 1e3
 SIGNIFICANT = 10
@@ -43,15 +40,3 @@ def spectrum_text(machine: dict, cases: Cases, log_name: str, title: str,
               "# time-at-level classes; each case holds a class's share of time, its mean\n"
               "# speed and the revolution-weighted power mean (p = 10/3) of each force.\n\n")
     return header + tomli_w.dumps(document)
-
-
-def write_new_file(path: str | Path, text: str, force: bool) -> None:
-    """Write ``text``; an existing file is only replaced with ``force``."""
-    path = Path(path)
-    if path.exists() and not force:
-        raise InputError("file exists; use --force to overwrite it", file=str(path))
-    try:
-        path.parent.mkdir(parents=True, exist_ok=True)
-        path.write_text(text, encoding="utf-8")
-    except OSError as error:
-        raise InputError(f"cannot write the file ({error})", file=str(path)) from None
