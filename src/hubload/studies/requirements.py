@@ -16,7 +16,6 @@ import math
 from dataclasses import dataclass
 
 import numpy as np
-from scipy.optimize import brentq
 
 from hubload.casefile.study import Study
 from hubload.engine import Result, evaluate
@@ -104,6 +103,8 @@ def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
     low, high = guess, guess
     for _ in range(BRACKET_STEPS):
         if excess(low) < 0 < excess(high):
+            from scipy.optimize import brentq  # here only: importing it takes 0.4 s
+
             return Solve(brentq(excess, low, high, xtol=1e-14, rtol=4 * np.finfo(float).eps),
                          "brentq", on_geometry=on_geometry)
         low, high = low / 2, high * 2
