@@ -26,7 +26,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.casefile.study import Cases, Study
-from hubload.engine import Result, evaluate
+from hubload.engine import STATIC_SAFETY_WARNING, Result, evaluate
 from hubload.logs import shaft
 from hubload.logs.pipeline import CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT, LogSummary
 from hubload.logs.samples import with_cases
@@ -34,7 +34,6 @@ from hubload.model import dwell, iso281
 
 SHORT_NAMES = {"wheel_load_kN": ("W", "kN"), "side_force_kN": ("S", "kN"),
                "tractive_force_kN": ("T", "kN"), "speed_rpm": ("n", "r/min")}
-STATIC_SAFETY_WARNING = 2.0
 
 
 @dataclass(frozen=True)
