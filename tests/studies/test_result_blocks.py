@@ -67,3 +67,8 @@ def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
     ((where, found),) = sweep.shaft_crossings()
     assert where == {} and len(found) == 1 and found[0].falls_below
     assert abs(found[0].value - 1 / (1.5 * k)) < x[1] - x[0]
+    # reported without a target life too: the shaft's limit is its own
+    from hubload.report.sweep_out import crossing_lines
+
+    (line,) = [text for text in crossing_lines(sweep) if text.startswith("Shaft")]
+    assert f"k = {found[0].value:.4g}" in line and "falls below" in line

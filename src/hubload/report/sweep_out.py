@@ -18,6 +18,7 @@ from hubload.report.series import all_series
 from hubload.studies.sweep import Sweep
 
 MAP_MAX_COLUMNS = 7
+NO_TARGET = "No target life given ([project] target_life_h): no target crossing."
 
 
 def sweep_document(sweep: Sweep) -> dict:
@@ -128,34 +129,25 @@ def life_map(sweep: Sweep) -> Table:
     return table
 
 
+def direction(crossing) -> str:
+    return "falls below" if crossing.falls_below else "rises above"
+
+
 def crossing_lines(sweep: Sweep) -> list[str]:
-    if sweep.points[0].document.get("verdict") is None:
-        return ["No target life given ([project] target_life_h): no target crossing."]
+    """One key: where the governing life crosses the target and the shaft's lowest safety
+    its required value (each reported on its own: a file may give one without the other)."""
     name, key = sweep.governing_life_name, sweep.axes[-1].key
-    lines = []
-    for where, found in sweep.crossings():
-        at = "".join(f" at {k} = {v:g}" for k, v in where.items())
-        for crossing in found:
-            way = "falls below" if crossing.falls_below else "rises above"
-            how = "interpolated" if crossing.interpolated else "next to an infinite life"
-            lines.append(f"System {name} {way} the target at {key} = {crossing.value:.4g}"
-                         f"{at} ({how}).")
+    verdict = sweep.points[0].document.get("verdict")
+    lines = [NO_TARGET] if verdict is None else [
+        f"System {name} {direction(crossing)} the target at {key} = {crossing.value:.4g} "
+        f"({'interpolated' if crossing.interpolated else 'next to an infinite or zero life'})."
+        for _, found in sweep.crossings() for crossing in found]
     if not lines:
-        side = "above" if sweep.points[0].document["verdict"]["passed"] else "below"
-        lines.append(f"System {name} stays {side} the target over the whole sweep.")
-    return lines + shaft_lines(sweep)
-
-
-def shaft_lines(sweep: Sweep) -> list[str]:
-    key = sweep.axes[-1].key
-    lines = []
-    for where, found in sweep.shaft_crossings():
-        at = "".join(f" at {k} = {v:g}" for k, v in where.items())
-        for crossing in found:
-            way = "falls below" if crossing.falls_below else "rises above"
-            lines.append(f"Shaft's lowest safety {way} its required safety at {key} = "
-                         f"{crossing.value:.4g}{at}.")
-    return lines
+        lines = [f"System {name} stays {'above' if verdict['passed'] else 'below'} the target "
+                 "over the whole sweep."]
+    return lines + [f"Shaft's lowest safety {direction(crossing)} its required safety at "
+                    f"{key} = {crossing.value:.4g}."
+                    for _, found in sweep.shaft_crossings() for crossing in found]
 
 
 def render(sweep: Sweep, console: Console) -> None:
@@ -175,23 +167,29 @@ def render(sweep: Sweep, console: Console) -> None:
 
 
 def crossing_tables(sweep: Sweep) -> list:
-    """Grid sweeps: one row per crossing (values of the other keys, where, which way)."""
+    """Grid sweeps: one table row per crossing (values of the other keys, where, which way),
+    for the governing life and for the shaft's lowest safety, each on its own."""
+    name = sweep.governing_life_name
+    life = crossing_table(sweep, f"Where the system {name} crosses the target",
+                          sweep.crossings())
+    shaft = crossing_table(sweep, "Where the shaft's lowest safety crosses its required safety",
+                           sweep.shaft_crossings())
     if sweep.points[0].document.get("verdict") is None:
-        return ["No target life given ([project] target_life_h): no target crossing."]
-    tables = []
-    for title, found in ((f"Where the system {sweep.governing_life_name} crosses the target",
-                          sweep.crossings()),
-                         ("Where the shaft's lowest safety crosses its required safety",
-                          sweep.shaft_crossings())):
-        rows = [(where, c) for where, crossings in found for c in crossings]
-        if not rows:
-            continue
-        table = Table(title=title, title_justify="left", box=box.SIMPLE_HEAD)
-        for axis in sweep.axes:
-            table.add_column(axis.key, justify="right")
-        table.add_column("")
-        for where, crossing in rows:
-            table.add_row(*(f"{v:g}" for v in where.values()), f"{crossing.value:.4g}",
-                          "falls below" if crossing.falls_below else "rises above")
-        tables.append(table)
-    return tables or [f"System {sweep.governing_life_name} does not cross the target on the grid."]
+        note = [NO_TARGET]
+    else:
+        note = [] if life else [f"System {name} does not cross the target on the grid."]
+    return note + [table for table in (life, shaft) if table is not None]
+
+
+def crossing_table(sweep: Sweep, title: str, found) -> Table | None:
+    rows = [(where, crossing) for where, crossings in found for crossing in crossings]
+    if not rows:
+        return None
+    table = Table(title=title, title_justify="left", box=box.SIMPLE_HEAD)
+    for axis in sweep.axes:
+        table.add_column(axis.key, justify="right")
+    table.add_column("")
+    for where, crossing in rows:
+        table.add_row(*(f"{v:g}" for v in where.values()), f"{crossing.value:.4g}",
+                      direction(crossing))
+    return table

@@ -81,22 +81,22 @@ class Sweep:
         """
         if self.points[0].document.get("verdict") is None:
             return []
-        ratios = np.array([ratio_to_target(p.document) for p in self.points]).reshape(self.shape)
-        found = []
-        for fixed in itertools.product(*(range(n) for n in self.shape[:-1])):
-            where = {axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)}
-            found.append((where, target_crossings(self.axes[-1].values, ratios[fixed], 1.0)))
-        return found
-
+        return self.crossings_of_one([ratio_to_target(p.document) for p in self.points])
 
     def shaft_crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
         """Where the shaft's lowest safety crosses its required safety (when both are given)."""
         ratios = [shaft_ratio(p.document) for p in self.points]
         if any(ratio is None for ratio in ratios):
             return []
-        ratios = np.array(ratios).reshape(self.shape)
+        return self.crossings_of_one(ratios)
+
+    def crossings_of_one(self, ratios: list[float]) -> list[tuple[dict[str, float],
+                                                                  list[Crossing]]]:
+        """Crossings of 1 by ``ratios`` (one per point) along the last axis, for each value
+        of the other axes."""
+        grid = np.array(ratios, dtype=float).reshape(self.shape)
         return [({axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)},
-                 target_crossings(self.axes[-1].values, ratios[fixed], 1.0))
+                 target_crossings(self.axes[-1].values, grid[fixed], 1.0))
                 for fixed in itertools.product(*(range(n) for n in self.shape[:-1]))]
 
 
