@@ -97,7 +97,7 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
     if plot is not None:
         checked_output(plot, force, (".png", ".svg"))
-    found = run_compare(files, method)
+    found = run_compare([load_for_method(file, method) for file in files])
     emit(found, compare_out, as_json, plot, force, draw=compare_figure)
 
 

@@ -11,12 +11,9 @@ from collections import defaultdict
 from collections.abc import Sequence
 from dataclasses import dataclass
 
-from hubload.casefile import load_study
 from hubload.casefile.batch import StackError
-from hubload.casefile.geometry import with_method
 from hubload.casefile.study import Study
 from hubload.engine import Result, evaluate, evaluate_many
-from hubload.errors import InputError
 from hubload.report.jsonout import result_document
 from hubload.report.series import Series, all_series
 
@@ -46,13 +43,6 @@ class Comparison:
                 else None for value in values]
 
 
-def study_for_method(file: str, method: str | None) -> Study:
-    try:
-        return with_method(load_study(file), method)
-    except InputError as error:
-        raise error.located(file) from None
-
-
 def evaluate_all(studies: Sequence[Study]) -> list[Result]:
     """Results in input order; same-shaped studies are batched."""
     groups: dict[int, list[int]] = defaultdict(list)
@@ -70,8 +60,7 @@ def evaluate_all(studies: Sequence[Study]) -> list[Result]:
     return results
 
 
-def run_compare(files: Sequence[str], method: str | None = None) -> Comparison:
-    """``method`` overrides each file's ``[project] method`` (as ``check --method`` does)."""
-    studies = [study_for_method(file, method) for file in files]
+def run_compare(studies: Sequence[Study]) -> Comparison:
+    """The studies side by side, in the order given."""
     return Comparison(tuple(Entry(study, result, result_document(result))
                             for study, result in zip(studies, evaluate_all(studies))))
