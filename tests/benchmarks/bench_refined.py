@@ -11,7 +11,6 @@ for variable in ("OPENBLAS_NUM_THREADS", "OMP_NUM_THREADS", "MKL_NUM_THREADS"):
     os.environ[variable] = "1"
 
 import math  # noqa: E402
-import time  # noqa: E402
 
 import numpy as np  # noqa: E402
 
@@ -19,6 +18,7 @@ from hubload.model.refined import RollerSet, contact, layout, pair_bearings, pai
 from hubload.model.refined.solver import (ARMIJO, DAMPING_MAX, DAMPING_MIN,  # noqa: E402
                                           DAMPING_START, MAX_HALVINGS, MAX_ITERATIONS,
                                           REFERENCE_APPROACH_M, RELATIVE_TOLERANCE)
+from timing import timed_best_of  # noqa: E402
 
 CASES = 20
 SETTINGS_UM = np.arange(-60.0, 120.1, 5.0)     # 37 settings
@@ -36,15 +36,6 @@ def spectrum():
     rng = np.random.default_rng(1)
     return (rng.uniform(5e3, 25e3, CASES), rng.uniform(-6e3, 6e3, CASES),
             rng.uniform(-10e3, 10e3, CASES))
-
-
-def best_of(repeats, function):
-    times = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        result = function()
-        times.append(time.perf_counter() - start)
-    return min(times), result
 
 
 # --- reference: the same model and algorithm, one case at a time, looping over the rollers ---
@@ -130,14 +121,14 @@ def main():
     print(f"refined model: {CASES} cases, {rollers} rollers x {contact.LAMINAE} laminae "
           f"({rollers * contact.LAMINAE} laminae), BLAS on one thread")
 
-    spectrum_s, response = best_of(7, lambda: pair_response(
+    spectrum_s, response = timed_best_of(7, lambda: pair_response(
         bearings, wheel, side, tractive, OFFSET_M, RADIUS_M, 20e-6))
     assert response.converged.all()
     print(f"  20-case spectrum (equilibrium, loads, lives): {spectrum_s * 1e3:.1f} ms "
           f"(target < 500 ms), {CASES / spectrum_s:,.0f} cases/s")
 
     settings = SETTINGS_UM[:, None] * 1e-6
-    sweep_s, swept = best_of(3, lambda: pair_response(
+    sweep_s, swept = timed_best_of(3, lambda: pair_response(
         bearings, wheel, side, tractive, OFFSET_M, RADIUS_M, settings))
     assert swept.converged.all()
     points = swept.converged.size
@@ -145,13 +136,14 @@ def main():
           f"(target < 10 s), {points / sweep_s:,.0f} cases/s")
 
     laminae = layout.build_laminae(bearings)
-    loop_s, loop_z = best_of(2, lambda: loop_spectrum(bearings, wheel, side, tractive, 20e-6))
+    loop_s, loop_z = timed_best_of(2, lambda: loop_spectrum(bearings, wheel, side, tractive,
+                                                            20e-6))
     from hubload.model.refined import solver
     external = layout.external_load_vector(wheel, side, tractive, OFFSET_M, RADIUS_M,
                                            laminae.mid_x_m, laminae.half_spread_m)
     batched_z = solver.solve_equilibrium(laminae, external, np.full(CASES, 20e-6)).displacement
     agreement = np.max(np.abs(loop_z - batched_z)) / np.max(np.abs(batched_z))
-    equilibrium_s, _ = best_of(7, lambda: solver.solve_equilibrium(
+    equilibrium_s, _ = timed_best_of(7, lambda: solver.solve_equilibrium(
         laminae, external, np.full(CASES, 20e-6)))
     print(f"  per-roller Python loop, same model and algorithm: {loop_s:.2f} s for the "
           f"20-case equilibrium ({CASES / loop_s:,.1f} cases/s)")
