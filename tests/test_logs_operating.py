@@ -160,7 +160,8 @@ def test_logged_temperature_gives_the_modified_life_of_cases_with_those_temperat
                                                                  rel=1e-9)
     assert found["direct"]["system"]["l10_h"] == pytest.approx(checked["system"]["l10_h"],
                                                                 rel=1e-9)
-    # one load class, so the classed case has the revolution-weighted mean temperature
+    # one load class, so the classed case has the revolution-weighted mean temperature; at
+    # one speed that is the time-weighted mean (hand calculation: 0.4 x 40 + 0.6 x 95 = 73 C)
     assert [c["temperature_C"] for c in found["classed"]["cases"]] == pytest.approx([73.0])
     assert run("check", out)["system"]["l10m_h"] == pytest.approx(
         found["classed"]["system"]["l10m_h"], rel=1e-8)

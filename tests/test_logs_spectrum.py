@@ -114,7 +114,7 @@ def test_damage_by_wheel_load_class_matches_the_check_shares(tmp_path):
 def test_speed_in_kmh_and_mapped_headers_give_the_same_life(tmp_path):
     known = yard_cases()
     columns = spectrum_log(known, seconds=500)
-    rolling_radius_m = 0.395
+    rolling_radius_m = 0.395  # the yard loader's rolling_radius_mm; v = 2 pi r n (no slip)
     renamed = {"t": columns["time_s"], "Fz": columns["wheel_load_kN"],
                "Fy": columns["side_force_kN"], "Fx": columns["tractive_force_kN"],
                "v": columns["speed_rpm"] * 2 * np.pi * rolling_radius_m * 60 / 1000}

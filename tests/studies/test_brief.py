@@ -163,6 +163,7 @@ def test_brief_bad_options_exit_2_with_one_line(args, expected):
 
 
 def test_required_static_rating_follows_the_chosen_s0():
+    # Static safety factor s0 = C0 / P0 (ISO 76:2006), so C0 needed = s0 x the largest P0.
     markdown = CliRunner().invoke(main, ["brief", str(YARD_LOADER), "--s0", "3.5"]).output
     for p0, c0 in zip(table_row(markdown, "max static equivalent load P0"),
                       table_row(markdown, "C0 for s0 >= 3.5")):
