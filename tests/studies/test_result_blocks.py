@@ -59,7 +59,7 @@ def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
 
     x = np.linspace(0.5, 2.0, 31)
     k = 0.5
-    points = tuple(SweepPoint({"k": float(v)}, None, {
+    points = tuple(SweepPoint({"k": float(v)}, {
         "verdict": None, "shaft": {"required_safety": 1.5,
                                    "sections": [{"min_safety": 1 / (k * v)}]}}) for v in x)
     axis = Axis(KeyPath("k", (("k", None),), Field("k", "number", "")), x)

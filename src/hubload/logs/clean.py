@@ -25,7 +25,6 @@ from hubload.errors import InputError
 from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, LIMITS
 from hubload.logs.reader import RawChunk
 
-POLICIES = ("error", "drop", "interpolate")
 GAP_FACTOR = 10.0
 MAX_FILL_SAMPLES = 1000
 HINT = "use --gaps drop or --gaps interpolate to repair"

@@ -43,8 +43,10 @@ class Axis:
 
 @dataclass(frozen=True)
 class SweepPoint:
+    """A point's values of the varied keys and the check's JSON document of it (the engine
+    Result is not kept: a grid of 100,000 points would hold them all)."""
+
     values: dict[str, float]
-    result: Result
     document: dict
 
     @property
@@ -179,7 +181,7 @@ def run_sweep(file: str, specs: Sequence[str],
         for values, result in zip(chunk, evaluate_many(studies)):
             points.append(SweepPoint(values={path.text: int(v) if path.integer else v
                                              for path, v in values.items()},
-                                     result=result, document=point_document(result)))
+                                     document=point_document(result)))
         if on_progress is not None:
             on_progress(len(points), total)
     return Sweep(title=base.title, source=file, axes=axes, points=tuple(points),
