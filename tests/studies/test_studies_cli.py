@@ -96,6 +96,18 @@ def test_sweep_and_compare_plots_are_written_and_not_overwritten(tmp_path, suffi
         assert runner.invoke(main, [*command, "--plot", str(plot), "--force"]).exit_code == 0
 
 
+@pytest.mark.parametrize("command", [["check", FILE], ["compare", FILE, FILE],
+                                     ["sweep", FILE, "--vary", "wheel.offset_mm=60:200:3"]])
+def test_an_unwritable_plot_path_is_one_line_and_exit_2(tmp_path, command):
+    # the folder "exists" but is a file: the write itself fails (not the checks before it)
+    blocker = tmp_path / "not-a-folder"
+    blocker.write_text("")
+    result = CliRunner().invoke(main, [*command, "--plot", str(blocker / "plot.png")])
+    assert result.exit_code == 2, result.output
+    assert result.output.startswith("error: ") and "cannot write the file" in result.output
+    assert len(result.output.strip().splitlines()) == 1
+
+
 def test_plot_needs_png_or_svg_and_one_or_two_keys(tmp_path):
     runner = CliRunner()
     wrong = runner.invoke(main, ["sweep", FILE, "--vary", "wheel.offset_mm=60:200:8",

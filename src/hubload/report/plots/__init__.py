@@ -15,6 +15,7 @@ import matplotlib
 from matplotlib.backends.backend_agg import FigureCanvasAgg
 from matplotlib.figure import Figure
 
+from hubload.errors import InputError
 from hubload.report.cautions import CAUTIONS
 from hubload.report.files import checked_output
 
@@ -51,8 +52,11 @@ def add_caution(figure: Figure) -> None:
 def save(figure: Figure, path: str, force: bool) -> None:
     """Write ``figure`` as PNG or SVG (by extension); never over a file without ``force``."""
     target = checked_output(path, force, PLOT_SUFFIXES)
-    with matplotlib.rc_context(STYLE):
-        figure.savefig(target, format=target.suffix.lower().lstrip("."))
+    try:
+        with matplotlib.rc_context(STYLE):
+            figure.savefig(target, format=target.suffix.lower().lstrip("."))
+    except OSError as error:
+        raise InputError(f"cannot write the file ({error.strerror})", file=str(path)) from None
 
 
 def svg_text(figure: Figure) -> str:
