@@ -42,8 +42,8 @@ def setting_assumption(needs: Requirements) -> str:
     if needs.study.method != "refined":
         return "The pair rule used here assumes a line-to-line setting."
     setting_um = float(np.max(needs.study.pair.axial_setting_m)) / 1e-6
-    kind = "end play" if setting_um > 0 else "preload" if setting_um < 0 else "line-to-line"
-    return (f"The refined lives here assume an axial setting of {setting_um:g} um ({kind}) "
+    return (f"The refined lives here assume an axial setting of {setting_um:g} um "
+            f"({numbers.setting_kind(setting_um)}) "
             "in operation.")
 
 

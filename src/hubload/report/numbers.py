@@ -62,3 +62,8 @@ def safety(value) -> str:
     if math.isnan(value):
         return "-"
     return "infinite" if math.isinf(value) else f"{value:.2f}"
+
+
+def setting_kind(setting_um: float) -> str:
+    """An axial setting's name by its sign (the file format's: > 0 end play, < 0 preload)."""
+    return "end play" if setting_um > 0 else "preload" if setting_um < 0 else "line-to-line"

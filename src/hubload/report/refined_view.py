@@ -7,6 +7,7 @@ from rich.table import Table
 
 from hubload.engine import Result
 from hubload.engine.refined_method import RATING_DEVIATION_WARNING, STATIC_RATING_PRESSURE_PA
+from hubload.report.numbers import setting_kind
 
 KN = 1e3
 
@@ -37,8 +38,8 @@ def distribution_table(result: Result, label: str) -> Table:
 def shaft_table(result: Result) -> Table:
     refined = result.refined
     setting_um = float(np.squeeze(refined.setting_m)) * 1e6
-    kind = "end play" if setting_um > 0 else "preload" if setting_um < 0 else "line-to-line"
-    table = Table(title=f"Shaft in the housing per case (axial setting {setting_um:g} um, {kind}; "
+    table = Table(title=f"Shaft in the housing per case (axial setting {setting_um:g} um, "
+                        f"{setting_kind(setting_um)}; "
                         f"{result.study.pair.rotating_ring} ring rotating)", title_justify="left")
     for heading in ("#", "tilt mrad", "axial um", "radial at wheel um", "equilibrium"):
         table.add_column(heading, justify="right")
