@@ -12,6 +12,7 @@ import io
 import textwrap
 
 import matplotlib
+import numpy as np
 from matplotlib.backends.backend_agg import FigureCanvasAgg
 from matplotlib.figure import Figure
 
@@ -35,6 +36,14 @@ def styled(build):
         with matplotlib.rc_context(STYLE):
             return build(*args, **kwargs)
     return wrapper
+
+
+def drawable(values, log_scale: bool = False) -> np.ndarray:
+    """Values as floats; NaN (a gap in the line) where infinite, undefined or, on a log scale,
+    not positive (a zero life)."""
+    array = np.asarray(values, dtype=float)
+    shown = np.isfinite(array) & (array > 0) if log_scale else np.isfinite(array)
+    return np.where(shown, array, np.nan)
 
 
 def new_figure(width_in: float, height_in: float) -> Figure:

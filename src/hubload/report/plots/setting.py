@@ -2,19 +2,13 @@
 
 from __future__ import annotations
 
-import numpy as np
 from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
-                                  new_figure, styled)
+                                  drawable, new_figure, styled)
 from hubload.studies.setting import BEST_RANGE_TEXT, SettingSweep
 
 UM = 1e-6
-
-
-def finite_or_nan(values) -> np.ndarray:
-    array = np.asarray(values, dtype=float)
-    return np.where(np.isfinite(array) & (array > 0), array, np.nan)
 
 
 @styled
@@ -26,16 +20,16 @@ def setting_figure(sweep: SettingSweep) -> Figure:
     result = sweep.result
     modified = result.modified
     for (label, bearing), colour in zip(result.bearings.items(), BEARING_COLOURS):
-        axes.plot(x, finite_or_nan(bearing.life_h), color=colour, linewidth=1.4,
+        axes.plot(x, drawable(bearing.life_h, log_scale=True), color=colour, linewidth=1.4,
                   linestyle="--" if modified is not None else "-", label=f"{label} L10r")
         if modified is not None:
-            axes.plot(x, finite_or_nan(modified.bearings[label].life_h), color=colour,
-                      linewidth=1.4, label=f"{label} {sweep.life_name}")
-    axes.plot(x, finite_or_nan(result.system_life_h), color=SYSTEM_COLOUR, linewidth=2.4,
-              linestyle="--" if modified is not None else "-", label="pair L10r")
+            axes.plot(x, drawable(modified.bearings[label].life_h, log_scale=True),
+                      color=colour, linewidth=1.4, label=f"{label} {sweep.life_name}")
+    axes.plot(x, drawable(result.system_life_h, log_scale=True), color=SYSTEM_COLOUR,
+              linewidth=2.4, linestyle="--" if modified is not None else "-", label="pair L10r")
     if modified is not None:
-        axes.plot(x, finite_or_nan(modified.system_life_h), color=SYSTEM_COLOUR, linewidth=2.4,
-                  label=f"pair {sweep.life_name}")
+        axes.plot(x, drawable(modified.system_life_h, log_scale=True), color=SYSTEM_COLOUR,
+                  linewidth=2.4, label=f"pair {sweep.life_name}")
     if sweep.best is not None:
         axes.axvspan(sweep.best.low_m / UM, sweep.best.high_m / UM, color="#2ca02c", alpha=0.12,
                      label=BEST_RANGE_TEXT)

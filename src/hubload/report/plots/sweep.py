@@ -9,17 +9,12 @@ from matplotlib.colors import LogNorm
 from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
-                                  new_figure, styled)
+                                  drawable, new_figure, styled)
 from hubload.report.numbers import hours, life_h
 from hubload.report.series import all_series, lookup
 from hubload.studies.sweep import Sweep
 
 SAFETY_GUIDE = 2.0  # s0 >= 2: common practice for roller bearings with shock loads
-
-
-def finite_or_nan(values) -> np.ndarray:
-    array = np.asarray(values, dtype=float)
-    return np.where(np.isfinite(array), array, np.nan)
 
 
 def target_values(sweep: Sweep) -> np.ndarray | None:
@@ -53,7 +48,7 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     x = axis.values
     colours: dict[str, int] = {}
     for item in (s for s in series if s.kind == "life"):
-        values = finite_or_nan(item.values(documents))
+        values = drawable(item.values(documents), log_scale=True)
         if np.all(np.isnan(values)):
             continue
         lives_axes.plot(x, values, label=item.label + " h", **line_style(item, colours))
@@ -98,7 +93,7 @@ def mark_file_value(axes, sweep: Sweep) -> None:
 
 def plot_safeties(axes, x, documents, safety, colours) -> None:
     for item in safety:
-        values = finite_or_nan(item.values(documents))
+        values = drawable(item.values(documents))
         style = {"color": SYSTEM_COLOUR, "linewidth": 2} if item.label.startswith("shaft") \
             else line_style(item, colours)
         axes.plot(x, values, label=item.label, **{**style, "linestyle": "-"})
