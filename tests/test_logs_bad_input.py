@@ -56,6 +56,16 @@ def test_bad_rows_name_file_row_and_column(tmp_path, changes, where, expected):
     assert expected in message
 
 
+def test_bytes_that_are_not_utf8_deep_in_a_log_name_their_row(tmp_path):
+    # past the first read buffer, so the header reads fine and pyarrow meets them first
+    good = "".join(f"{i},10,0,1,40\n" for i in range(20_000))
+    log = tmp_path / "log.csv"
+    log.write_bytes((HEADER + good).encode() + b"20000,1\xe9,0,1,40\n20001,10,0,1,40\n")
+    message = failed(log)
+    assert message.startswith(f"error: {log}: row 20001, column 'wheel_load_kN': ")
+    assert "expected a number" in message
+
+
 @pytest.mark.parametrize("text, expected", [
     ("time_s,speed_rpm\n0,1\n1,1\n", "missing column 'wheel_load_kN'"),
     ("time_s,wheel_load_kN\n0,1\n1,1\n", "no speed column"),

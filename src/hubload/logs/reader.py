@@ -155,19 +155,28 @@ def discrete_codes(column: pa.Array, key: str, header: str, first_row: int,
 
 
 def locate_csv_error(path: Path, columns: dict[str, str], error: Exception) -> InputError:
-    """Re-scan the CSV file to name the row and column that pyarrow could not read."""
+    """Re-scan the CSV file to name the row and column that pyarrow could not read.
+
+    Bytes that are not UTF-8 are read as U+FFFD, so such a cell is named like any other
+    that is not a number."""
     numeric_headers = {h for k, h in columns.items() if k not in DISCRETE_CHANNELS}
-    with path.open(encoding="utf-8-sig", newline="") as stream:
+    with path.open(encoding="utf-8-sig", errors="replace", newline="") as stream:
         rows = csv.reader(stream, delimiter=delimiter(path))
         names = next(rows, [])
         positions = {h: names.index(h) for h in numeric_headers if h in names}
         for number, row in enumerate(rows, start=1):
-            if len(row) != len(names):
-                return InputError(f"expected {len(names)} fields, got {len(row)}",
-                                  file=str(path), key_path=f"row {number}")
-            for header, position in positions.items():
-                if not NUMBER.match(row[position]):
-                    return InputError(f"expected a number, got {row[position]!r}",
-                                      file=str(path),
-                                      key_path=f"row {number}, column {header!r}")
+            found = row_error(row, len(names), positions)
+            if found is not None:
+                message, column = found
+                return InputError(message, file=str(path), key_path=f"row {number}{column}")
     return InputError(f"cannot read the CSV file ({error})", file=str(path))
+
+
+def row_error(row: list[str], fields: int, positions: dict[str, int]) -> tuple[str, str] | None:
+    """What is wrong with one CSV row, and ", column 'HEADER'" where a cell is to blame."""
+    if len(row) != fields:
+        return f"expected {fields} fields, got {len(row)}", ""
+    for header, position in positions.items():
+        if not NUMBER.match(row[position]):
+            return f"expected a number, got {row[position]!r}", f", column {header!r}"
+    return None
