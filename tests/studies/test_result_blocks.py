@@ -72,3 +72,31 @@ def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
 
     (line,) = [text for text in crossing_lines(sweep) if text.startswith("Shaft")]
     assert f"k = {found[0].value:.4g}" in line and "falls below" in line
+
+
+def grid_sweep(lives_h):
+    """A 2 x 2 sweep whose points carry only the governing life (target 100 h)."""
+    import numpy as np
+
+    from hubload.casefile.variation import KeyPath
+    from hubload.schema.spec import Field
+    from hubload.studies.sweep import Axis, Sweep, SweepPoint
+
+    axes = tuple(Axis(KeyPath(key, ((key, None),), Field(key, "number", "")), values)
+                 for key, values in (("a", np.array([1.0, 2.0])), ("b", np.array([10.0, 20.0]))))
+    points = tuple(SweepPoint({}, {"verdict": {"life": "L10", "life_h": life, "target_h": 100.0,
+                                               "passed": life is None or life >= 100}})
+                   for life in lives_h)
+    return Sweep("t", "t.toml", axes, points, 100.0, {"a": None, "b": None})
+
+
+def test_life_map_draws_grids_with_zero_or_only_infinite_lives():
+    # A zero life (no equilibrium under the refined method) has no place on a log colour
+    # scale, and a grid of infinite lives has nothing to shade: both still make a chart
+    # spanning the whole grid.
+    from hubload.report.plots.sweep import sweep_contour_figure
+
+    for lives in ([0.0, 50.0, 200.0, 400.0], [None] * 4, [300.0] * 4):
+        axes = sweep_contour_figure(grid_sweep(lives)).axes[0]
+        assert axes.get_xlim()[0] <= 10.0 and axes.get_xlim()[1] >= 20.0
+        assert axes.get_ylim()[0] <= 1.0 and axes.get_ylim()[1] >= 2.0

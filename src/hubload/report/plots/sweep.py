@@ -115,12 +115,12 @@ def sweep_contour_figure(sweep: Sweep) -> Figure:
     rows, columns = sweep.axes[0], sweep.axes[1]
     lives = np.array([life_h(p.governing_life_h) for p in sweep.points],
                      dtype=float).reshape(sweep.shape)
-    finite = lives[np.isfinite(lives)]
+    drawn = lives[np.isfinite(lives) & (lives > 0)]  # a log scale: zero lives below the lowest
     figure = new_figure(8.0, 6.0)
     axes = figure.subplots()
     name = sweep.governing_life_name
-    if finite.size:
-        low, high = finite.min(), finite.max()
+    if drawn.size:
+        low, high = drawn.min(), drawn.max()
         shown = np.clip(np.where(np.isfinite(lives), lives, high), low, high)
         if high > low:
             levels = nice_levels(low, high)
@@ -132,6 +132,13 @@ def sweep_contour_figure(sweep: Sweep) -> Figure:
                                  colors="white", linewidths=0.5, alpha=0.6)
             axes.clabel(lines, fontsize=6, fmt=lambda v: hours_label(v) + " h")
         draw_target_contour(axes, sweep, shown)
+    if not drawn.size or drawn.min() == drawn.max():  # nothing to shade: say so
+        same = f"{hours(drawn.min())} h wherever finite" if drawn.size else "infinite"
+        axes.text(0.5, 0.5, f"system {name}: {same} over the whole grid",
+                  transform=axes.transAxes, ha="center", va="center")
+    axes.update_datalim([(columns.values.min(), rows.values.min()),
+                         (columns.values.max(), rows.values.max())])  # the grid, drawn or not
+    axes.autoscale_view()
     axes.grid(False)
     mark_file_point(axes, sweep)
     axes.set_xlabel(columns.key)
@@ -171,4 +178,4 @@ def mark_file_point(axes, sweep: Sweep) -> None:
     if row is not None and column is not None:
         axes.plot([column], [row], marker="X", markersize=9, color="white",
                   markeredgecolor="black", label="file")
-        axes.legend(fontsize=7, loc="upper right")
+        axes.legend(fontsize=7, loc="best")
