@@ -47,11 +47,14 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     lives_axes = axes[0]
     x = axis.values
     colours: dict[str, int] = {}
-    for item in (s for s in series if s.kind == "life"):
-        values = drawable(item.values(documents), log_scale=True)
-        if np.all(np.isnan(values)):
-            continue
+    lives = [(item, drawable(item.values(documents), log_scale=True))
+             for item in series if item.kind == "life"]
+    lives = [(item, values) for item, values in lives if not np.all(np.isnan(values))]
+    for item, values in lives:
         lives_axes.plot(x, values, label=item.label + " h", **line_style(item, colours))
+    if not lives:
+        lives_axes.text(0.5, 0.5, "every life infinite (or zero) over the sweep",
+                        transform=lives_axes.transAxes, ha="center", va="center")
     targets = target_values(sweep)
     if targets is not None:
         lives_axes.plot(x, targets, color=TARGET_COLOUR, linestyle=":", linewidth=2,
