@@ -27,6 +27,7 @@ STYLE = {"svg.fonttype": "path", "svg.hashsalt": "hubload", "font.size": 9,
 TARGET_COLOUR = "#c0392b"
 SYSTEM_COLOUR = "#111111"
 BEARING_COLOURS = ("#1f77b4", "#ff7f0e", "#2ca02c", "#9467bd")
+CAUTION_POINTS = 6
 
 
 def styled(build):
@@ -53,9 +54,13 @@ def new_figure(width_in: float, height_in: float) -> Figure:
 
 
 def add_caution(figure: Figure) -> None:
-    wrapped = "\n".join(textwrap.wrap("Caution: " + CAUTIONS, width=150))
-    figure.get_layout_engine().set(rect=(0, 0.06, 1, 0.94))
-    figure.text(0.01, 0.005, wrapped, fontsize=6, color="#555555", va="bottom")
+    """The cautions in the footer, with room kept for them whatever the figure's height."""
+    lines = textwrap.wrap("Caution: " + CAUTIONS, width=150)
+    footer_in = len(lines) * CAUTION_POINTS * 1.4 / 72 + 0.08
+    bottom = footer_in / figure.get_figheight()
+    figure.get_layout_engine().set(rect=(0, bottom, 1, 1 - bottom))
+    figure.text(0.01, 0.005, "\n".join(lines), fontsize=CAUTION_POINTS, color="#555555",
+                va="bottom")
 
 
 def save(figure: Figure, path: str, force: bool) -> None:
