@@ -106,3 +106,21 @@ def test_check_plot_writes_the_damage_share_chart(tmp_path):
     plot = tmp_path / "shares.svg"
     result = CliRunner().invoke(main, ["check", str(YARD_LOADER), "--plot", str(plot)])
     assert result.exit_code == 0 and "<svg" in plot.read_text()[:500]
+
+
+def test_report_of_an_unloaded_wheel_reads_infinite_where_json_writes_null(tmp_path, document,
+                                                                            write_case_file):
+    # No load: L10 = (C/P)^(10/3) and s0 = C0/P0 (ISO 281, ISO 76) are infinite, which the
+    # JSON writes as null; the page must say "infinite", not a dash or "infinite h".
+    for case in document["case"]:
+        case.update(wheel_load_kN=0, side_force_kN=0, tractive_force_kN=0)
+    path = write_case_file(document)
+    report = tmp_path / "unloaded.html"
+    assert CliRunner().invoke(main, ["check", path, "--report", str(report)]).exit_code == 0
+    page = report.read_text(encoding="utf-8")
+    for key in ("bearings.outboard.s0", "bearings.inboard.s0", "system.l10_h", "verdict.life_h"):
+        assert rendered_text(page, key) == "infinite", key
+    assert "infinite h" not in page
+    row = re.search(r"<th>bearing pair L10 life</th>(.*?)</tr>", page).group(1)
+    value, limit, margin, result = re.findall(r"<td>([^<]*)</td>", row)
+    assert (value, limit, margin, result) == ("infinite", "5,000 h", "infinite", "pass")

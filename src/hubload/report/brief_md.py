@@ -2,8 +2,6 @@
 
 from __future__ import annotations
 
-import math
-
 import numpy as np
 
 from hubload.report import numbers
@@ -17,12 +15,6 @@ MM = 1e-3
 
 def kn(newtons: float) -> str:
     return f"{newtons / KN:,.2f} kN"
-
-
-def hours(value) -> str:
-    """A life with its unit ('infinite' for an infinite life or null)."""
-    text = numbers.hours(value)
-    return f"{text} h" if math.isfinite(numbers.life_h(value)) else text
 
 
 def life_label(needs: Requirements) -> str:
@@ -55,7 +47,7 @@ def duty_section(needs: Requirements) -> list[str]:
     study, pair = needs.study, needs.study.pair
     spread_mm = (pair.outboard.position_m - pair.inboard.position_m) / MM
     target = ("not given ([project] target_life_h)" if needs.target_h is None else
-              f"{hours(needs.target_h)} ({life_label(needs)} of the pair, system life)")
+              f"{numbers.hours_with_unit(needs.target_h)} ({life_label(needs)} of the pair, system life)")
     rows = [("target life", target),
             ("arrangement", f"{pair.arrangement}, bearing spread {spread_mm:g} mm (load centres "
                             f"at {pair.outboard.position_m / MM:g} mm and "
@@ -90,7 +82,7 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
         ("max axial load Fa", each(lambda b: f"{kn(b.max_axial.value)} ({b.max_axial.case})")),
         (f"equivalent load of the spectrum Pm at the mean speed {mean:.1f} r/min",
          each(lambda b: kn(b.equivalent_load_n))),
-        (f"{life} now", each(lambda b: hours(b.life_h))),
+        (f"{life} now", each(lambda b: numbers.hours_with_unit(b.life_h))),
         ("dynamic rating C given", each(lambda b: kn(b.dynamic_rating_n))),
         *((("C from the internal geometry", each(lambda b: kn(b.geometry_rating_n))),)
           if all(b.geometry_rating_n is not None for b in needs.bearings) else ()),

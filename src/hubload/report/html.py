@@ -18,7 +18,7 @@ from hubload.engine import Result
 from hubload.report.cautions import CAUTIONS
 from hubload.report.html_style import STYLE
 from hubload.report.jsonout import result_document
-from hubload.report.numbers import hours, share
+from hubload.report.numbers import hours, hours_with_unit, safety, share
 from hubload.report.plots import svg_text
 from hubload.report.plots.spectrum import damage_share_figure, loads_figure
 from hubload.report.series import damage_shares_of
@@ -34,6 +34,9 @@ LABELS = {
     "mean_speed_rpm": "mean speed r/min", "method": "method",
 }
 LIFE_SUFFIXES = ("_h", "_km")
+# safety factors whose null is an infinite one (no load); a per-case "safety" may be null at
+# standstill instead, where it is undefined
+SAFETY_KEYS = ("s0", "min_safety", "yield_safety")
 
 
 def label(key: str) -> str:
@@ -43,7 +46,7 @@ def label(key: str) -> str:
 def cell(key: str, value) -> str:
     """A value as table text; null lives are infinite, other nulls a dash."""
     if value is None:
-        return "infinite" if key.endswith(LIFE_SUFFIXES) else "–"
+        return "infinite" if key.endswith(LIFE_SUFFIXES) or key in SAFETY_KEYS else "–"
     if isinstance(value, bool):
         return "yes" if value else "no"
     if isinstance(value, (int, float)):
@@ -180,10 +183,11 @@ def verdict_section(document: dict) -> str:
     else:
         word, css = ("PASS", "pass") if verdict["passed"] else ("FAIL", "fail")
         relation = ">=" if verdict["passed"] else "<"
+        unit = "" if verdict["life_h"] is None else " h"
         line = (f'<p class="verdict {css}"><strong>{word}</strong>: system '
                 f'{escape(verdict["life"])}'
                 f' = <span data-key="verdict.life_h">{cell("life_h", verdict["life_h"])}</span>'
-                f' h {relation} target {cell("target_h", verdict["target_h"])} h</p>')
+                f'{unit} {relation} target {hours_with_unit(verdict["target_h"])}</p>')
     shares = damage_shares_of(document)
     dominant = shares.dominant(document)
     if dominant is not None:
@@ -200,14 +204,28 @@ def overall_verdict(overall) -> str:
     word, css = ("PASS", "pass") if overall.get("passed") else ("FAIL", "fail")
     rows = []
     for item in overall["items"]:
-        name = str(item.get("item", ""))
-        key = "life_h" if "life" in name else "value"  # a null life is an infinite one
-        rows.append([name, cell(key, item.get("value")), cell(key, item.get("limit")),
-                     cell("load_margin", item.get("load_margin")),
-                     "pass" if item.get("passed") else "FAIL"])
+        rows.append([str(item.get("item", "")), item_text(item, item.get("value")),
+                     item_text(item, item.get("limit")),
+                     margin_text(item), "pass" if item.get("passed") else "FAIL"])
     return (f'<p class="verdict {css}" data-key="overall_verdict.passed"><strong>{word}</strong>'
             f" overall: every item below against its limit</p>"
             + table(["item", "value", "limit", "load margin", ""], rows))
+
+
+def item_text(item: dict, value) -> str:
+    """A value or limit of the overall verdict as its kind reads: a life, a utilisation
+    (null: not assessed, off the supplier's curve) or a safety factor (null: infinite)."""
+    if item.get("unit") == "h":
+        return hours_with_unit(value)
+    if item.get("at_most"):
+        return "not assessed" if value is None else share(value)
+    return safety(value)
+
+
+def margin_text(item: dict) -> str:
+    """The load margin; null is infinite for an item that passed, else not assessed."""
+    margin = item.get("load_margin")
+    return "–" if margin is None and not item.get("passed") else safety(margin)
 
 
 def flags_section(document: dict) -> str:

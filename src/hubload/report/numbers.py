@@ -51,6 +51,12 @@ def hours(value) -> str:
     return f"{value:,.0f}" if value >= 10 else f"{value:.3g}"
 
 
+def hours_with_unit(value) -> str:
+    """:func:`hours` with its unit where it has one: '1,250 h', but 'infinite'."""
+    text = hours(value)
+    return f"{text} h" if math.isfinite(life_h(value)) else text
+
+
 def share(value) -> str:
     """A fraction (damage or time share) as a percentage."""
     return f"{100 * float(value):.1f} %"

@@ -10,7 +10,7 @@ from rich.table import Table
 from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
-from hubload.report.numbers import hours, json_number
+from hubload.report.numbers import hours, hours_with_unit, json_number
 from hubload.studies.setting import BEST_RANGE_SHARE, BEST_RANGE_TEXT, SettingSweep
 
 UM = 1e-6
@@ -102,7 +102,7 @@ def render(sweep: SettingSweep, console: Console) -> None:
         console.print("No setting gives a positive life.")
     else:
         console.print(f"Best setting found: {best.setting_m / UM:g} um (system {sweep.life_name} "
-                      f"{hours(best.life_h)} h); {BEST_RANGE_TEXT} from {best.low_m / UM:g} to "
+                      f"{hours_with_unit(best.life_h)}); {BEST_RANGE_TEXT} from {best.low_m / UM:g} to "
                       f"{best.high_m / UM:g} um (highlighted).")
     for warning in document["warnings"]:
         console.print(f"[yellow]Warning:[/] {escape(warning)}")

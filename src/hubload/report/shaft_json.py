@@ -110,7 +110,8 @@ def verdict_summary(result: Result) -> dict | None:
     if found is None:
         return None
     items = [{"item": item.name, "value": optional_number(item.value), "limit": item.limit,
-              "load_margin": optional_number(item.margin), "passed": item.passed}
+              "load_margin": optional_number(item.margin), "passed": item.passed,
+              "unit": item.unit, "at_most": item.at_most}
              for item in found.items]
     worst = found.items.index(found.worst)
     return {"passed": found.passed, "worst": items[worst], "items": items}

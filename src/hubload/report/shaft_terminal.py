@@ -11,7 +11,7 @@ from rich.text import Text
 
 from hubload.engine import Result
 from hubload.engine.overall import CheckItem, overall_verdict
-from hubload.report.numbers import hours, safety
+from hubload.report.numbers import hours, hours_with_unit, safety
 
 KN = 1e3
 MPA = 1e6
@@ -112,13 +112,13 @@ def item_value(item: CheckItem) -> str:
         return "not assessed"
     if item.at_most:
         return utilisation(item.value)
-    return hours(item.value) + " h" if item.unit == "h" else factor(item.value)
+    return hours_with_unit(item.value) if item.unit == "h" else factor(item.value)
 
 
 def item_limit(item: CheckItem) -> str:
     if item.at_most:
         return f"<= {100 * item.limit:.0f} %"
-    return f">= {hours(item.limit)} h" if item.unit == "h" else f">= {item.limit:g}"
+    return f">= {hours_with_unit(item.limit)}" if item.unit == "h" else f">= {item.limit:g}"
 
 
 def render_overall(result: Result, console: Console) -> None:

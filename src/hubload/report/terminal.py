@@ -17,7 +17,7 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.modified_terminal import (modified_bearing_table, modified_summary_cells,
                                               modified_summary_headings, notes, oil_cells,
                                               oil_headings)
-from hubload.report.numbers import hours, safety, share
+from hubload.report.numbers import hours, hours_with_unit, safety, share
 from hubload.report.operating import operating_table
 from hubload.report.refined_view import life_basis, refined_tables
 
@@ -82,10 +82,10 @@ def verdict_line(result: Result) -> str | Text:
         return Text("No target life given ([project] target_life_h): no verdict.")
     basis = f" ({found.basis})" if found.basis else ""
     if found.passed:
-        return (f"[green]PASS[/]: system {found.life_name} = {hours(found.life_h)} h "
-                f">= target {hours(found.target_h)} h{basis}")
-    return (f"[red]FAIL[/]: system {found.life_name} = {hours(found.life_h)} h "
-            f"< target {hours(found.target_h)} h{basis}")
+        return (f"[green]PASS[/]: system {found.life_name} = {hours_with_unit(found.life_h)} "
+                f">= target {hours_with_unit(found.target_h)}{basis}")
+    return (f"[red]FAIL[/]: system {found.life_name} = {hours_with_unit(found.life_h)} "
+            f"< target {hours_with_unit(found.target_h)}{basis}")
 
 
 def dominant_line(result: Result) -> Text:
