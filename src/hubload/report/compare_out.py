@@ -29,12 +29,11 @@ def compare_document(comparison: Comparison) -> dict:
     series = comparison.life_series()
     ratios = {item.key: comparison.ratios(item) for item in series}
     files = []
-    for index, entry in enumerate(comparison.entries):
+    for index, document in enumerate(comparison.documents):
         files.append({
-            **{key: value for key, value in entry.document.items()
-               if key not in PER_CASE_KEYS},
-            "damage_shares": damage_shares(entry.document),
-            "damage_life": damage_shares_of(entry.document).life,
+            **{key: value for key, value in document.items() if key not in PER_CASE_KEYS},
+            "damage_shares": damage_shares(document),
+            "damage_life": damage_shares_of(document).life,
             "ratio_to_first": {label: None if values[index] is None else json_number(values[index])
                                for label, values in ratios.items()},
         })
@@ -50,32 +49,32 @@ def ratio_text(value: float | None) -> str:
 
 
 def file_lines(comparison: Comparison) -> list[str]:
-    return [f"#{i}: [bold]{escape(e.document['title'])}[/] ({escape(e.document['source'])})"
-            for i, e in enumerate(comparison.entries, start=1)]
+    return [f"#{i}: [bold]{escape(d['title'])}[/] ({escape(d['source'])})"
+            for i, d in enumerate(comparison.documents, start=1)]
 
 
 def lives_table(comparison: Comparison) -> Table:
     """Quantities in rows, files in columns (ratios against file #1 in brackets)."""
-    entries = comparison.entries
+    documents = comparison.documents
     table = Table(title="Side by side (ratio against #1)", title_justify="left")
     table.add_column("")
-    for index in range(1, len(entries) + 1):
+    for index in range(1, len(documents) + 1):
         table.add_column(f"#{index}", justify="right")
     for item in comparison.life_series():
-        values = item.values(e.document for e in entries)
+        values = item.values(documents)
         ratios = comparison.ratios(item)
         table.add_row(f"{item.label} h", *(
             hours(value) + ("" if index == 0 else f" ({ratio_text(ratios[index])})")
             for index, value in enumerate(values)))
-    table.add_row("worst s0", *(worst_safety(e.document) for e in entries))
-    shafts = [shaft_min_safety(e.document) for e in entries]
+    table.add_row("worst s0", *(worst_safety(d) for d in documents))
+    shafts = [shaft_min_safety(d) for d in documents]
     if any(value is not MISSING for value in shafts):
         table.add_row("shaft min safety", *("-" if v is MISSING else safety(v) for v in shafts))
-    table.add_row("verdict", *(verdict_text(e.document) for e in entries))
-    if any(isinstance(e.document.get("overall_verdict"), dict) for e in entries):
-        table.add_row("overall verdict", *(overall_text(e.document) for e in entries))
-    table.add_row("dominant case", *(f"{dominant_text(e.document)}, "
-                                     f"{damage_shares_of(e.document).life}" for e in entries))
+    table.add_row("verdict", *(verdict_text(d) for d in documents))
+    if any(isinstance(d.get("overall_verdict"), dict) for d in documents):
+        table.add_row("overall verdict", *(overall_text(d) for d in documents))
+    table.add_row("dominant case", *(f"{dominant_text(d)}, {damage_shares_of(d).life}"
+                                     for d in documents))
     return table
 
 
@@ -130,9 +129,9 @@ def render(comparison: Comparison, console: Console) -> None:
     for line in file_lines(comparison):
         console.print(line)
     console.print(lives_table(comparison))
-    for index, entry in enumerate(comparison.entries, start=1):
-        console.print(shares_table(index, entry.document))
-    for entry in comparison.entries:
-        for warning in entry.document.get("warnings", []):
-            console.print(f"[yellow]Warning[/] ({escape(entry.document['title'])}): {escape(warning)}")
+    for index, document in enumerate(comparison.documents, start=1):
+        console.print(shares_table(index, document))
+    for document in comparison.documents:
+        for warning in document.get("warnings", []):
+            console.print(f"[yellow]Warning[/] ({escape(document['title'])}): {escape(warning)}")
     console.print(f"[dim]Caution: {CAUTIONS}[/]")

@@ -19,25 +19,20 @@ from hubload.report.series import Series, all_series
 
 
 @dataclass(frozen=True)
-class Entry:
-    study: Study
-    result: Result
-    document: dict
-
-
-@dataclass(frozen=True)
 class Comparison:
-    entries: tuple[Entry, ...]
+    """The check's JSON document of each file, in the order given."""
+
+    documents: tuple[dict, ...]
 
     def life_series(self) -> list[Series]:
         """Lives carried by every file (L10m only when all files give lubrication)."""
-        present = [{s.label: s for s in all_series(e.document)} for e in self.entries]
+        present = [{s.label: s for s in all_series(document)} for document in self.documents]
         return [series for label, series in present[0].items()
                 if series.kind == "life" and all(label in p for p in present)]
 
     def ratios(self, series: Series) -> list[float | None]:
         """Each file's value over the first file's (None when either is infinite or missing)."""
-        values = series.values(e.document for e in self.entries)
+        values = series.values(self.documents)
         first = values[0]
         return [value / first if math.isfinite(value) and math.isfinite(first) and first > 0
                 else None for value in values]
@@ -62,5 +57,4 @@ def evaluate_all(studies: Sequence[Study]) -> list[Result]:
 
 def run_compare(studies: Sequence[Study]) -> Comparison:
     """The studies side by side, in the order given."""
-    return Comparison(tuple(Entry(study, result, result_document(result))
-                            for study, result in zip(studies, evaluate_all(studies))))
+    return Comparison(tuple(result_document(result) for result in evaluate_all(studies)))

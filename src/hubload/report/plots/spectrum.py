@@ -82,7 +82,7 @@ def loads_figure(document: dict) -> Figure:
 @styled
 def compare_figure(comparison: Comparison) -> Figure:
     """Lives of each file (grouped bars, log scale, target) over damage-share bars per file."""
-    documents = [entry.document for entry in comparison.entries]
+    documents = comparison.documents
     case_rows = [len(d["cases"]) for d in documents]
     figure = new_figure(8.5, 3.2 + sum(0.32 * n + 0.5 for n in case_rows))
     grid = figure.add_gridspec(1 + len(documents), 1,
@@ -101,7 +101,7 @@ def compare_figure(comparison: Comparison) -> Figure:
 
 def draw_lives(axes, comparison: Comparison) -> None:
     series = comparison.life_series()
-    documents = [entry.document for entry in comparison.entries]
+    documents = comparison.documents
     width = 0.8 / max(len(series), 1)
     positions = np.arange(len(documents))
     bearing_index: dict[str, int] = {}
