@@ -81,7 +81,7 @@ def test_refined_brief_ratings_give_back_exactly_the_target_life(tmp_path):
                 continue
             assert solve.on_geometry
             life = life_at(study, {label: solve.factor for label in labels},
-                           needs.life_key, whose)
+                           needs.life, whose)
             assert life == pytest.approx(study.target_life_h, rel=1e-9), (bearing.label, whose)
 
 

@@ -18,7 +18,7 @@ def kn(newtons: float) -> str:
 
 
 def life_label(needs: Requirements) -> str:
-    return needs.life_key.removesuffix("_h").upper().replace("M", "m")
+    return needs.life.name
 
 
 def rating(solve: Solve, bearing: BearingNeeds) -> str:

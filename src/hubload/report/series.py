@@ -11,6 +11,9 @@ import math
 from collections.abc import Callable, Iterable
 from dataclasses import dataclass
 
+from hubload.model.lubrication import life_symbol
+from hubload.report.numbers import life_h
+
 MISSING = object()
 
 
@@ -83,10 +86,36 @@ def all_series(document: dict) -> list[Series]:
 
 
 @dataclass(frozen=True)
+class GoverningLife:
+    """The life a verdict judges, read from a check document: its symbol, the JSON key that
+    holds it and the factor on that key's value."""
+
+    name: str      # L10, L10m, or e.g. L1 / L1m at 99 % reliability
+    key: str       # "l10_h" or "l10m_h"
+    factor: float  # a1 on a basic L10 at another reliability than 90 %, else 1
+
+    def of(self, node: dict) -> float:
+        """This life [h] of a document's ``system`` or ``bearings.<label>`` node (inf for null)."""
+        return life_h(node.get(self.key)) * self.factor
+
+
+def governing_life(document: dict) -> GoverningLife:
+    """The life the verdict uses (ISO 281:2007, 9.1-9.2), also where the file gives no target:
+    the modified life Lnm = a1 aISO L10 with lubrication (JSON l10m_h, a1 included), else the
+    basic life a1 L10."""
+    reliability = document.get("reliability_percent", 90.0)
+    if "l10m_h" in document.get("system", {}):
+        return GoverningLife(life_symbol(reliability), "l10m_h", 1.0)
+    a1 = document.get("a1")
+    return GoverningLife(life_symbol(reliability, modified=False), "l10_h",
+                         1.0 if a1 is None else float(a1))
+
+
+@dataclass(frozen=True)
 class DamageShares:
     """Each case's share of the pair's damage for the life the verdict uses."""
 
-    life: str  # "L10" or "L10m"
+    life: str  # the governing life's symbol, e.g. "L10" or "L10m"
     system_key: str
     bearing_key: str
 
@@ -106,9 +135,11 @@ class DamageShares:
 
 
 def damage_shares_of(document: dict) -> DamageShares:
-    """Shares of the modified life when the verdict (or, without a target, the file) uses it."""
-    verdict = document.get("verdict")
-    modified = verdict["life"] == "L10m" if verdict else "l10m_h" in document.get("system", {})
-    if modified and document["cases"] and "system_damage_share_modified" in document["cases"][0]:
-        return DamageShares("L10m", "system_damage_share_modified", "damage_share_modified")
-    return DamageShares("L10", "system_damage_share", "damage_share")
+    """Shares of the life the verdict uses (the modified life when the file gives lubrication;
+    the factor a1 does not change shares)."""
+    life = governing_life(document)
+    cases = document["cases"]
+    if life.key == "l10m_h" and cases and "system_damage_share_modified" in cases[0]:
+        return DamageShares(life.name, "system_damage_share_modified", "damage_share_modified")
+    return DamageShares(life.name if life.key == "l10_h" else "L10", "system_damage_share",
+                        "damage_share")

@@ -14,7 +14,7 @@ from rich.markup import escape
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours, json_number, life_h, safety
-from hubload.report.series import all_series
+from hubload.report.series import all_series, governing_life
 from hubload.studies.sweep import Sweep
 
 MAP_MAX_COLUMNS = 7
@@ -55,10 +55,10 @@ def quantity(value: float, kind: str) -> str:
 
 def table_series(sweep: Sweep) -> list:
     """System lives of every kind, bearing lives of the kind the verdict uses, safeties."""
-    series = all_series(sweep.points[0].document)
-    modified = sweep.governing_life_name == "L10m" or any(
-        s.system and s.modified for s in series) and sweep.points[0].document.get("verdict") is None
-    return [s for s in series if s.kind != "life" or s.system or s.modified == modified]
+    document = sweep.points[0].document
+    modified = governing_life(document).key == "l10m_h"
+    return [s for s in all_series(document)
+            if s.kind != "life" or s.system or s.modified == modified]
 
 
 def pass_text(passed: bool) -> str:

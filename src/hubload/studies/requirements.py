@@ -23,7 +23,7 @@ from hubload.model import requirements
 from hubload.model.kinematics import kmh_to_rpm
 from hubload.model.refined.life import RATING_LIFE_EXPONENT
 from hubload.report.jsonout import result_document
-from hubload.report.numbers import life_h
+from hubload.report.series import GoverningLife, governing_life
 
 CLOSED_FORM_RTOL = 1e-9
 BRACKET_STEPS = 40
@@ -43,13 +43,6 @@ class Solve:
     on_geometry: bool = False
 
 
-def governing_key(document: dict) -> str:
-    """JSON key of the life the verdict uses: l10_h, or l10m_h when lubrication is given."""
-    verdict = document.get("verdict")
-    name = verdict["life"] if verdict else ("L10m" if "l10m_h" in document["system"] else "L10")
-    return f"{name.lower()}_h"
-
-
 def scaled(study: Study, factors: dict[str, float]) -> Study:
     """The study with each named bearing's dynamic rating C multiplied by its factor.
 
@@ -63,11 +56,10 @@ def scaled(study: Study, factors: dict[str, float]) -> Study:
     return dataclasses.replace(study, pair=dataclasses.replace(study.pair, **bearings))
 
 
-def life_at(study: Study, factors: dict[str, float], key: str, whose: str) -> float:
-    """Life [h] (``whose`` = "system" or a bearing label) with the ratings scaled."""
+def life_at(study: Study, factors: dict[str, float], life: GoverningLife, whose: str) -> float:
+    """``life`` [h] of ``whose`` ("system" or a bearing label) with the ratings scaled."""
     document = result_document(evaluate(scaled(study, factors)))
-    node = document["system"] if whose == "system" else document["bearings"][whose]
-    return life_h(node.get(key))
+    return life.of(document["system"] if whose == "system" else document["bearings"][whose])
 
 
 def life_exponent(study: Study) -> float:
@@ -75,7 +67,7 @@ def life_exponent(study: Study) -> float:
     return RATING_LIFE_EXPONENT if study.method == "refined" else requirements.LIFE_EXPONENT_ROLLER
 
 
-def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
+def solve_factor(study: Study, labels: tuple[str, ...], whose: str, life: GoverningLife,
                  target_h: float) -> Solve:
     """Factor k on the C of ``labels`` so that the life of ``whose`` equals ``target_h``.
 
@@ -83,21 +75,21 @@ def solve_factor(study: Study, labels: tuple[str, ...], whose: str, key: str,
     """
     on_geometry = study.method == "refined"
 
-    def life(k: float) -> float:
-        return life_at(study, {label: k for label in labels}, key, whose)
+    def scaled_life(k: float) -> float:
+        return life_at(study, {label: k for label in labels}, life, whose)
 
-    now = life(1.0)
+    now = scaled_life(1.0)
     if math.isinf(now) or now <= 0:
         return Solve(None, "none", "no fatigue damage: every rating meets the target")
     guess = (target_h / now) ** (1.0 / life_exponent(study))
-    if math.isclose(life(guess), target_h, rel_tol=CLOSED_FORM_RTOL):
+    if math.isclose(scaled_life(guess), target_h, rel_tol=CLOSED_FORM_RTOL):
         return Solve(guess, "closed form", on_geometry=on_geometry)
 
     def excess(k: float) -> float:
-        value = life(k)
+        value = scaled_life(k)
         return math.inf if math.isinf(value) else math.log(value / target_h)
 
-    if math.isclose(life(2.0), now, rel_tol=1e-12):
+    if math.isclose(scaled_life(2.0), now, rel_tol=1e-12):
         return Solve(None, "none", "the life does not depend on the rating C")
 
     low, high = guess, guess
@@ -136,7 +128,7 @@ class BearingNeeds:
     max_radial: Extreme
     max_axial: Extreme
     equivalent_load_n: float
-    life_h: float | None
+    life_h: float                  # the governing life now (inf: no fatigue damage)
     dynamic_rating_n: float
     geometry_rating_n: float | None
     alone: Solve
@@ -153,7 +145,7 @@ class Requirements:
     study: Study
     result: Result
     document: dict
-    life_key: str
+    life: GoverningLife
     target_h: float | None
     required_s0: float
     bearings: tuple[BearingNeeds, ...]
@@ -171,13 +163,13 @@ def geometry_rating_n(document: dict, label: str) -> float | None:
     return None if value is None else float(value) * 1e3
 
 
-def bearing_needs(study: Study, result: Result, document: dict, label: str, key: str,
+def bearing_needs(study: Study, result: Result, document: dict, label: str, life: GoverningLife,
                   target_h: float | None, required_s0: float) -> BearingNeeds:
     bearing, found, names = study.pair.bearings()[label], result.bearings[label], \
         study.cases.names
     others = tuple(other for other in result.bearings if other != label)
     unsolved = Solve(None, "none", "no target life given")
-    solve = (lambda labels, whose: solve_factor(study, labels, whose, key, target_h)) \
+    solve = (lambda labels, whose: solve_factor(study, labels, whose, life, target_h)) \
         if target_h is not None else (lambda labels, whose: unsolved)
     max_static = extreme(found.static_equivalent_n, names)
     return BearingNeeds(
@@ -185,7 +177,7 @@ def bearing_needs(study: Study, result: Result, document: dict, label: str, key:
         max_radial=extreme(found.radial_n, names), max_axial=extreme(found.axial_n, names),
         equivalent_load_n=float(requirements.spectrum_equivalent_load_n(
             study.cases.time_fraction, study.cases.speed_rpm, found.equivalent_n)),
-        life_h=document["bearings"][label].get(key),
+        life_h=life.of(document["bearings"][label]),
         dynamic_rating_n=float(bearing.dynamic_rating_n),
         geometry_rating_n=geometry_rating_n(document, label),
         alone=solve((label,), label), both=solve((label, *others), "system"),
@@ -199,7 +191,7 @@ def bearing_needs(study: Study, result: Result, document: dict, label: str, key:
 def requirements_of(study: Study, required_s0: float) -> Requirements:
     result = evaluate(study)
     document = result_document(result)
-    key = governing_key(document)
+    life = governing_life(document)
     target = study.target_life_h
     cases = study.cases
     moments = requirements.wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
@@ -208,9 +200,9 @@ def requirements_of(study: Study, required_s0: float) -> Requirements:
     turning = cases.speed_rpm > 0
     names_turning = [name for name, turns in zip(cases.names, turning) if turns]
     return Requirements(
-        study=study, result=result, document=document, life_key=key, target_h=target,
+        study=study, result=result, document=document, life=life, target_h=target,
         required_s0=required_s0,
-        bearings=tuple(bearing_needs(study, result, document, label, key, target, required_s0)
+        bearings=tuple(bearing_needs(study, result, document, label, life, target, required_s0)
                        for label in result.bearings),
         moment=extreme(moments, cases.names),
         speed_min=least(cases.speed_rpm[turning], names_turning) if any(turning) else None,

@@ -20,7 +20,7 @@ from hubload.engine import Result, evaluate_many
 from hubload.errors import InputError
 from hubload.report.jsonout import result_document
 from hubload.report.numbers import life_h
-from hubload.report.series import MISSING, lookup, shaft_min_safety
+from hubload.report.series import MISSING, governing_life, lookup, shaft_min_safety
 from hubload.studies.crossing import Crossing, target_crossings
 
 MAX_POINTS = 100_000
@@ -50,12 +50,12 @@ class SweepPoint:
     document: dict
 
     @property
-    def governing_life_h(self) -> float | None:
-        """The life the verdict uses (L10, or L10m when given), else the system L10; None = inf."""
+    def governing_life_h(self) -> float:
+        """The system's life of the kind the verdict uses [h] (also without a target)."""
         verdict = self.document.get("verdict")
         if verdict is not None:
-            return verdict["life_h"]
-        return self.document["system"]["l10_h"]
+            return life_h(verdict["life_h"])
+        return governing_life(self.document).of(self.document["system"])
 
 
 @dataclass(frozen=True)
@@ -73,8 +73,7 @@ class Sweep:
 
     @property
     def governing_life_name(self) -> str:
-        verdict = self.points[0].document.get("verdict")
-        return verdict["life"] if verdict else "L10"
+        return governing_life(self.points[0].document).name
 
     def crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
         """Target crossings along the last axis, for each value of the others.
