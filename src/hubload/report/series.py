@@ -75,11 +75,13 @@ def all_series(document: dict) -> list[Series]:
     """The quantities this document carries, lives first (system, then each bearing)."""
     bearings = lookup(document, "bearings")
     labels = list(bearings) if isinstance(bearings, dict) else []
+    modified = life_symbol(document.get("reliability_percent", 90.0))  # l10m_h holds L1m at 99 %
     candidates = [keyed("system L10", "life", "system.l10_h", system=True),
-                  keyed("system L10m", "life", "system.l10m_h", system=True, modified=True)]
+                  keyed(f"system {modified}", "life", "system.l10m_h", system=True, modified=True)]
     for label in labels:
         candidates += [keyed(f"{label} L10", "life", f"bearings.{label}.l10_h"),
-                       keyed(f"{label} L10m", "life", f"bearings.{label}.l10m_h", modified=True)]
+                       keyed(f"{label} {modified}", "life", f"bearings.{label}.l10m_h",
+                             modified=True)]
     candidates += [keyed(f"{label} s0", "safety", f"bearings.{label}.s0") for label in labels]
     candidates.append(Series("shaft min safety", "safety", shaft_min_safety))
     return [series for series in candidates if series.read(document) is not MISSING]
