@@ -94,3 +94,14 @@ def test_classes_never_straddle_zero():
     table = classed(values, np.ones((1, 4)), (2, 2))
     low, high = table.class_bounds()
     assert np.all((low[0] >= 0) | (high[0] <= 0))
+
+
+def test_a_tiny_value_below_zero_beside_a_class_bound_keeps_the_class_count():
+    # Property above, example it found: the span 1 + 2e-311 rounds to 1, which a two-class
+    # grid of width 1 seems to cover, yet -2e-311, 0 and 1 fall in three zero-anchored classes.
+    values = np.array([[0.0, 1.0, -2.225073858507e-311], [0.0, 0.0, 0.0]])
+    table = classed(values, np.ones((1, 3)), (2, 2))
+    assert len(set(table.keys[0].tolist())) <= 2
+    low, high = table.class_bounds()
+    for value in values[0]:
+        assert np.any((low[0] <= value) & (value < high[0]))

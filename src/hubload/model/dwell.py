@@ -84,6 +84,18 @@ def width_exponents(span, classes, min_exponents) -> np.ndarray:
     return np.maximum(exponents, min_exponents)
 
 
+def covering_exponents(low, high, classes, min_exponents) -> np.ndarray:
+    """Width exponents whose zero-anchored grid holds ``low``..``high`` in <= ``classes`` classes.
+
+    width_exponents sees the span high - low, which rounds: a tiny value just below zero
+    beside one on a class bound can need one class more than the rounded span shows, and
+    one coarser step then suffices.
+    """
+    exponents = width_exponents(high - low, classes, min_exponents)
+    ends = class_keys(np.nan_to_num(np.stack([low, high], axis=-1)), exponents)
+    return np.where(ends[:, 1] - ends[:, 0] >= classes, exponents + 1, exponents)
+
+
 def class_keys(values, exponents) -> np.ndarray:
     """Class index floor(value / 2**e) per channel (values (c, n)) [1]."""
     values = np.asarray(values, dtype=float)
@@ -141,7 +153,7 @@ def add_samples(table: DwellTable, values, weights, classes, min_exponents) -> D
         return table
     low = np.fmin(table.low, values.min(axis=1))
     high = np.fmax(table.high, values.max(axis=1))
-    exponents = np.maximum(table.exponents, width_exponents(high - low, classes, min_exponents))
+    exponents = np.maximum(table.exponents, covering_exponents(low, high, classes, min_exponents))
     base = coarsened(table, exponents)
     keys = np.concatenate([base.keys, class_keys(values, exponents)], axis=1)
     all_weights = np.concatenate([base.sums, np.asarray(weights, dtype=float)], axis=1)
@@ -154,7 +166,7 @@ def merged(tables: list[DwellTable], classes, min_exponents) -> DwellTable:
     low = np.fmin.reduce([t.low for t in tables])
     high = np.fmax.reduce([t.high for t in tables])
     exponents = np.maximum.reduce(
-        [t.exponents for t in tables] + [width_exponents(high - low, classes, min_exponents)])
+        [t.exponents for t in tables] + [covering_exponents(low, high, classes, min_exponents)])
     parts = [coarsened(t, exponents) for t in tables]
     keys, sums = aggregate(np.concatenate([p.keys for p in parts], axis=1),
                            np.concatenate([p.sums for p in parts], axis=1))
