@@ -28,6 +28,10 @@ def reports_input_errors(command):
     return wrapper
 
 
+json_option = click.option("--json", "as_json", is_flag=True,
+                           help="Print machine-readable JSON only.")
+
+
 def method_option():
     """--method of every command that evaluates a file."""
     return click.option(
@@ -45,7 +49,7 @@ def main():
 
 @main.command()
 @click.argument("file", type=click.Path(dir_okay=False))
-@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@json_option
 @click.option("--report", type=click.Path(dir_okay=False),
               help="Also write a self-contained HTML report (inputs, results, charts, cautions).")
 @click.option("--plot", type=click.Path(dir_okay=False),
@@ -78,7 +82,7 @@ def template():
 @click.option("--vary", "specs", multiple=True, metavar="KEY=START:STOP:COUNT",
               help="Key path of FILE and its evenly spaced values, e.g. "
                    "wheel.offset_mm=60:160:11 or case[3].side_force_kN=0:8:9 (repeatable: grid).")
-@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@json_option
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart (.png or .svg): lines for one key, a life map for two.")
 @method_option()
@@ -92,7 +96,7 @@ def sweep(file, specs, as_json, plot, force, method):
 
 @main.command()
 @click.argument("files", nargs=-1, required=True, type=click.Path(dir_okay=False))
-@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@json_option
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart of lives and damage shares (.png or .svg).")
 @method_option()
@@ -128,7 +132,7 @@ def brief(file, out, force, required_s0, method):
               help="Last axial setting [um].")
 @click.option("--step", "step_um", type=float, default=5.0, show_default=True,
               help="Step between settings [um].")
-@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@json_option
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write the lives against the setting as a chart (.png or .svg).")
 @click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
@@ -146,7 +150,7 @@ def setting(file, start_um, stop_um, step_um, as_json, plot, force):
 @click.option("--out", type=click.Path(), help="Write the classed spectrum as a load-case file "
               "(for a folder of logs: a folder with one file per log and combined.toml).")
 @click.option("--force", is_flag=True, help="Overwrite existing output files.")
-@click.option("--json", "as_json", is_flag=True, help="Print machine-readable JSON only.")
+@json_option
 @click.option("--column", "columns", multiple=True, metavar="KEY=HEADER",
               help="Read channel KEY from column HEADER (repeatable).")
 @click.option("--classes", multiple=True, metavar="N|CHANNEL=N",

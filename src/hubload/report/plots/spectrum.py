@@ -42,16 +42,21 @@ def draw_shares(axes, document: dict, with_bearings: bool, largest: float | None
     axes.grid(axis="y", visible=False)
 
 
+def finished(figure: Figure, axes, title: str) -> Figure:
+    """Title, a legend beside the bars and the cautions: the end of every per-case chart."""
+    axes.set_title(title, loc="left")
+    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
+    add_caution(figure)
+    return figure
+
+
 @styled
 def damage_share_figure(document: dict) -> Figure:
     """Each case's share of the damage, for the pair and each bearing (check results)."""
     figure = new_figure(8.0, 1.6 + 0.45 * len(document["cases"]))
     axes = figure.subplots()
     draw_shares(axes, document, with_bearings=True)
-    axes.set_title(f"{document['title']}\ndamage shares by case", loc="left")
-    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
-    add_caution(figure)
-    return figure
+    return finished(figure, axes, f"{document['title']}\ndamage shares by case")
 
 
 @styled
@@ -73,10 +78,7 @@ def loads_figure(document: dict) -> Figure:
     axes.invert_yaxis()
     axes.set_xlabel("bearing load [kN]")
     axes.grid(axis="y", visible=False)
-    axes.set_title(f"{document['title']}\nbearing loads by case", loc="left")
-    axes.legend(fontsize=7, loc="upper left", bbox_to_anchor=(1.0, 1.0))
-    add_caution(figure)
-    return figure
+    return finished(figure, axes, f"{document['title']}\nbearing loads by case")
 
 
 @styled
