@@ -8,9 +8,8 @@ from dataclasses import replace
 from hubload.casefile.study import Pair, RollerGeometry, Study
 from hubload.errors import InputError
 from hubload.model.refined.ratings import GAMMA_MAX, GAMMA_MIN
+from hubload.units import MM, UM
 
-MM = 1e-3
-UM = 1e-6
 GEOMETRY_KEYS = "rollers, roller_diameter_mm, roller_length_mm, pitch_diameter_mm"
 
 

@@ -19,9 +19,8 @@ from hubload.errors import InputError
 from hubload.model.iso281 import factors_from_contact_angle
 from hubload.schema import FORMAT
 from hubload.schema.fileformat import TIME_SUM_TOLERANCE_PERCENT
+from hubload.units import KN, MM
 
-MM = 1e-3
-KN = 1e3
 BYTE_ORDER_MARK = "\ufeff"
 
 

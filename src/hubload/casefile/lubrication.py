@@ -8,9 +8,9 @@ import numpy as np
 
 from hubload.casefile.study import Lubrication, Pair
 from hubload.errors import InputError
-from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.units import CELSIUS_ZERO_K
+from hubload.units import CST
 
-CST = 1e-6
 ISO4406_PATTERN = re.compile(r"^\s*(\d{1,2}|-)\s*/\s*(\d{1,2})\s*/\s*(\d{1,2})\s*$")
 ISO4406_HIGHEST_SCALE_NUMBER = 28   # last row of the ISO 4406:1999 scale table (from memory)
 

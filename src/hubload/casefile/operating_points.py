@@ -21,12 +21,8 @@ import numpy as np
 from hubload.errors import InputError
 from hubload.model import operating
 from hubload.model.kinematics import kmh_to_rpm, rpm_to_kmh
+from hubload.units import BAR, CM3, KN, LPM, MM
 
-MM = 1e-3
-KN = 1e3
-BAR = 1e5
-CM3 = 1e-6
-LPM = 1e-3 / 60.0
 ArrayLike = float | np.ndarray
 
 

@@ -7,10 +7,8 @@ import numpy as np
 from hubload.casefile.study import Pair, PermissibleCurve, Shaft, ShaftSection
 from hubload.errors import InputError
 from hubload.model.shaft.strength import NOTCH_SENSITIVITY_RANGE_PA, SIZE_FACTOR_RANGE_MM
+from hubload.units import KN, MM, MPA
 
-MM = 1e-3
-KN = 1e3
-MPA = 1e6
 ROOM_TEMPERATURE_C = 20.0
 
 

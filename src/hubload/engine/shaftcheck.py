@@ -15,8 +15,8 @@ from hubload.casefile.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study
+from hubload.units import MM
 
-MM = 1e-3
 
 
 @dataclass(frozen=True)

@@ -24,9 +24,8 @@ from hubload.logs.reader import headers, read_chunks
 from hubload.logs.samples import (FLAGS, flag_time_s, operating_points, sample_cases,
                                   sample_temperature_c, with_cases)
 from hubload.model import dwell, iso281
+from hubload.units import KN, SECONDS_PER_HOUR
 
-KN = 1e3
-SECONDS_PER_HOUR = 3600.0
 CLASS_CHANNELS = ("wheel_load_kN", "side_force_kN", "tractive_force_kN", "speed_rpm")
 # The side force acts a loaded radius below the axis: its couple dominates the
 # bearing reactions, so it gets the finest classes. Speed only converts hours to

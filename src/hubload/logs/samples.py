@@ -21,7 +21,7 @@ from hubload.logs.clean import Samples
 from hubload.logs.columns import ColumnPlan
 from hubload.model import operating
 from hubload.model.kinematics import kmh_to_rpm
-from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.units import CELSIUS_ZERO_K
 
 HALF = 1.0  # code of "half" in the mode channel (reader.DISCRETE_LEVELS order)
 FLAGS = ("slips", "tyre_slides", "pressure_above_rating", "speed_above_rating")

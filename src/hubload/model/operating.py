@@ -39,8 +39,9 @@ from __future__ import annotations
 
 import numpy as np
 
+from hubload.units import SECONDS_PER_MINUTE
+
 TWO_PI = 2.0 * np.pi
-SECONDS_PER_MINUTE = 60.0
 
 
 def effective_displacement_m3(displacement_m3, half_mode):

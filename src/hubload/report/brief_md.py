@@ -8,9 +8,8 @@ from hubload.report import numbers
 from hubload.report.cautions import CAUTIONS
 from hubload.report.series import MISSING, lookup, shaft_min_safety
 from hubload.studies.requirements import BearingNeeds, Requirements, Solve
+from hubload.units import KN, MM
 
-KN = 1e3
-MM = 1e-3
 
 
 def kn(newtons: float) -> str:

@@ -16,8 +16,8 @@ from hubload.report.modified_json import add_modified_life
 from hubload.report.numbers import json_number, json_numbers, json_rows
 from hubload.report.operating import case_entries as case_entries_of
 from hubload.report.refined_json import add_refined
+from hubload.units import KN
 
-KN = 1e3
 
 
 def case_entries(result: Result) -> list[dict]:

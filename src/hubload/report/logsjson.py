@@ -13,8 +13,8 @@ from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import json_number
+from hubload.units import KN
 
-KN = 1e3
 
 
 def cleaning_entry(result: SpectrumResult, policy: str) -> dict:

@@ -13,9 +13,9 @@ from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
 from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours, safety, share
+from hubload.units import KN
 
 TOP_CASES = 10
-KN = 1e3
 
 
 def lives_table(result: SpectrumResult) -> Table:

@@ -9,12 +9,10 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.engine import Result
-from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.units import CELSIUS_ZERO_K
 from hubload.report.numbers import json_number, json_rows
+from hubload.units import CST, KN, MM
 
-KN = 1e3
-CST = 1e-6
-MM = 1e-3
 
 
 def add_modified_life(document: dict, result: Result) -> dict:

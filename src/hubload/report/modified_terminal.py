@@ -8,10 +8,10 @@ import numpy as np
 from rich.table import Table
 
 from hubload.engine import Result
-from hubload.model.lubrication import CELSIUS_ZERO_K
+from hubload.units import CELSIUS_ZERO_K
 from hubload.report.numbers import hours, share
+from hubload.units import CST
 
-CST = 1e-6
 OUTSIDE_SCOPE_MARK = "!"
 
 

@@ -10,10 +10,8 @@ from rich.table import Table
 
 from hubload.casefile.study import Cases, Study
 from hubload.report.numbers import json_numbers, json_rows
+from hubload.units import BAR, KN, LPM
 
-KN = 1e3
-BAR = 1e5
-LPM = 1e-3 / 60.0
 FLAG_LABELS = {"slip": "slip", "tyre_slides": "slide", "pressure_above_rating": "p>max",
                "speed_above_rating": "n>max"}
 

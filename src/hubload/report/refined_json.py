@@ -11,11 +11,8 @@ import numpy as np
 
 from hubload.engine import Result
 from hubload.report.numbers import json_number, json_rows
+from hubload.units import KN, MPA, MRAD, UM
 
-KN = 1e3
-MPA = 1e6
-UM = 1e-6
-MRAD = 1e-3
 
 
 def add_refined(document: dict, result: Result) -> dict:

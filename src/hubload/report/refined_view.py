@@ -8,8 +8,8 @@ from rich.table import Table
 from hubload.engine import Result
 from hubload.engine.refined_method import RATING_DEVIATION_WARNING, STATIC_RATING_PRESSURE_PA
 from hubload.report.numbers import setting_kind
+from hubload.units import KN
 
-KN = 1e3
 
 
 def life_basis(result: Result) -> str:

@@ -12,9 +12,8 @@ from rich.markup import escape
 from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours, hours_with_unit, json_number
 from hubload.studies.setting import BEST_RANGE_SHARE, BEST_RANGE_TEXT, SettingSweep
+from hubload.units import MPA, UM
 
-UM = 1e-6
-MPA = 1e6
 
 
 def microns(metres) -> float | None:

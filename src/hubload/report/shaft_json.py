@@ -11,10 +11,8 @@ import numpy as np
 from hubload.engine import Result
 from hubload.engine.overall import overall_verdict
 from hubload.report.numbers import json_number, json_rows
+from hubload.units import KN, MM, MPA
 
-KN = 1e3
-MPA = 1e6
-MM = 1e-3
 
 
 def case_name(result: Result, value, index) -> str | None:

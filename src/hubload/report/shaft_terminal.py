@@ -12,10 +12,8 @@ from rich.text import Text
 from hubload.engine import Result
 from hubload.engine.overall import CheckItem, overall_verdict
 from hubload.report.numbers import hours, hours_with_unit, safety
+from hubload.units import KN, MM, MPA
 
-KN = 1e3
-MPA = 1e6
-MM = 1e-3
 
 
 def factor(value, required: float | None = None) -> str:

@@ -5,8 +5,8 @@ from __future__ import annotations
 import tomli_w
 
 from hubload.casefile.study import Cases
+from hubload.units import KN
 
-KN = 1e3
 SIGNIFICANT = 10
 
 

@@ -20,8 +20,8 @@ from hubload.report.modified_terminal import (modified_bearing_table, modified_s
 from hubload.report.numbers import hours, hours_with_unit, safety, share
 from hubload.report.operating import operating_table
 from hubload.report.refined_view import life_basis, refined_tables
+from hubload.units import KN
 
-KN = 1e3
 
 
 def cases_table(result: Result) -> Table:

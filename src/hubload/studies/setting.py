@@ -15,8 +15,8 @@ from hubload.casefile.geometry import with_method
 from hubload.casefile.study import Study
 from hubload.engine import Result, evaluate
 from hubload.errors import InputError
+from hubload.units import UM
 
-UM = 1e-6
 MAX_POINTS = 2001
 SETTING_LIMITS_UM = (-500.0, 2000.0)   # the file format's limits of axial_setting_um
 BEST_RANGE_SHARE = 0.9                 # settings within 10 % of the best life found

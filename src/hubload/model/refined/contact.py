@@ -26,7 +26,8 @@ from __future__ import annotations
 
 import numpy as np
 
-MM = 1e-3
+from hubload.units import MM
+
 LOAD_EXPONENT = 10.0 / 9.0
 PALMGREN_APPROACH_CONSTANT = 3.84e-5   # [mm N^-0.9 mm^0.8], one contact, [1]
 STEEL_MODULUS_PA = 207e9               # bearing steel, Harris & Kotzalas (from memory)

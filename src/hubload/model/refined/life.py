@@ -38,8 +38,8 @@ from hubload.model.iso281 import LIFE_EXPONENT_ROLLER, WEIBULL_SLOPE_ROLLER
 from hubload.model.refined.layout import RollerSet
 from hubload.model.refined.ratings import (
     RATING_FACTOR_TAPERED, REDUCTION_FACTOR_ROLLER, geometry_ratio)
+from hubload.units import MM
 
-MM = 1e-3
 RACEWAY_CAPACITY_CONSTANT = 552.0
 ROTATING_MEAN_EXPONENT = 4.0
 STANDING_MEAN_EXPONENT = 4.5

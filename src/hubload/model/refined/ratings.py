@@ -23,7 +23,8 @@ from __future__ import annotations
 
 import numpy as np
 
-MM = 1e-3
+from hubload.units import MM
+
 RATING_FACTOR_TAPERED = 1.1          # bm, ISO 281:2007 table 1
 REDUCTION_FACTOR_ROLLER = 0.83       # lambda nu of [3]
 STATIC_RATING_CONSTANT = 44.0        # ISO 76:2006 6.1.1 [N/mm^2]

@@ -7,8 +7,8 @@ from matplotlib.figure import Figure
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   drawable, new_figure, styled)
 from hubload.studies.setting import BEST_RANGE_TEXT, SettingSweep
+from hubload.units import UM
 
-UM = 1e-6
 
 
 @styled
