@@ -6,7 +6,7 @@ import time
 
 import numpy as np
 
-from hubload.casefile.operating_points import Motor, Vehicle, derive_operating_points
+from hubload.domain.operating import Motor, Vehicle, derive_operating_points
 
 MOTOR = Motor(displacement_m3=820e-6, half_mode=True, efficiency_volumetric=0.96,
               efficiency_mechanical=0.93, max_pressure_pa=350e5, max_speed_rpm=190)

@@ -10,7 +10,7 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from hubload.casefile import load_study
-from hubload.casefile.batch import StackError, pick, stack_studies
+from hubload.domain.batch import StackError, pick, stack_studies
 from hubload.engine import evaluate, evaluate_many
 from hubload.studies.compare import evaluate_all
 from studies_helpers import YARD_LOADER
@@ -93,6 +93,6 @@ def test_fields_added_later_stack_generically_and_pick_back():
 
 
 def stack_values_of(values):
-    from hubload.casefile.batch import stack_values
+    from hubload.domain.batch import stack_values
 
     return stack_values(values, "shaft")

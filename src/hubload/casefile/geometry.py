@@ -5,7 +5,7 @@ from __future__ import annotations
 import math
 from dataclasses import replace
 
-from hubload.casefile.study import Pair, RollerGeometry, Study
+from hubload.domain.study import Pair, RollerGeometry, Study
 from hubload.errors import InputError
 from hubload.model.refined.ratings import GAMMA_MAX, GAMMA_MIN
 from hubload.units import MM, UM

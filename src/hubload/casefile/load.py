@@ -1,4 +1,4 @@
-"""Read a load-case file into a :class:`~hubload.casefile.study.Study` (SI units)."""
+"""Read a load-case file into a :class:`~hubload.domain.study.Study` (SI units)."""
 
 from __future__ import annotations
 
@@ -10,11 +10,11 @@ import numpy as np
 
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
-from hubload.casefile.operating_points import (Motor, Vehicle, derive_cases, read_motor,
-                                               read_vehicle)
+from hubload.casefile.operating_points import derive_cases, read_motor, read_vehicle
 from hubload.casefile.shaft import read_shaft
-from hubload.casefile.study import Bearing, Cases, Pair, Study, Wheel
 from hubload.casefile.validate import validate_document
+from hubload.domain.operating import Motor, Vehicle
+from hubload.domain.study import Bearing, Cases, Pair, Study, Wheel
 from hubload.errors import InputError
 from hubload.model.iso281 import factors_from_contact_angle
 from hubload.schema import FORMAT

@@ -6,7 +6,7 @@ import re
 
 import numpy as np
 
-from hubload.casefile.study import Lubrication, Pair
+from hubload.domain.study import Lubrication, Pair
 from hubload.errors import InputError
 from hubload.units import CELSIUS_ZERO_K
 from hubload.units import CST

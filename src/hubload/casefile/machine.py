@@ -10,7 +10,7 @@ from __future__ import annotations
 from pathlib import Path
 
 from hubload.casefile.load import read_document, study_from_document
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.errors import InputError
 
 PLACEHOLDER_CASE = {"name": "placeholder", "time_percent": 100.0, "wheel_load_kN": 0.0,

@@ -4,7 +4,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from hubload.casefile.study import Pair, PermissibleCurve, Shaft, ShaftSection
+from hubload.domain.study import Pair, PermissibleCurve, Shaft, ShaftSection
 from hubload.errors import InputError
 from hubload.model.shaft.strength import NOTCH_SENSITIVITY_RANGE_PA, SIZE_FACTOR_RANGE_MM
 from hubload.units import KN, MM, MPA

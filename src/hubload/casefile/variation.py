@@ -16,7 +16,7 @@ from dataclasses import dataclass
 from hubload.casefile.load import study_from_validated
 from hubload.casefile.validate import (nearest_key_hint, validate_document, validate_number,
                                       validate_value)
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
 from hubload.schema.spec import Field, Table

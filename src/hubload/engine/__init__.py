@@ -16,8 +16,8 @@ from dataclasses import dataclass, field, replace
 import numpy as np
 
 from hubload.engine import modified_life, refined_method, shaftcheck
-from hubload.casefile.batch import picker, stack_studies
-from hubload.casefile.study import Bearing, Study
+from hubload.domain.batch import picker, stack_studies
+from hubload.domain.study import Bearing, Study
 from hubload.model import iso281, statics, tapered_pair
 from hubload.model.kinematics import distance_km
 
@@ -144,7 +144,7 @@ def evaluate(study: Study, with_warnings: bool = True) -> Result:
 
 
 def evaluate_many(studies: list[Study]) -> list[Result]:
-    """Evaluate variants of a study in one batched call (casefile.batch stacks them).
+    """Evaluate variants of a study in one batched call (domain.batch stacks them).
 
     The variants must share their structure (case count, choices); each returned
     Result is the point's own, with its study and warnings, as from evaluate().

@@ -10,7 +10,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.study import Bearing, Lubrication, Study
+from hubload.domain.study import Bearing, Lubrication, Study
 from hubload.model import iso281
 from hubload.model import lubrication as lub
 

@@ -14,7 +14,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.study import Bearing, Study
+from hubload.domain.study import Bearing, Study
 from hubload.engine.modified_life import per_study
 from hubload.model import iso281
 from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings

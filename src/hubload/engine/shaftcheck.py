@@ -11,7 +11,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.study import PermissibleCurve, Shaft, ShaftSection, Study
+from hubload.domain.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study

@@ -13,7 +13,7 @@ from concurrent.futures import ProcessPoolExecutor, as_completed
 from dataclasses import dataclass
 from pathlib import Path
 
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.logs.pipeline import LogOptions, LogSummary, process_log
 from hubload.logs.reader import LOG_SUFFIXES

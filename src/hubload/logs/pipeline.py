@@ -14,7 +14,7 @@ from pathlib import Path
 
 import numpy as np
 
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.engine import evaluate
 from hubload.errors import InputError
 from hubload.logs.clean import Cleaner, CleaningReport

@@ -11,7 +11,7 @@ from rich.console import Console
 from rich.progress import Progress
 
 from hubload.casefile.machine import load_machine
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.logs.columns import parse_column_options
 from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local

@@ -13,15 +13,14 @@ import dataclasses
 
 import numpy as np
 
-from hubload.casefile.operating_points import (BAR, KN, LPM, OperatingPoints,
-                                               derive_operating_points)
-from hubload.casefile.study import Cases, Study
+from hubload.domain.operating import OperatingPoints, derive_operating_points
+from hubload.domain.study import Cases, Study
 from hubload.errors import InputError
 from hubload.logs.clean import Samples
 from hubload.logs.columns import ColumnPlan
 from hubload.model import operating
 from hubload.model.kinematics import kmh_to_rpm
-from hubload.units import CELSIUS_ZERO_K
+from hubload.units import BAR, CELSIUS_ZERO_K, KN, LPM
 
 HALF = 1.0  # code of "half" in the mode channel (reader.DISCRETE_LEVELS order)
 FLAGS = ("slips", "tyre_slides", "pressure_above_rating", "speed_above_rating")

@@ -10,7 +10,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.model import iso281
 
 WORST = {"min_safety": np.fmin, "yield_safety": np.fmin, "max_utilisation": np.fmax}

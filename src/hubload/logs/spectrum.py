@@ -25,7 +25,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.study import Cases, Study
+from hubload.domain.study import Cases, Study
 from hubload.engine import STATIC_SAFETY_WARNING, Result, evaluate
 from hubload.logs import shaft
 from hubload.logs.pipeline import CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT, LogSummary

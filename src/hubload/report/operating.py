@@ -8,7 +8,7 @@ import numpy as np
 from rich import box
 from rich.table import Table
 
-from hubload.casefile.study import Cases, Study
+from hubload.domain.study import Cases, Study
 from hubload.report.numbers import json_numbers, json_rows
 from hubload.units import BAR, KN, LPM
 

@@ -4,7 +4,7 @@ from __future__ import annotations
 
 import tomli_w
 
-from hubload.casefile.study import Cases
+from hubload.domain.study import Cases
 from hubload.units import KN
 
 SIGNIFICANT = 10

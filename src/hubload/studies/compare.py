@@ -11,8 +11,8 @@ from collections import defaultdict
 from collections.abc import Sequence
 from dataclasses import dataclass
 
-from hubload.casefile.batch import StackError
-from hubload.casefile.study import Study
+from hubload.domain.batch import StackError
+from hubload.domain.study import Study
 from hubload.engine import Result, evaluate, evaluate_many
 from hubload.report.jsonout import result_document
 from hubload.report.series import Series, all_series

@@ -17,7 +17,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.engine import Result, evaluate
 from hubload.model import requirements
 from hubload.model.kinematics import kmh_to_rpm

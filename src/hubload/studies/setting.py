@@ -12,7 +12,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from hubload.casefile.geometry import with_method
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 from hubload.engine import Result, evaluate
 from hubload.errors import InputError
 from hubload.units import UM

@@ -25,7 +25,7 @@ from typing import Any
 
 import numpy as np
 
-from hubload.casefile.study import Study
+from hubload.domain.study import Study
 
 LABEL_FIELDS = frozenset({"source", "title", "names", "label", "name"})
 

@@ -10,7 +10,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.casefile.operating_points import Motor, OperatingPoints, Vehicle
+from hubload.domain.operating import Motor, OperatingPoints, Vehicle
 from hubload.schema.fileformat import DEFAULT_ADHESION_MU
 
 ArrayLike = float | np.ndarray
