@@ -14,7 +14,7 @@ from hypothesis import strategies as st
 
 from hubload.casefile import study_from_document
 from hubload.cli import main
-from hubload.engine import evaluate, verdict
+from hubload.engine import evaluate
 
 LUBRICATION = {"viscosity_40C_cSt": 46.0, "viscosity_100C_cSt": 7.8, "temperature_C": 40.0,
                "method": "oil-filtered", "iso4406": "18/16/13"}
@@ -176,7 +176,7 @@ def test_batch_axes_broadcast_like_single_studies(lubricated):
             study.lubrication, viscosity_40c_m2_s=value, viscosity_100c_m2_s=value / 6))
         assert result.modified.system_life_h[row] == pytest.approx(
             float(evaluate(single).modified.system_life_h))
-    assert verdict(evaluate(study)).life_name == "L10m"
+    assert evaluate(study).verdict.life_name == "L10m"
 
 
 # --- bad input: exit 2, one line naming file and key path --------------------------------

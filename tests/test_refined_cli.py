@@ -45,7 +45,7 @@ def symmetric_radial(document, wheel_load_kn=30.0):
 def test_bundled_scenarios_run_the_refined_method_with_the_json_contract(scenario):
     text = run("check", scenario, "--method", "refined")
     assert text.exit_code == 0, text.output
-    assert "load distribution per case" in text.output and "Caution" in text.output
+    assert "Load distribution per case" in text.output and "Caution" in text.output
     document = json.loads(run("check", scenario, "--method", "refined", "--json").output)
     assert document["method"] == "refined"
     for case in document["cases"]:
@@ -198,8 +198,8 @@ def test_setting_plot_is_written_and_never_overwritten_without_force(
 
 @pytest.mark.parametrize("args, words", [
     (["--step", "0"], "--step"), (["--from", "50", "--to", "10"], "--to"),
-    (["--from", "-900"], "within"), (["--from", "nan"], "--from expects a finite number"),
-    (["--to", "inf"], "--to expects a finite number"),
+    (["--from", "-900"], "within"), (["--from", "nan"], "--from: expected a finite setting"),
+    (["--to", "inf"], "--to: expected a finite setting"),
 ])
 def test_setting_bad_options_exit_2(document, write_case_file, args, words):
     found = run("setting", write_case_file(symmetric_radial(document)), *args)
@@ -220,20 +220,22 @@ def test_setting_table_prints_a_zero_life_as_zero_not_infinite(document, write_c
     from rich.console import Console
 
     from hubload.casefile import load_study
-    from hubload.report import setting_out
+    from hubload.report.terminal.setting import render_setting, setting_table
     from hubload.studies.setting import run_setting_sweep
 
     study = load_study(write_case_file(symmetric_radial(document)))
     sweep = run_setting_sweep(study, np.array([-20.0, 0.0, 20.0]))
-    result = sweep.result
-    zeroed = dataclasses.replace(result, system_life_h=np.where([0, 1, 0], 0.0,
-                                                                 result.system_life_h))
+    refined = sweep.result.refined
+    unsolved = dataclasses.replace(refined, converged=refined.converged & np.array(
+        [[True], [False], [True]]))
+    zeroed = dataclasses.replace(sweep, result=dataclasses.replace(sweep.result, refined=unsolved))
+    pair = next(c for c in setting_table(zeroed).columns if c.key == "system_h")
+    assert [pair.cell(i) for i in range(3)][1] == "0"
     console = Console(record=True, width=200)
-    setting_out.render(dataclasses.replace(sweep, result=zeroed), console)
-    rows = [[cell.strip() for cell in line.split("│")[1:-1]]
-            for line in console.export_text().splitlines() if line.startswith("│")]
-    row = next(row for row in rows if row[0] == "0")
-    assert row[-1] == "0" and "infinite" not in row
+    render_setting(zeroed, console)
+    row = next(line.split() for line in console.export_text().splitlines()
+               if line.split()[:1] == ["0"])
+    assert "0" in row[1:] and "infinite" not in row
 
 
 def test_case_without_equilibrium_counts_as_zero_life_and_dominates(document, write_case_file,

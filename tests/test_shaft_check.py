@@ -18,8 +18,8 @@ from hypothesis import strategies as st
 from hubload.casefile import study_from_document
 from hubload.cli import main
 from hubload.engine import evaluate
+from hubload.report.messages import warning_texts
 from hubload.model.shaft.strength import fatigue_strength_fraction
-from hubload.engine.overall import overall_verdict
 
 SHAFT = {
     "ultimate_strength_MPa": 800, "yield_strength_MPa": 600, "surface": "machined",
@@ -146,7 +146,7 @@ def test_worst_item_is_the_shaft_when_only_the_shaft_fails(shaft_document):
     # The bearings pass with a large life margin, the 20 mm shaft cannot.
     shaft_document["project"]["target_life_h"] = 1
     shaft_document["shaft"]["section"][0]["diameter_mm"] = 20
-    found = overall_verdict(evaluate(study_from_document(shaft_document)))
+    found = evaluate(study_from_document(shaft_document)).overall
     assert found.items[0].passed                     # the bearings
     assert not found.passed
     assert found.worst.name.startswith("shaft 'flange fillet'")
@@ -244,7 +244,7 @@ def test_section_inboard_of_both_bearings_is_said_to_carry_no_bending(shaft_docu
     result = evaluate(single_case_study(shaft_document))
     assert float(result.shaft.sections[0].loads.bending_nm[0]) == pytest.approx(0.0, abs=1e-6)
     assert any("'flange fillet' lies inboard of both bearings" in warning
-               for warning in result.warnings)
+               for warning in warning_texts(result.findings, result.study.cases.names))
 
 
 def test_section_between_bearings_outboard_of_the_mounting_face_is_not_flagged(shaft_document):
@@ -256,4 +256,5 @@ def test_section_between_bearings_outboard_of_the_mounting_face_is_not_flagged(s
     shaft_document["shaft"]["section"][0]["position_mm"] = 50
     result = evaluate(single_case_study(shaft_document))
     assert float(result.shaft.sections[0].loads.bending_nm[0]) > 0
-    assert not any("inboard of both bearings" in warning for warning in result.warnings)
+    assert not any("inboard of both bearings" in warning
+                   for warning in warning_texts(result.findings, result.study.cases.names))

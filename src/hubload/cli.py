@@ -14,6 +14,9 @@ import click
 from hubload.errors import InputError
 
 INPUT_ERROR_STATUS = 2
+# The API's argument names as the command line spells them (errors name the option).
+OPTION_NAMES = {"required_s0": "--s0", "start_um": "--from", "stop_um": "--to",
+                "step_um": "--step"}
 
 
 def reports_input_errors(command):
@@ -21,8 +24,10 @@ def reports_input_errors(command):
     @functools.wraps(command)
     def wrapper(*args, **kwargs):
         try:
-            return command(*args, **kwargs)
+            command(*args, **kwargs)
         except InputError as error:
+            if error.key_path in OPTION_NAMES:
+                error = InputError(error.message, error.file, OPTION_NAMES[error.key_path])
             click.echo(f"error: {error}", err=True)
             sys.exit(INPUT_ERROR_STATUS)
     return wrapper
@@ -56,11 +61,14 @@ def main():
               help="Also write the damage-share chart (.png or .svg).")
 @click.option("--force", is_flag=True, help="Overwrite existing --report/--plot files.")
 @method_option()
+@click.option("--all", "show_all", is_flag=True,
+              help="List every case and every warning (default: the 25 most damaging cases).")
 @reports_input_errors
-def check(file, as_json, report, plot, force, method):
+def check(file, as_json, report, plot, force, method, show_all):
     """Loads, lives, damage shares and static safety for FILE."""
     from hubload import commands
-    commands.check(file, as_json=as_json, report=report, plot=plot, force=force, method=method)
+    commands.check(file, as_json=as_json, report=report, plot=plot, force=force, method=method,
+                   show_all=show_all)
 
 
 @main.command()

@@ -1,167 +1,155 @@
-"""Plain functions behind each CLI command: read inputs, run the engine, report."""
+"""One plain function per command: parsed options in, the API's result out, handed to report.
+
+Each function checks its output files first (a refusal should not wait for the work),
+runs the Python API (``hubload.api``), writes the files asked for and prints; it returns
+the result, so a command works from a notebook too.
+"""
 
 from __future__ import annotations
 
 import json
-import math
 
 import click
 from rich.console import Console
 
-from hubload.casefile import load_study
-from hubload.engine import STATIC_SAFETY_WARNING, evaluate
+from hubload import api
 from hubload.errors import InputError
-from hubload.report import jsonout, terminal
-from hubload.schema import FORMAT
-from hubload.schema.export import json_schema, template_text
+
+PLOT_SUFFIXES = (".png", ".svg")
 
 
-def load_for_method(file: str, method: str | None):
-    """The study of ``file``, computed by ``method`` when given (else the file's own)."""
-    from hubload.casefile.geometry import with_method
+def checked(path: str | None, force: bool, suffixes: tuple[str, ...] = ()) -> None:
+    if path is not None:
+        from hubload.report.files import checked_output
 
-    study = load_study(file)
-    try:
-        return with_method(study, method)
-    except InputError as error:
-        raise error.located(file) from None
+        checked_output(path, force, suffixes)
+
+
+def written(kind: str, path: str, as_json: bool = False) -> None:
+    """Name every file written (on stderr with --json: stdout stays one JSON document)."""
+    Console(stderr=as_json).print(f"{kind} written to {path}", highlight=False, markup=False)
 
 
 def check(file: str, as_json: bool = False, report: str | None = None,
-          plot: str | None = None, force: bool = False, method: str | None = None) -> None:
-    from hubload.report import files
-
-    for path, suffixes in ((report, (".html", ".htm")), (plot, (".png", ".svg"))):
-        if path is not None:
-            files.checked_output(path, force, suffixes)
-    result = evaluate(load_for_method(file, method))
-    write_check_files(file, result, report, plot, force)
-    if as_json:
-        click.echo(jsonout.to_json(result))
-    else:
-        terminal.render(result, Console())
-
-
-def write_check_files(file: str, result, report: str | None, plot: str | None,
-                      force: bool) -> None:
+          plot: str | None = None, force: bool = False, method: str | None = None,
+          show_all: bool = False) -> api.CheckResult:
+    checked(report, force, (".html", ".htm"))
+    checked(plot, force, PLOT_SUFFIXES)
+    found = api.check(file, method=method)
     if report is not None:
         from hubload.casefile.load import read_document
         from hubload.report.files import write_text
-        from hubload.report.html import report_html
+        from hubload.report.html.check import report_html
 
-        write_text(report, report_html(result, read_document(file)), force)
+        write_text(report, report_html(found.value, read_document(file)), force)
+        written("Report", report, as_json)
     if plot is not None:
-        from hubload.report.jsonout import result_document
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import damage_share_figure
 
-        save(damage_share_figure(result_document(result)), plot, force)
+        save(damage_share_figure(found.value), plot, force)
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.check import render_check
+
+        render_check(found.value, Console(), show_all=show_all)
+    return found
 
 
 def schema() -> None:
+    from hubload.schema import FORMAT
+    from hubload.schema.export import json_schema
+
     click.echo(json.dumps(json_schema(FORMAT), indent=2))
 
 
 def template() -> None:
+    from hubload.schema import FORMAT
+    from hubload.schema.export import template_text
+
     click.echo(template_text(FORMAT), nl=False)
 
 
 def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-          force: bool = False, method: str | None = None) -> None:
-    from hubload.report import sweep_out
-    from hubload.report.files import checked_output
+          force: bool = False, method: str | None = None) -> api.SweepResult:
     from hubload.report.progress import LateProgress
-    from hubload.studies.sweep import run_sweep
 
-    if plot is not None:
-        checked_output(plot, force, (".png", ".svg"))
-        if len(specs) not in (1, 2):
-            raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}",
-                             file=plot)
+    checked(plot, force, PLOT_SUFFIXES)
+    if plot is not None and len(specs) not in (1, 2):
+        raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
     with LateProgress("sweep") as progress:
-        found = run_sweep(file, specs, on_progress=progress, method=method)
-    emit(found, sweep_out, as_json, plot, force, draw=sweep_figure)
+        found = api.sweep(file, specs, method=method, on_progress=progress)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
 
+        draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
+        save(draw(found.value), plot, force)
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.sweep import render
 
-def sweep_figure(found):
-    from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
-
-    return (sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure)(found)
+        render(found.value, Console())
+    return found
 
 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-            force: bool = False, method: str | None = None) -> None:
-    from hubload.report import compare_out
-    from hubload.report.files import checked_output
-    from hubload.studies.compare import run_compare
-
+            force: bool = False, method: str | None = None) -> api.ComparisonResult:
+    checked(plot, force, PLOT_SUFFIXES)
+    found = api.compare(list(files), method=method)
     if plot is not None:
-        checked_output(plot, force, (".png", ".svg"))
-    found = run_compare([load_for_method(file, method) for file in files])
-    emit(found, compare_out, as_json, plot, force, draw=compare_figure)
+        from hubload.report.plots import save
+        from hubload.report.plots.spectrum import compare_figure
 
+        save(compare_figure(found.value), plot, force)
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.compare import render
 
-def compare_figure(found):
-    from hubload.report.plots.spectrum import compare_figure as figure
-
-    return figure(found)
+        render(found.value, Console())
+    return found
 
 
 def brief(file: str, out: str | None = None, force: bool = False,
-          required_s0: float | None = None, method: str | None = None) -> None:
-    from hubload.casefile.load import read_document
-    from hubload.report.brief_md import brief_markdown
-    from hubload.report.files import checked_output, write_text
-    from hubload.studies.requirements import requirements_of
-
-    required_s0 = STATIC_SAFETY_WARNING if required_s0 is None else required_s0
-    if not (required_s0 > 0 and math.isfinite(required_s0)):
-        raise InputError(f"--s0 expects a positive number, got {required_s0:g}")
-    if out is not None:
-        checked_output(out, force)
-    text = brief_markdown(requirements_of(load_for_method(file, method), required_s0),
-                          read_document(file))
+          required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
+    checked(out, force)
+    found = api.brief(file, required_s0=required_s0, method=method)
+    text = found.to_markdown()
     if out is None:
         click.echo(text, nl=False)
     else:
+        from hubload.report.files import write_text
+
         write_text(out, text, force)
-        click.echo(f"Brief written to {out}")
+        written("Brief", out)
+    return found
+
+
+def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
+            plot: str | None = None, force: bool = False) -> api.SettingResult:
+    checked(plot, force, PLOT_SUFFIXES)
+    found = api.setting(file, start_um, stop_um, step_um)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.setting import setting_figure
+
+        save(setting_figure(found.value), plot, force)
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.setting import render_setting
+
+        render_setting(found.value, Console())
+    return found
 
 
 def spectrum(**options) -> None:
     from hubload.logs.run import Request, spectrum as run_spectrum
     run_spectrum(Request(**options))
-
-
-def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
-            plot: str | None = None, force: bool = False) -> None:
-    from hubload.report import setting_out
-    from hubload.report.files import checked_output
-    from hubload.studies.setting import run_setting_sweep, setting_values_um
-
-    if plot is not None:
-        checked_output(plot, force, (".png", ".svg"))
-    settings_um = setting_values_um(start_um, stop_um, step_um)
-    found = run_setting_sweep(load_for_method(file, "refined"), settings_um)
-    emit(found, setting_out, as_json, plot, force, draw=setting_figure)
-
-
-def setting_figure(found):
-    from hubload.report.plots.setting import setting_figure as figure
-
-    return figure(found)
-
-
-def emit(found, output, as_json: bool, plot: str | None, force: bool, draw) -> None:
-    """Print a study's results as JSON or tables (``output``: its report module); write its
-    chart first when asked, ``draw`` building the figure (plotting is imported only then)."""
-    if plot is not None:
-        from hubload.report.plots import save
-
-        save(draw(found), plot, force)
-    if as_json:
-        click.echo(output.to_json(found))
-    else:
-        output.render(found, Console())
-        if plot is not None:
-            Console().print(f"Plot written to {plot}")

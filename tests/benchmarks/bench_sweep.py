@@ -17,7 +17,8 @@ import tomli_w
 from hubload.casefile import load_study
 from hubload.casefile.variation import parse_key_path, variant_studies
 from hubload.engine import evaluate, evaluate_many
-from hubload.report.jsonout import result_document
+from hubload.report.json.check import result_document
+from hubload.report.json.sweep import sweep_document
 from hubload.studies.sweep import run_sweep
 from timing import best_of
 
@@ -55,13 +56,13 @@ def main():
     key = parse_key_path("wheel.offset_mm", raw)
     points = [{key: float(v)} for v in OFFSETS_MM]
     batched_s = best_of(5, lambda: evaluate_many(variant_studies(raw, points, str(file))))
-    sweep_s = best_of(5, lambda: run_sweep(str(file), spec))
+    sweep_s = best_of(5, lambda: sweep_document(run_sweep(str(file), spec)))
     single_s = best_of(3, lambda: [evaluate(load_study(v)) for v in variants])
     single_json_s = best_of(3, lambda: [result_document(evaluate(load_study(v)))
                                         for v in variants])
-    sweep = run_sweep(str(file), spec)
+    points = sweep_document(run_sweep(str(file), spec))["points"]
     check = result_document(evaluate(load_study(variants[-1])))
-    assert sweep.points[-1].document["system"] == check["system"]
+    assert points[-1]["system"] == check["system"]
 
     cases = len(document["case"])
     print(f"{POINTS}-point sweep of a {cases}-case file (best of 3-5 runs):")

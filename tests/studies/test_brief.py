@@ -47,8 +47,7 @@ def test_every_solved_rating_gives_back_exactly_the_target_life(scenario, factor
         for solve, scaled_labels, whose in solves:
             if solve.factor is None:
                 continue
-            life = life_at(study, {label: solve.factor for label in scaled_labels},
-                           needs.life, whose)
+            life = life_at(study, {label: solve.factor for label in scaled_labels}, whose)
             assert life == pytest.approx(study.target_life_h, rel=1e-9), (bearing.label, whose)
 
 
@@ -152,8 +151,8 @@ def test_brief_is_written_only_with_out_and_never_over_a_file_without_force(tmp_
 
 
 @pytest.mark.parametrize("args,expected", [
-    (["--s0", "0"], "--s0 expects a positive number"),
-    (["--s0", "-1"], "--s0 expects a positive number"),
+    (["--s0", "0"], "--s0: expected a positive"),
+    (["--s0", "-1"], "--s0: expected a positive"),
     (["--out", "/nonexistent-folder/brief.md"], "does not exist"),
 ])
 def test_brief_bad_options_exit_2_with_one_line(args, expected):

@@ -80,8 +80,7 @@ def test_refined_brief_ratings_give_back_exactly_the_target_life(tmp_path):
             if solve.factor is None:
                 continue
             assert solve.on_geometry
-            life = life_at(study, {label: solve.factor for label in labels},
-                           needs.life, whose)
+            life = life_at(study, {label: solve.factor for label in labels}, whose)
             assert life == pytest.approx(study.target_life_h, rel=1e-9), (bearing.label, whose)
 
 
@@ -91,6 +90,7 @@ def test_refined_required_rating_follows_the_line_contact_life_exponent(tmp_path
     # C_needed = C_geometry (T / L10r)^(1/4) for the basic life (no [lubrication]).
     document = read_toml(YARD_LOADER)
     document.pop("lubrication")
+    document["project"]["verdict_basis"] = "refined"   # the refined life governs
     for case in document["case"]:
         case.pop("temperature_C", None)
     study = refined_study(document, tmp_path, "basic.toml")

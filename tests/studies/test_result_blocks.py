@@ -1,93 +1,84 @@
-"""Results that other features add to the check's JSON (the shaft's sections, L10m) reach
-the sweep tables and plots, the comparison and the HTML report without changes there."""
+"""Results that a file's tables add (the shaft's sections, L10m) reach the sweep tables and
+plots, the comparison and the HTML report: they are read from the typed result, whose
+structure follows the file."""
 
 from __future__ import annotations
 
-import copy
 import json
 import re
+from types import SimpleNamespace
 
+import numpy as np
 from click.testing import CliRunner
 
+import hubload
 from hubload.cli import main
-from hubload.report.html import report_page
-from hubload.report.series import all_series, shaft_min_safety
-from studies_helpers import YARD_LOADER, read_toml
-
-SHAFT = {"sections": [
-    {"name": "flange fillet", "min_safety": 1.85, "min_safety_case": "braking, loaded",
-     "yield_safety": 3.1, "fatigue_life_h": None},
-    {"name": "bearing seat", "min_safety": 2.6, "min_safety_case": "pushing into a heap",
-     "yield_safety": 4.0, "fatigue_life_h": 120000.0}]}
+from hubload.report.quantities import all_quantities
+from studies_helpers import YARD_LOADER, read_toml, write_toml
 
 
-def check_document() -> dict:
-    return json.loads(CliRunner().invoke(main, ["check", str(YARD_LOADER), "--json"]).output)
+def test_shaft_minimum_safety_is_a_quantity_exactly_when_the_file_has_a_shaft(tmp_path):
+    found = hubload.check(YARD_LOADER)
+    shaft = {q.key: q for q in all_quantities(found.value)}["shaft.min_safety"]
+    # property: the lowest safety is the minimum over the sections, as the JSON lists them
+    sections = found.to_dict()["shaft"]["sections"]
+    assert float(shaft.of(found.value)) == min(s["min_safety"] for s in sections)
+    document = read_toml(YARD_LOADER)
+    del document["shaft"]
+    plain = hubload.check(write_toml(document, tmp_path / "no_shaft.toml"))
+    assert "shaft.min_safety" not in {q.key for q in all_quantities(plain.value)}
 
 
-def test_shaft_minimum_safety_is_a_series_when_the_document_has_sections():
-    document = check_document()
-    labels = [s.label for s in all_series(document)]
-    assert ("shaft min safety" in labels) == bool((document.get("shaft") or {}).get("sections"))
-    with_shaft = {**copy.deepcopy(document), "shaft": SHAFT}
-    series = {s.label: s for s in all_series(with_shaft)}
-    assert series["shaft min safety"].values([with_shaft]) == [1.85]  # the lower section
-    assert shaft_min_safety({"shaft": {"sections": [{"min_safety": None}]}}) is None
+def test_modified_life_quantities_follow_the_lubrication_table(tmp_path):
+    document = read_toml(YARD_LOADER)
+    with_oil = {q.key for q in all_quantities(hubload.check(YARD_LOADER).value)}
+    del document["lubrication"]
+    for case in document["case"]:
+        case.pop("temperature_C", None)
+    without = {q.key for q in all_quantities(
+        hubload.check(write_toml(document, tmp_path / "dry.toml")).value)}
+    assert "system.l10m_h" in with_oil and "system.l10m_h" not in without
 
 
-def test_modified_life_series_follow_the_documents_keys():
-    document = check_document()
-    labels = [s.label for s in all_series(document)]
-    assert ("system L10m" in labels) == ("l10m_h" in document["system"])
-
-
-def test_report_page_shows_a_result_block_it_was_not_written_for():
-    document = {**check_document(), "shaft": SHAFT}
-    page = report_page(document, read_toml(YARD_LOADER))
-    assert re.search(r'data-key="shaft.sections\[0\].min_safety">1.85<', page)
-    assert "flange fillet" in page and "braking, loaded" in page
+def test_report_page_shows_the_shaft_sections_as_the_json_gives_them(tmp_path):
+    report = tmp_path / "report.html"
+    assert CliRunner().invoke(main, ["check", str(YARD_LOADER), "--report",
+                                     str(report)]).exit_code == 0
+    page = report.read_text(encoding="utf-8")
+    sections = hubload.check(YARD_LOADER).to_dict()["shaft"]["sections"]
+    for section in sections:
+        assert section["name"] in page
+        assert re.search(rf"<th>{re.escape(section['name'])}</th>.*?<td>"
+                         rf"{section['min_safety']:.2f}</td>", page, re.S)
 
 
 def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
-    # Shaft safety 1/(k x) against a required 1.5: log(safety) is linear in log(x), not in x,
-    # so the interpolated crossing lies within a grid step of the exact x* = 1/(1.5 k).
-    import numpy as np
-
-    from hubload.casefile.variation import KeyPath
-    from hubload.schema.spec import Field
-    from hubload.studies.sweep import Axis, Sweep, SweepPoint
-
-    x = np.linspace(0.5, 2.0, 31)
-    k = 0.5
-    points = tuple(SweepPoint({"k": float(v)}, {
-        "verdict": None, "shaft": {"required_safety": 1.5,
-                                   "sections": [{"min_safety": 1 / (k * v)}]}}) for v in x)
-    axis = Axis(KeyPath("k", (("k", None),), Field("k", "number", "")), x)
-    sweep = Sweep("t", "t.toml", (axis,), points, None, {"k": None})
-    ((where, found),) = sweep.shaft_crossings()
-    assert where == {} and len(found) == 1 and found[0].falls_below
-    assert abs(found[0].value - 1 / (1.5 * k)) < x[1] - x[0]
-    # reported without a target life too: the shaft's limit is its own
-    from hubload.report.sweep_out import crossing_lines
-
-    (line,) = [text for text in crossing_lines(sweep) if text.startswith("Shaft")]
-    assert f"k = {found[0].value:.4g}" in line and "falls below" in line
+    # Property of interpolation: the reported crossing lies between two neighbouring points
+    # whose lowest shaft safeties straddle the required safety.
+    run = CliRunner().invoke(main, ["sweep", str(YARD_LOADER), "--vary",
+                                    "shaft.section[1].diameter_mm=50:70:11", "--json"])
+    assert run.exit_code == 0, run.output
+    sweep = json.loads(run.output)
+    (crossing,) = sweep["shaft_crossings"]
+    x = [p["values"]["shaft.section[1].diameter_mm"] for p in sweep["points"]]
+    lowest = [min(s["min_safety"] for s in p["shaft"]["sections"]) for p in sweep["points"]]
+    required = sweep["points"][0]["shaft"]["required_safety"]
+    i = next(i for i in range(len(x) - 1) if (lowest[i] - required) * (lowest[i + 1] - required) < 0)
+    assert x[i] <= crossing["value"] <= x[i + 1] and not crossing["falls_below"]
+    text = CliRunner().invoke(main, ["sweep", str(YARD_LOADER), "--vary",
+                                     "shaft.section[1].diameter_mm=50:70:11"]).output
+    assert f"= {crossing['value']:.4g}" in text and "rises above" in text
 
 
 def grid_sweep(lives_h):
-    """A 2 x 2 sweep whose points carry only the governing life (target 100 h)."""
-    import numpy as np
-
-    from hubload.casefile.variation import KeyPath
-    from hubload.schema.spec import Field
-    from hubload.studies.sweep import Axis, Sweep, SweepPoint
-
-    axes = tuple(Axis(KeyPath(key, ((key, None),), Field(key, "number", "")), values)
+    """A 2 x 2 sweep stand-in whose points carry only the governing life (target 100 h)."""
+    axes = tuple(SimpleNamespace(key=key, values=values)
                  for key, values in (("a", np.array([1.0, 2.0])), ("b", np.array([10.0, 20.0]))))
-    points = tuple(SweepPoint({}, {"verdict": {"life": "L10", "life_h": life, "target_h": 100.0,
-                                               "passed": life is None or life >= 100}})
-                   for life in lives_h)
-    return Sweep("t", "t.toml", axes, points, 100.0, {"a": None, "b": None})
+    return SimpleNamespace(
+        title="t", axes=axes, shape=(2, 2), file_values={"a": None, "b": None},
+        governing_life_h=np.array([np.inf if v is None else v for v in lives_h]),
+        targets_h=np.full(4, 100.0), first=SimpleNamespace(governing=SimpleNamespace(
+            symbol="L10")))
 
 
 def test_life_map_draws_grids_with_zero_or_only_infinite_lives():

@@ -10,6 +10,7 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from hubload.casefile import load_study
+from hubload.report.json.sweep import sweep_document
 from hubload.studies.crossing import target_crossings
 from hubload.studies.sweep import run_sweep
 from studies_helpers import YARD_LOADER, read_toml, write_toml
@@ -18,9 +19,10 @@ LIFE_EXPONENT = 10 / 3  # ISO 281:2007, 7.1: L10 = (C/P)^p, p = 10/3 for roller 
 
 
 def lives(sweep, dotted: str) -> np.ndarray:
+    """A life of every point, read from the sweep's JSON points (null: infinite)."""
     values = []
-    for point in sweep.points:
-        node = point.document
+    for point in sweep_document(sweep)["points"]:
+        node = point
         for key in dotted.split("."):
             node = node[key]
         values.append(math.inf if node is None else node)
@@ -64,8 +66,8 @@ def test_two_keys_make_a_grid_with_the_first_key_slowest():
     sweep = run_sweep(str(YARD_LOADER), ["wheel.offset_mm=60:120:3",
                                          "pair.outboard.C_kN=150:190:5"])
     assert sweep.shape == (3, 5)
-    assert [p.values["wheel.offset_mm"] for p in sweep.points[:5]] == [60.0] * 5
-    assert [p.values["pair.outboard.C_kN"] for p in sweep.points[:5]] == [150, 160, 170, 180, 190]
+    assert [v["wheel.offset_mm"] for v in sweep.values[:5]] == [60.0] * 5
+    assert [v["pair.outboard.C_kN"] for v in sweep.values[:5]] == [150, 160, 170, 180, 190]
 
 
 @given(a=st.floats(5, 15), b=st.floats(0.01, 0.2), target=st.floats(100, 5000))
@@ -98,8 +100,8 @@ def test_a_whole_number_key_is_written_back_as_a_whole_number(tmp_path):
     # points[].values must be valid file values: rollers is an integer key of the format.
     document = read_toml(YARD_LOADER)
     sweep = run_sweep(str(YARD_LOADER), ["pair.inboard.rollers=18:20:3"])
-    for point, rollers in zip(sweep.points, (18, 19, 20)):
-        value = point.values["pair.inboard.rollers"]
+    for values, rollers in zip(sweep.values, (18, 19, 20)):
+        value = values["pair.inboard.rollers"]
         assert isinstance(value, int) and value == rollers
         document["pair"]["inboard"]["rollers"] = value
         assert load_study(write_toml(document, tmp_path / f"r{value}.toml")).pair.inboard \

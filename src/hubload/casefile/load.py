@@ -76,6 +76,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         lubrication=read_lubrication(data.get("lubrication"), data["case"], pair),
         reliability_percent=project.get("reliability_percent", 90.0),
         shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
+        verdict_basis=project.get("verdict_basis", "shorter"),
     )
     return with_method(study, project.get("method", "iso281"))
 

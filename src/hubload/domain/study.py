@@ -149,3 +149,4 @@ class Study:
     reliability_percent: float = 90.0
     shaft: Shaft | None = None
     method: str = "iso281"             # or "refined"
+    verdict_basis: str = "shorter"     # refined method: shorter | iso281 | refined

@@ -52,12 +52,6 @@ class ModifiedLife:
         """Life symbol, e.g. L10m or L1m (single studies)."""
         return lub.life_symbol(float(self.reliability_percent))
 
-    def outside_scope(self) -> list[tuple[int, str, float]]:
-        """(case index, bearing, kappa) wherever kappa < 0.1 (single studies only)."""
-        return [(int(index), label, float(bearing.kappa[index]))
-                for label, bearing in self.bearings.items()
-                for index in np.flatnonzero(bearing.kappa_outside_scope)]
-
 
 def contamination_level(lubrication: Lubrication) -> tuple[lub.ContaminationLevel, str]:
     """The ISO 281 annex A row for the lubrication, and a note saying which one."""
@@ -131,48 +125,6 @@ def evaluate_modified(study: Study, equivalent_n: dict, basic_case_life_h: dict,
             [b.life_h for b in bearings.values()], [b.damage_share for b in bearings.values()]))
 
 
-def warnings(modified: ModifiedLife | None, case_names) -> list[str]:
-    """Plain-language warnings of a single study's modified life."""
-    if modified is None:
-        return []
-    found = []
-    flagged = modified.outside_scope()
-    if flagged:
-        by_case: dict[int, list[str]] = {}
-        for index, label, kappa in flagged:
-            by_case.setdefault(index, []).append(f"{label} {kappa:.3g}")
-        where = "; ".join(f"'{case_names[index]}': {', '.join(values)}"
-                          for index, values in sorted(by_case.items()))
-        found.append(
-            f"kappa < 0.1, outside the scope of ISO 281's aISO, in {where}. aISO and eC are "
-            f"evaluated at kappa = 0.1 as a bounding estimate. At such a low viscosity ratio no "
-            f"separating oil film forms: surface distress and wear, rather than the subsurface "
-            f"fatigue that the rating life describes, may limit the bearing's life. Ask the "
-            f"bearing and motor supplier about operation at these low speeds.")
-    thin = np.asarray(modified.viscosity_m2_s) < lub.WALTHER_LOWEST_VISCOSITY_M2_S
-    if np.any(thin):
-        found.append("The oil's viscosity at the operating temperature is below 2 mm2/s, where "
-                     "the Walther (ASTM D341) form with the 0.7 constant loses accuracy: check "
-                     "the viscosity with the oil supplier.")
-    return found
-
-
 def reliability_life_factor(study: Study) -> np.ndarray:
     """a1 of the study's reliability (ISO 281:2007, 9.2); broadcasts like the study."""
     return lub.reliability_factor(study.reliability_percent)
-
-
-def verdict_life(study: Study, modified: ModifiedLife | None, basic_life_h) -> tuple[str, float, str]:
-    """(symbol, system life [h], what it is) that the verdict compares with the target.
-
-    ``basic_life_h`` is a1 times the system's basic L10 (used without lubrication).
-    """
-    reliability = f"reliability {study.reliability_percent:g} %"
-    if modified is not None:
-        return (modified.symbol, modified.system_life_h,
-                f"ISO 281 modified rating life a1 aISO L10, {reliability}, with lubrication "
-                f"and contamination")
-    if study.reliability_percent == 90.0:
-        return "L10", basic_life_h, "ISO 281 basic rating life (no [lubrication] given)"
-    return (lub.life_symbol(study.reliability_percent, modified=False), basic_life_h,
-            f"a1 L10, {reliability}; aISO not applied (no [lubrication] given)")

@@ -20,8 +20,6 @@ from hubload.model import iso281
 from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings
 from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
 
-RATING_DEVIATION_WARNING = 0.15
-STATIC_RATING_PRESSURE_PA = 4000e6       # ISO 76:2006 basis of C0 for roller bearings
 LABELS = ("outboard", "inboard")
 
 
@@ -167,43 +165,3 @@ def solve(study: Study) -> RefinedPair:
         tilt_rad=response.tilt_rad,
         radial_displacement_at_wheel_m=response.radial_displacement_at_wheel_m,
         converged=converged, setting_m=np.asarray(study.pair.axial_setting_m, dtype=float))
-
-
-def rating_warnings(study: Study) -> list[str]:
-    """Ratings from geometry more than 15 % away from the typed ones (single studies)."""
-    found = []
-    for label, rated in geometry_ratings(study).items():
-        bearing = study.pair.bearings()[label]
-        for symbol, standard, geometric, typed in (
-                ("C", "ISO 281", rated.dynamic_n, bearing.dynamic_rating_n),
-                ("C0", "ISO 76", rated.static_n, bearing.static_rating_n)):
-            deviation = float(geometric) / float(typed) - 1.0
-            if abs(deviation) > RATING_DEVIATION_WARNING:
-                found.append(
-                    f"{symbol} of the {label} bearing from its internal geometry "
-                    f"({float(geometric) / 1e3:.1f} kN, {standard}) differs by {deviation:+.0%} "
-                    f"from the typed {symbol}_kN ({float(typed) / 1e3:.1f} kN): check the "
-                    f"geometry and the rating with the bearing's data.")
-    return found
-
-
-def warnings(study: Study, refined: RefinedPair | None) -> list[str]:
-    """Plain-language warnings of a single study: ratings, equilibrium, contact pressure."""
-    found = rating_warnings(study)
-    if refined is None:
-        return found
-    names = study.cases.names
-    for index in refined.unsolved_cases():
-        found.append(
-            f"No equilibrium of the shaft was found for case '{names[index]}': the bearings "
-            f"cannot carry its loads in the refined model (or the solver failed). Its life is "
-            f"counted as zero; check the loads, the setting and the geometry.")
-    for label, bearing in refined.bearings.items():
-        worst = int(np.argmax(bearing.max_contact_pressure_pa))
-        peak = float(bearing.max_contact_pressure_pa[worst])
-        if peak > STATIC_RATING_PRESSURE_PA:
-            found.append(
-                f"Peak contact pressure {peak / 1e6:,.0f} MPa in the {label} bearing under case "
-                f"'{names[worst]}' exceeds 4000 MPa, the level on which ISO 76 bases C0: "
-                f"permanent raceway deformation is to be expected.")
-    return found

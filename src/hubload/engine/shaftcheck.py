@@ -15,7 +15,6 @@ from hubload.domain.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study
-from hubload.units import MM
 
 
 
@@ -166,33 +165,3 @@ def evaluate_shaft(study: Study, to_km) -> ShaftResult | None:
         sections=tuple(section_result(study, section, fraction, to_km)
                        for section in study.shaft.sections),
         permissible=permissible_result(study))
-
-
-def shaft_warnings(study: Study, result: ShaftResult | None) -> list[str]:
-    """Plain-language warnings for a single study (no parameter arrays)."""
-    if result is None or any(np.ndim(section.fatigue_life_h) for section in result.sections):
-        return []
-    warnings = []
-    inboard_m = float(study.pair.inboard.position_m)
-    for section in study.shaft.sections:
-        if float(section.position_m) <= inboard_m:
-            warnings.append(
-                f"Shaft section '{section.name}' lies inboard of both bearings: only the drive "
-                f"torque acts there, no bending. Check its position_mm (positive outboard).")
-    permissible = result.permissible
-    if permissible is None:
-        return warnings
-    curve = study.shaft.permissible
-    if not bool(permissible.inside):
-        warnings.append(
-            f"The wheel offset ({float(permissible.position_m) / MM:g} mm) lies outside the "
-            f"supplier's permissible-load curve ({curve.load_position_m[0] / MM:g} to "
-            f"{curve.load_position_m[-1] / MM:g} mm). The curve is not extrapolated: the "
-            f"permissible load is not assessed. Ask the supplier for this position.")
-        return warnings
-    over = [f"'{name}' ({100 * u:.0f} %)" for name, u in
-            zip(study.cases.names, permissible.utilisation) if u > 1.0]
-    if over:
-        warnings.append(f"The radial wheel force exceeds the supplier's permissible load in "
-                        f"case(s) {', '.join(over)}.")
-    return warnings

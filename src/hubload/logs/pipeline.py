@@ -116,7 +116,7 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
         for flag, seconds in flag_time_s(points, samples.hold_s).items():
             flagged[flag] += seconds
         temperature_c = sample_temperature_c(samples, study)
-        result = evaluate(with_cases(study, cases, temperature_c), with_warnings=False)
+        result = evaluate(with_cases(study, cases, temperature_c), with_findings=False)
         hold_h = samples.hold_s / SECONDS_PER_HOUR
         damages = [iso281.damage_rate_per_hour(hold_h, life_h)
                    for life_h in case_lives(result)] + shaft.sample_damages(result, hold_h)

@@ -17,7 +17,8 @@ from hubload.logs.columns import parse_column_options
 from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
 from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c, spectrum_result
-from hubload.report import logsjson, logsview
+from hubload.report.json import spectrum as logsjson
+from hubload.report.terminal import spectrum as logsview
 from hubload.report.files import checked_output, write_text
 from hubload.report.spectrumfile import spectrum_text
 

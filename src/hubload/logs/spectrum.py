@@ -26,7 +26,10 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.domain.study import Cases, Study
-from hubload.engine import STATIC_SAFETY_WARNING, Result, evaluate
+from hubload.engine import Result, evaluate
+from hubload.engine.findings import STATIC_SAFETY_WARNING, Finding
+from hubload.engine.governing import GoverningLife, LifeCandidate
+from hubload.engine.modified_life import per_study, reliability_life_factor
 from hubload.logs import shaft
 from hubload.logs.pipeline import CLASS_CHANNELS, FORCES, KN, LABELS, LEVEL_EXPONENT, LogSummary
 from hubload.logs.samples import with_cases
@@ -56,11 +59,23 @@ class SpectrumResult:
     classed: Result
     classing_error: float | None
     shares: dict[str, list[ClassShare]]
-    warnings: list[str]
+    findings: tuple[Finding, ...]
+    direct_governing: GoverningLife | None = None      # the direct life the verdict would judge
     modified_life_h: dict[str, float] | None = None   # L10m (Lnm), with [lubrication]
     modified_system_life_h: float | None = None
     modified_classing_error: float | None = None
     shaft_life_h: list[float] | None = None          # fatigue life per section, with [shaft]
+
+    @property
+    def governing_life_h(self) -> float:
+        """The direct system life of the kind the verdict judges (the fleet ranks on it)."""
+        return float(self.direct_governing.life_h)
+
+    @property
+    def governing_classing_error(self) -> float | None:
+        """The classing error of the governing life (modified with lubrication)."""
+        return self.classing_error if self.modified_life_h is None \
+            else self.modified_classing_error
 
 
 def sums(summary: LogSummary) -> dict[str, np.ndarray]:
@@ -165,7 +180,7 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
                                                        summary.peak_static_load_n[label]))
                      for label in LABELS}
     classed = evaluate(with_cases(study, classed_cases(summary), classed_temperature_c(summary)),
-                       with_warnings=False)
+                       with_findings=False)
     fraction = {label: (w / damage[label] if damage[label] > 0 else 0.0)
                 for label, w in system_weights(life_h).items()}
     shares = {key: class_shares(summary, CLASS_CHANNELS.index(key), fraction)
@@ -175,9 +190,29 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
         static_safety=static_safety, classed=classed,
         classing_error=relative_error(float(classed.system_life_h), system_h),
         shares=shares, shaft_life_h=shaft_lives(summary, study),
-        warnings=static_warnings(static_safety) + flag_warnings(summary)
-        + shaft_warnings(summary, study))
-    return with_modified_lives(result) if classed.modified is not None else result
+        findings=tuple(static_findings(static_safety) + flag_findings(summary)
+                       + shaft_findings(summary, study)))
+    result = with_modified_lives(result) if classed.modified is not None else result
+    return dataclasses.replace(result, direct_governing=direct_governing(result, study))
+
+
+def direct_governing(result: SpectrumResult, study: Study) -> GoverningLife:
+    """The direct life of the kind the verdict judges, by the engine's rule (ISO 281:2007,
+    9.1-9.2): the modified life with lubrication, else a1 L10."""
+    modified = result.modified_life_h is not None
+    a1 = 1.0 if modified else float(per_study(reliability_life_factor(study)))
+    bearing_h = result.modified_life_h if modified else \
+        {label: a1 * life for label, life in result.life_h.items()}
+    system_h = result.modified_system_life_h if modified else a1 * result.system_life_h
+    nothing = np.zeros(0)
+    candidate = LifeCandidate(
+        method="iso281", modified=modified, reliability_percent=np.asarray(
+            float(study.reliability_percent)),
+        system_life_h=np.asarray(system_h), system_life_km=np.asarray(np.nan),
+        bearing_life_h={k: np.asarray(v) for k, v in bearing_h.items()},
+        bearing_life_km={}, case_life_h={}, system_damage_share=nothing,
+        bearing_damage_share={})
+    return GoverningLife(rule="iso281", candidates=(candidate,), chosen=np.asarray(0))
 
 
 def with_modified_lives(result: SpectrumResult) -> SpectrumResult:
@@ -203,17 +238,17 @@ def shaft_lives(summary: LogSummary, study: Study) -> list[float] | None:
             for damage in (summary.total(name) for name in shaft.damage_names(study))]
 
 
-def shaft_warnings(summary: LogSummary, study: Study) -> list[str]:
+def shaft_findings(summary: LogSummary, study: Study) -> list[Finding]:
     if summary.shaft is None:
         return []
-    found = [f"Shaft section '{section.name}': lowest fatigue safety {safety:.2f} in the log, "
-             f"below the required {study.shaft.required_safety:g}."
+    required = float(study.shaft.required_safety)
+    found = [Finding("log_shaft_safety_low", None, section.name,
+                     {"safety": float(safety), "required": required})
              for section, safety in zip(study.shaft.sections, summary.shaft["min_safety"])
-             if safety < study.shaft.required_safety]
+             if safety < required]
     utilisation = float(summary.shaft["max_utilisation"][0])
     if utilisation > 1.0:
-        found.append(f"The radial wheel force reaches {100 * utilisation:.0f} % of the "
-                     "supplier's permissible load in the log.")
+        found.append(Finding("log_permissible_exceeded", values={"utilisation": utilisation}))
     return found
 
 
@@ -226,28 +261,14 @@ def relative_error(classed_h: float, direct_h: float) -> float | None:
     return classed_h / direct_h - 1.0
 
 
-def static_warnings(static_safety: dict[str, float]) -> list[str]:
-    return [f"Static safety s0 = {s0:.2f} of the {label} bearing at the log's peak load is "
-            f"below {STATIC_SAFETY_WARNING:g} (common practice minimum for roller bearings with "
-            f"shock loads{'; below 1 the raceways deform permanently' if s0 < 1 else ''})."
+def static_findings(static_safety: dict[str, float]) -> list[Finding]:
+    return [Finding("log_static_safety_low", None, label,
+                    {"s0": s0, "limit": STATIC_SAFETY_WARNING})
             for label, s0 in static_safety.items() if s0 < STATIC_SAFETY_WARNING]
 
 
-FLAG_TEXT = {
-    "slips": "the tractive or braking force exceeded adhesion_mu x wheel load and was capped "
-             "there (the wheel would slip; check adhesion_mu or the force channel)",
-    "tyre_slides": "side and tractive force together exceeded adhesion_mu x wheel load "
-                   "(friction circle: the tyre would slide)",
-    "pressure_above_rating": "the pressure was above the motor's max_pressure_bar",
-    "speed_above_rating": "the speed was above the motor's max_speed_rpm",
-    "kappa_outside_scope": "a bearing ran at kappa < 0.1, outside the scope of ISO 281's aISO "
-                           "(no separating oil film: aISO is evaluated at kappa = 0.1 as a bounding "
-                           "estimate; wear and surface distress may limit the life; ask the "
-                           "supplier about these low speeds)",
-}
-
-
-def flag_warnings(summary: LogSummary) -> list[str]:
+def flag_findings(summary: LogSummary) -> list[Finding]:
+    """Share of the log's time in which each flag was raised (where it was)."""
     total_s = summary.total("time_s")
-    return [f"In {100 * seconds / total_s:.2g} % of the log's time {FLAG_TEXT[flag]}."
+    return [Finding("log_flag_time", None, flag, {"time_fraction": seconds / total_s})
             for flag, seconds in summary.flag_time_s.items() if seconds > 0 and total_s > 0]

@@ -73,3 +73,27 @@ def safety(value) -> str:
 def setting_kind(setting_um: float) -> str:
     """An axial setting's name by its sign (the file format's: > 0 end play, < 0 preload)."""
     return "end play" if setting_um > 0 else "preload" if setting_um < 0 else "line-to-line"
+
+
+def percent(value) -> str:
+    """A fraction as a percentage without the unit (for columns headed '%')."""
+    value = float(value)
+    return "-" if math.isnan(value) else f"{100 * value:.1f}"
+
+
+def fixed(digits: int):
+    """A formatter to ``digits`` decimals; '-' for an undefined value (NaN or None)."""
+    def text(value) -> str:
+        value = math.nan if value is None else float(value)
+        if math.isnan(value):
+            return "-"
+        return "infinite" if math.isinf(value) else f"{value:,.{digits}f}"
+    return text
+
+
+def factor_text(value) -> str:
+    """A dimensionless factor (kappa, eC, aISO): 3 significant digits below 1, else 2 decimals."""
+    value = float(value)
+    if math.isnan(value):
+        return "-"
+    return f"{value:.3g}" if abs(value) < 1 else f"{value:.2f}"

@@ -19,11 +19,9 @@ import numpy as np
 
 from hubload.domain.study import Study
 from hubload.engine import Result, evaluate
+from hubload.engine.verdict import life_exponent
 from hubload.model import requirements
 from hubload.model.kinematics import kmh_to_rpm
-from hubload.model.refined.life import RATING_LIFE_EXPONENT
-from hubload.report.jsonout import result_document
-from hubload.report.series import GoverningLife, governing_life
 
 CLOSED_FORM_RTOL = 1e-9
 BRACKET_STEPS = 40
@@ -56,19 +54,13 @@ def scaled(study: Study, factors: dict[str, float]) -> Study:
     return dataclasses.replace(study, pair=dataclasses.replace(study.pair, **bearings))
 
 
-def life_at(study: Study, factors: dict[str, float], life: GoverningLife, whose: str) -> float:
-    """``life`` [h] of ``whose`` ("system" or a bearing label) with the ratings scaled."""
-    document = result_document(evaluate(scaled(study, factors)))
-    return life.of(document["system"] if whose == "system" else document["bearings"][whose])
+def life_at(study: Study, factors: dict[str, float], whose: str) -> float:
+    """The governing life [h] of ``whose`` ("system" or a bearing label), ratings scaled."""
+    governing = evaluate(scaled(study, factors), with_findings=False).governing
+    return float(governing.life_h if whose == "system" else governing.bearing_life_h(whose))
 
 
-def life_exponent(study: Study) -> float:
-    """Exponent of a case life in the rating factor: 10/3 (ISO 281), 4 (refined method)."""
-    return RATING_LIFE_EXPONENT if study.method == "refined" else requirements.LIFE_EXPONENT_ROLLER
-
-
-def solve_factor(study: Study, labels: tuple[str, ...], whose: str, life: GoverningLife,
-                 target_h: float) -> Solve:
+def solve_factor(study: Study, labels: tuple[str, ...], whose: str, target_h: float) -> Solve:
     """Factor k on the C of ``labels`` so that the life of ``whose`` equals ``target_h``.
 
     Under the refined method the factor applies to the rating from the geometry.
@@ -76,12 +68,13 @@ def solve_factor(study: Study, labels: tuple[str, ...], whose: str, life: Govern
     on_geometry = study.method == "refined"
 
     def scaled_life(k: float) -> float:
-        return life_at(study, {label: k for label in labels}, life, whose)
+        return life_at(study, {label: k for label in labels}, whose)
 
     now = scaled_life(1.0)
     if math.isinf(now) or now <= 0:
         return Solve(None, "none", "no fatigue damage: every rating meets the target")
-    guess = (target_h / now) ** (1.0 / life_exponent(study))
+    exponent = life_exponent(evaluate(study, with_findings=False).governing)
+    guess = (target_h / now) ** (1.0 / exponent)
     if math.isclose(scaled_life(guess), target_h, rel_tol=CLOSED_FORM_RTOL):
         return Solve(guess, "closed form", on_geometry=on_geometry)
 
@@ -144,8 +137,6 @@ class BearingNeeds:
 class Requirements:
     study: Study
     result: Result
-    document: dict
-    life: GoverningLife
     target_h: float | None
     required_s0: float
     bearings: tuple[BearingNeeds, ...]
@@ -158,18 +149,18 @@ class Requirements:
         return rpm / float(kmh_to_rpm(1.0, self.study.wheel.rolling_radius_m))
 
 
-def geometry_rating_n(document: dict, label: str) -> float | None:
-    value = document["bearings"][label].get("c_from_geometry_kN")
-    return None if value is None else float(value) * 1e3
+def geometry_rating_n(result: Result, label: str) -> float | None:
+    rated = result.geometry_ratings.get(label)
+    return None if rated is None else float(rated.dynamic_n)
 
 
-def bearing_needs(study: Study, result: Result, document: dict, label: str, life: GoverningLife,
-                  target_h: float | None, required_s0: float) -> BearingNeeds:
+def bearing_needs(study: Study, result: Result, label: str, target_h: float | None,
+                  required_s0: float) -> BearingNeeds:
     bearing, found, names = study.pair.bearings()[label], result.bearings[label], \
         study.cases.names
     others = tuple(other for other in result.bearings if other != label)
     unsolved = Solve(None, "none", "no target life given")
-    solve = (lambda labels, whose: solve_factor(study, labels, whose, life, target_h)) \
+    solve = (lambda labels, whose: solve_factor(study, labels, whose, target_h)) \
         if target_h is not None else (lambda labels, whose: unsolved)
     max_static = extreme(found.static_equivalent_n, names)
     return BearingNeeds(
@@ -177,9 +168,9 @@ def bearing_needs(study: Study, result: Result, document: dict, label: str, life
         max_radial=extreme(found.radial_n, names), max_axial=extreme(found.axial_n, names),
         equivalent_load_n=float(requirements.spectrum_equivalent_load_n(
             study.cases.time_fraction, study.cases.speed_rpm, found.equivalent_n)),
-        life_h=life.of(document["bearings"][label]),
+        life_h=float(result.governing.bearing_life_h(label)),
         dynamic_rating_n=float(bearing.dynamic_rating_n),
-        geometry_rating_n=geometry_rating_n(document, label),
+        geometry_rating_n=geometry_rating_n(result, label),
         alone=solve((label,), label), both=solve((label, *others), "system"),
         this_only=solve((label,), "system"),
         max_static=max_static, static_rating_n=float(bearing.static_rating_n),
@@ -190,8 +181,6 @@ def bearing_needs(study: Study, result: Result, document: dict, label: str, life
 
 def requirements_of(study: Study, required_s0: float) -> Requirements:
     result = evaluate(study)
-    document = result_document(result)
-    life = governing_life(document)
     target = study.target_life_h
     cases = study.cases
     moments = requirements.wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
@@ -200,9 +189,8 @@ def requirements_of(study: Study, required_s0: float) -> Requirements:
     turning = cases.speed_rpm > 0
     names_turning = [name for name, turns in zip(cases.names, turning) if turns]
     return Requirements(
-        study=study, result=result, document=document, life=life, target_h=target,
-        required_s0=required_s0,
-        bearings=tuple(bearing_needs(study, result, document, label, life, target, required_s0)
+        study=study, result=result, target_h=target, required_s0=required_s0,
+        bearings=tuple(bearing_needs(study, result, label, target, required_s0)
                        for label in result.bearings),
         moment=extreme(moments, cases.names),
         speed_min=least(cases.speed_rpm[turning], names_turning) if any(turning) else None,

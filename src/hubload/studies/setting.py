@@ -35,12 +35,30 @@ class BestRange:
 
 @dataclass(frozen=True)
 class SettingSweep:
+    """The refined method at every setting, batched: per-setting arrays on the leading axis.
+
+    The best range is judged on the refined candidate life (the only one the setting
+    changes); every point also carries the governing life of the study's verdict basis.
+    """
+
     study: Study
     settings_m: np.ndarray
-    result: Result                 # batched: per-setting arrays on the leading axis
-    life_name: str                 # the life the best range is judged on (L10 or L10m)
-    governing_life_h: np.ndarray   # that system life per setting
+    result: Result
     best: BestRange | None         # None when no setting gives a finite, positive life
+
+    @property
+    def refined(self):
+        """The refined method's candidate life (L10r or L10mr) of the governing life."""
+        return self.result.governing.candidates[-1]
+
+    @property
+    def life_name(self) -> str:
+        return self.refined.symbol
+
+    @property
+    def refined_life_h(self) -> np.ndarray:
+        """The refined system life per setting (zero where a case has no equilibrium)."""
+        return np.where(self.unsolved, 0.0, self.refined.system_life_h)
 
     @property
     def unsolved(self) -> np.ndarray:
@@ -52,18 +70,20 @@ def setting_values_um(start_um: float, stop_um: float, step_um: float) -> np.nda
     """Settings from ``start_um`` to ``stop_um`` (inclusive) by ``step_um``; InputError if bad."""
     low, high = SETTING_LIMITS_UM
     if not (np.isfinite(step_um) and step_um > 0):
-        raise InputError(f"--step expects a positive number of um, got {step_um:g}")
-    for option, value in (("--from", start_um), ("--to", stop_um)):
+        raise InputError(f"expected a positive step in um, got {step_um:g}", key_path="step_um")
+    for name, value in (("start_um", start_um), ("stop_um", stop_um)):
         if not np.isfinite(value):
-            raise InputError(f"{option} expects a finite number of um, got {value:g}")
+            raise InputError(f"expected a finite setting in um, got {value:g}", key_path=name)
     if stop_um < start_um:
-        raise InputError(f"--to ({stop_um:g}) must not be below --from ({start_um:g})")
+        raise InputError(f"the last setting ({stop_um:g} um) must not be below the first "
+                         f"({start_um:g} um)", key_path="stop_um")
     if start_um < low or stop_um > high:
         raise InputError(f"settings must lie within {low:g} to {high:g} um, "
-                         f"got {start_um:g} to {stop_um:g}")
+                         f"got {start_um:g} to {stop_um:g}", key_path="start_um")
     count = int(np.floor((stop_um - start_um) / step_um + 1e-9)) + 1
     if count > MAX_POINTS:
-        raise InputError(f"{count} settings requested; at most {MAX_POINTS} (raise --step)")
+        raise InputError(f"{count} settings requested; at most {MAX_POINTS} (raise the step)",
+                         key_path="step_um")
     return start_um + step_um * np.arange(count)
 
 
@@ -88,10 +108,6 @@ def run_setting_sweep(study: Study, settings_um: np.ndarray) -> SettingSweep:
     refined = with_method(study, "refined")
     settings_m = np.asarray(settings_um, dtype=float) * UM
     batched = replace(refined, pair=replace(refined.pair, axial_setting_m=settings_m[:, None]))
-    result = evaluate(batched, with_warnings=False)
-    modified = result.modified
-    name, governing = (("L10", result.system_life_h) if modified is None
-                       else (modified.symbol, modified.system_life_h))
-    governing = np.where(result.refined.converged.all(axis=-1), governing, 0.0)
-    return SettingSweep(study=refined, settings_m=settings_m, result=result, life_name=name,
-                        governing_life_h=governing, best=best_range(settings_m, governing))
+    result = evaluate(batched, with_findings=False)
+    found = SettingSweep(study=refined, settings_m=settings_m, result=result, best=None)
+    return replace(found, best=best_range(settings_m, found.refined_life_h))

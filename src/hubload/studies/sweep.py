@@ -2,7 +2,9 @@
 
 The file is read once; each point sets the varied keys in the parsed document and
 converts it to a Study (cheap), and the points are evaluated by the engine in
-batches (``engine.evaluate_many``), never file by file.
+batches of BATCH_POINTS (one batched call each), never file by file. The sweep keeps
+the batched results: columns of per-point values are read from them directly, and
+a point's own result is picked out only when an output asks for it.
 """
 
 from __future__ import annotations
@@ -11,22 +13,20 @@ import itertools
 import math
 from collections.abc import Callable, Sequence
 from dataclasses import dataclass
+from functools import cached_property
 
 import numpy as np
 
 from hubload.casefile.load import read_document, study_from_document
 from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_studies
-from hubload.engine import Result, evaluate_many
+from hubload.domain.batch import picker, stack_studies
+from hubload.domain.study import Study
+from hubload.engine import Result, evaluate, with_findings
 from hubload.errors import InputError
-from hubload.report.jsonout import result_document
-from hubload.report.numbers import life_h
-from hubload.report.series import MISSING, governing_life, lookup, shaft_min_safety
 from hubload.studies.crossing import Crossing, target_crossings
 
 MAX_POINTS = 100_000
 BATCH_POINTS = 1024
-# Keys of the check's JSON that describe the file, not a point: written once per sweep.
-FILE_LEVEL_KEYS = ("title", "source", "method", "cases", "cautions")
 
 
 @dataclass(frozen=True)
@@ -42,28 +42,30 @@ class Axis:
 
 
 @dataclass(frozen=True)
-class SweepPoint:
-    """A point's values of the varied keys and the check's JSON document of it (the engine
-    Result is not kept: a grid of 100,000 points would hold them all)."""
+class SweepChunk:
+    """Up to BATCH_POINTS consecutive points: their studies and their batched result."""
 
-    values: dict[str, float]
-    document: dict
+    studies: tuple[Study, ...]
+    result: Result
 
-    @property
-    def governing_life_h(self) -> float:
-        """The system's life of the kind the verdict uses [h] (also without a target)."""
-        verdict = self.document.get("verdict")
-        if verdict is not None:
-            return life_h(verdict["life_h"])
-        return governing_life(self.document).of(self.document["system"])
+    @cached_property
+    def take(self):
+        return picker(self.result, len(self.studies), self.studies)
+
+    def point(self, index: int) -> Result:
+        """The result of point ``index`` of the chunk, as a check of it gives (findings too)."""
+        return with_findings(self.take(index))
 
 
 @dataclass(frozen=True)
 class Sweep:
+    """Every point of the grid (the first key varies slowest), evaluated in batches."""
+
     title: str
     source: str
     axes: tuple[Axis, ...]
-    points: tuple[SweepPoint, ...]
+    values: tuple[dict[str, float], ...]      # each point's values of the varied keys
+    chunks: tuple[SweepChunk, ...]
     target_life_h: float | None
     file_values: dict[str, float | None]
 
@@ -72,47 +74,57 @@ class Sweep:
         return tuple(len(axis.values) for axis in self.axes)
 
     @property
-    def governing_life_name(self) -> str:
-        return governing_life(self.points[0].document).name
+    def first(self) -> Result:
+        return self.chunks[0].point(0)
+
+    def points(self):
+        """Each point's result, in grid order (picked from its chunk when asked)."""
+        for chunk in self.chunks:
+            for index in range(len(chunk.studies)):
+                yield chunk.point(index)
+
+    def column(self, read: Callable[[Result], object]) -> np.ndarray:
+        """``read(batched result)`` of every chunk, joined: one value per point."""
+        return np.concatenate([np.broadcast_to(np.asarray(read(chunk.result), dtype=float),
+                                               (len(chunk.studies),))
+                               for chunk in self.chunks])
+
+    @property
+    def governing_life_h(self) -> np.ndarray:
+        return self.column(lambda r: r.governing.life_h)
+
+    @property
+    def targets_h(self) -> np.ndarray | None:
+        """The target life of each point (it may be a varied key); None without a target."""
+        if self.target_life_h is None:
+            return None
+        return self.column(lambda r: np.asarray(r.study.target_life_h, dtype=float)[..., 0])
 
     def crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
         """Target crossings along the last axis, for each value of the others.
 
         Works on life / target per point, so a varied target life is followed too.
         """
-        if self.points[0].document.get("verdict") is None:
+        targets = self.targets_h
+        if targets is None:
             return []
-        return self.crossings_of_one([ratio_to_target(p.document) for p in self.points])
+        return self.crossings_of_one(self.governing_life_h / targets)
 
     def shaft_crossings(self) -> list[tuple[dict[str, float], list[Crossing]]]:
         """Where the shaft's lowest safety crosses its required safety (when both are given)."""
-        ratios = [shaft_ratio(p.document) for p in self.points]
-        if any(ratio is None for ratio in ratios):
+        if self.first.lowest_shaft_safety is None:
             return []
-        return self.crossings_of_one(ratios)
+        lowest = self.column(lambda r: r.lowest_shaft_safety)
+        required = self.column(lambda r: r.shaft.required_safety)
+        return self.crossings_of_one(lowest / required)
 
-    def crossings_of_one(self, ratios: list[float]) -> list[tuple[dict[str, float],
-                                                                  list[Crossing]]]:
+    def crossings_of_one(self, ratios) -> list[tuple[dict[str, float], list[Crossing]]]:
         """Crossings of 1 by ``ratios`` (one per point) along the last axis, for each value
         of the other axes."""
-        grid = np.array(ratios, dtype=float).reshape(self.shape)
+        grid = np.asarray(ratios, dtype=float).reshape(self.shape)
         return [({axis.key: float(axis.values[i]) for axis, i in zip(self.axes, fixed)},
                  target_crossings(self.axes[-1].values, grid[fixed], 1.0))
                 for fixed in itertools.product(*(range(n) for n in self.shape[:-1]))]
-
-
-def shaft_ratio(document: dict) -> float | None:
-    """Lowest shaft safety / required safety of a point; None without both."""
-    lowest, required = shaft_min_safety(document), lookup(document, "shaft.required_safety")
-    if lowest is MISSING or not isinstance(required, (int, float)) or required <= 0:
-        return None
-    return math.inf if lowest is None else lowest / required
-
-
-def ratio_to_target(document: dict) -> float:
-    """Governing life / target life of a point (inf for an infinite life)."""
-    verdict = document["verdict"]
-    return life_h(verdict["life_h"]) / verdict["target_h"]
 
 
 def parse_vary(spec: str, document: dict, file: str) -> Axis:
@@ -172,23 +184,26 @@ def run_sweep(file: str, specs: Sequence[str],
         raise InputError(f"the grid has {total:,} points; at most {MAX_POINTS:,} are allowed",
                          file=file)
     grid = list(itertools.product(*(axis.values for axis in axes)))
-    points: list[SweepPoint] = []
-    for start in range(0, total, BATCH_POINTS):
-        chunk = [{axis.path: float(v) for axis, v in zip(axes, values)}
-                 for values in grid[start:start + BATCH_POINTS]]
+    chunks, values = [], []
+    for start, stop in chunk_bounds(total):
+        chunk = [{axis.path: float(v) for axis, v in zip(axes, point)}
+                 for point in grid[start:stop]]
         studies = variant_studies(document, chunk, file)
-        for values, result in zip(chunk, evaluate_many(studies)):
-            points.append(SweepPoint(values={path.text: int(v) if path.integer else v
-                                             for path, v in values.items()},
-                                     document=point_document(result)))
+        chunks.append(SweepChunk(tuple(studies),
+                                 evaluate(stack_studies(studies), with_findings=False)))
+        values += [{path.text: int(v) if path.integer else v for path, v in point.items()}
+                   for point in chunk]
         if on_progress is not None:
-            on_progress(len(points), total)
-    return Sweep(title=base.title, source=file, axes=axes, points=tuple(points),
-                 target_life_h=base.target_life_h,
+            on_progress(len(values), total)
+    return Sweep(title=base.title, source=file, axes=axes, values=tuple(values),
+                 chunks=tuple(chunks), target_life_h=base.target_life_h,
                  file_values={axis.key: current_value(document, axis.path) for axis in axes})
 
 
-def point_document(result: Result) -> dict:
-    """The check's JSON document of one point, without the keys that describe the file."""
-    document = result_document(result)
-    return {key: value for key, value in document.items() if key not in FILE_LEVEL_KEYS}
+def chunk_bounds(total: int) -> list[tuple[int, int]]:
+    """(start, stop) of each batch of points; never a batch of one point (a batched study
+    of one point cannot tell a point axis from a case axis of length one)."""
+    bounds = [(start, min(start + BATCH_POINTS, total)) for start in range(0, total, BATCH_POINTS)]
+    if len(bounds) > 1 and bounds[-1][1] - bounds[-1][0] == 1:
+        bounds[-2:] = [(bounds[-2][0], bounds[-2][1] - 1), (bounds[-2][1] - 1, total)]
+    return bounds

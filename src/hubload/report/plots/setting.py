@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import numpy as np
 from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
@@ -17,19 +18,16 @@ def setting_figure(sweep: SettingSweep) -> Figure:
     figure = new_figure(8.0, 5.0)
     axes = figure.subplots()
     x = sweep.settings_m / UM
-    result = sweep.result
-    modified = result.modified
-    for (label, bearing), colour in zip(result.bearings.items(), BEARING_COLOURS):
-        axes.plot(x, drawable(bearing.life_h, log_scale=True), color=colour, linewidth=1.4,
-                  linestyle="--" if modified is not None else "-", label=f"{label} L10r")
-        if modified is not None:
-            axes.plot(x, drawable(modified.bearings[label].life_h, log_scale=True),
-                      color=colour, linewidth=1.4, label=f"{label} {sweep.life_name}")
-    axes.plot(x, drawable(result.system_life_h, log_scale=True), color=SYSTEM_COLOUR,
-              linewidth=2.4, linestyle="--" if modified is not None else "-", label="pair L10r")
-    if modified is not None:
-        axes.plot(x, drawable(modified.system_life_h, log_scale=True), color=SYSTEM_COLOUR,
-                  linewidth=2.4, label=f"pair {sweep.life_name}")
+    refined = sweep.refined
+    for label, colour in zip(sweep.result.bearings, BEARING_COLOURS):
+        axes.plot(x, drawable(refined.bearing_life_h[label], log_scale=True), color=colour,
+                  linewidth=1.4, label=f"{label} {refined.symbol}")
+    axes.plot(x, drawable(sweep.refined_life_h, log_scale=True), color=SYSTEM_COLOUR,
+              linewidth=2.4, label=f"pair {refined.symbol}")
+    iso = sweep.result.governing.candidates[0]
+    axes.axhline(float(np.asarray(iso.system_life_h).flat[0]), color=SYSTEM_COLOUR,
+                 linewidth=1.2, linestyle="--",
+                 label=f"pair {iso.symbol}, ISO 281 rule (line-to-line)")
     if sweep.best is not None:
         axes.axvspan(sweep.best.low_m / UM, sweep.best.high_m / UM, color="#2ca02c", alpha=0.12,
                      label=BEST_RANGE_TEXT)

@@ -10,18 +10,11 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   drawable, new_figure, styled)
-from hubload.report.numbers import hours, life_h
-from hubload.report.series import all_series, lookup
+from hubload.report.numbers import hours
+from hubload.report.quantities import all_quantities
 from hubload.studies.sweep import Sweep
 
 SAFETY_GUIDE = 2.0  # s0 >= 2: common practice for roller bearings with shock loads
-
-
-def target_values(sweep: Sweep) -> np.ndarray | None:
-    verdicts = [p.document.get("verdict") for p in sweep.points]
-    if verdicts[0] is None:
-        return None
-    return np.array([v["target_h"] for v in verdicts], dtype=float)
 
 
 def line_style(series, bearing_index: dict[str, int]) -> dict:
@@ -38,8 +31,7 @@ def line_style(series, bearing_index: dict[str, int]) -> dict:
 def sweep_line_figure(sweep: Sweep) -> Figure:
     """Lives (log scale) and safeties against the one varied key, target and crossings drawn."""
     axis = sweep.axes[0]
-    documents = [p.document for p in sweep.points]
-    series = all_series(documents[0])
+    series = all_quantities(sweep.first)
     safety = [s for s in series if s.kind == "safety"]
     figure = new_figure(8.0, 7.0 if safety else 5.0)
     axes = figure.subplots(2 if safety else 1, 1, sharex=True, squeeze=False,
@@ -47,7 +39,7 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     lives_axes = axes[0]
     x = axis.values
     colours: dict[str, int] = {}
-    lives = [(item, drawable(item.values(documents), log_scale=True))
+    lives = [(item, drawable(sweep.column(item.of), log_scale=True))
              for item in series if item.kind == "life"]
     lives = [(item, values) for item, values in lives if not np.all(np.isnan(values))]
     for item, values in lives:
@@ -55,10 +47,10 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     if not lives:
         lives_axes.text(0.5, 0.5, "every life infinite (or zero) over the sweep",
                         transform=lives_axes.transAxes, ha="center", va="center")
-    targets = target_values(sweep)
+    targets = sweep.targets_h
     if targets is not None:
         lives_axes.plot(x, targets, color=TARGET_COLOUR, linestyle=":", linewidth=2,
-                        label=f"target ({sweep.governing_life_name})")
+                        label=f"target ({sweep.first.governing.symbol})")
         mark_crossings(lives_axes, sweep, targets)
     mark_file_value(axes, sweep)
     lives_axes.set_yscale("log")
@@ -66,7 +58,7 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     lives_axes.set_title(f"{sweep.title}\nlives against {axis.key}", loc="left")
     lives_axes.legend(fontsize=7, loc="best")
     if safety:
-        plot_safeties(axes[1], x, documents, safety, colours)
+        plot_safeties(axes[1], x, sweep, safety, colours)
     axes[-1].set_xlabel(axis.key)
     add_caution(figure)
     return figure
@@ -94,14 +86,15 @@ def mark_file_value(axes, sweep: Sweep) -> None:
                      color="#555555", xytext=(3, -10), textcoords="offset points")
 
 
-def plot_safeties(axes, x, documents, safety, colours) -> None:
+def plot_safeties(axes, x, sweep: Sweep, safety, colours) -> None:
     for item in safety:
-        values = drawable(item.values(documents))
+        values = drawable(sweep.column(item.of))
         style = {"color": SYSTEM_COLOUR, "linewidth": 2} if item.label.startswith("shaft") \
             else line_style(item, colours)
         axes.plot(x, values, label=item.label, **{**style, "linestyle": "-"})
-    required = lookup(documents[0], "shaft.required_safety")
-    if isinstance(required, (int, float)):
+    shaft = sweep.first.shaft
+    if shaft is not None:
+        required = float(shaft.required_safety)
         axes.axhline(required, color=SYSTEM_COLOUR, linewidth=1, linestyle=":",
                      label=f"shaft required safety {required:g}")
     axes.axhline(1.0, color=TARGET_COLOUR, linewidth=1.2, label="1 (limit)")
@@ -116,12 +109,11 @@ def plot_safeties(axes, x, documents, safety, colours) -> None:
 def sweep_contour_figure(sweep: Sweep) -> Figure:
     """Map of the governing system life over two keys, with the target contour."""
     rows, columns = sweep.axes[0], sweep.axes[1]
-    lives = np.array([life_h(p.governing_life_h) for p in sweep.points],
-                     dtype=float).reshape(sweep.shape)
+    lives = sweep.governing_life_h.reshape(sweep.shape)
     drawn = lives[np.isfinite(lives) & (lives > 0)]  # a log scale: zero lives below the lowest
     figure = new_figure(8.0, 6.0)
     axes = figure.subplots()
-    name = sweep.governing_life_name
+    name = sweep.first.governing.symbol
     if drawn.size:
         low, high = drawn.min(), drawn.max()
         shown = np.clip(np.where(np.isfinite(lives), lives, high), low, high)
@@ -166,14 +158,14 @@ def hours_label(value: float, _position=None) -> str:
 
 
 def draw_target_contour(axes, sweep: Sweep, lives: np.ndarray) -> None:
-    targets = target_values(sweep)
+    targets = sweep.targets_h
     if targets is None:
         return
     ratio = lives / targets.reshape(sweep.shape)
     if np.nanmin(ratio) < 1 < np.nanmax(ratio):
         contour = axes.contour(sweep.axes[1].values, sweep.axes[0].values, np.log(ratio),
                                levels=[0.0], colors=TARGET_COLOUR, linewidths=2.2)
-        axes.clabel(contour, fmt={0.0: f"target {sweep.governing_life_name}"}, fontsize=8)
+        axes.clabel(contour, fmt={0.0: f"target {sweep.first.governing.symbol}"}, fontsize=8)
 
 
 def mark_file_point(axes, sweep: Sweep) -> None:

@@ -9,9 +9,9 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.engine import Result
-from hubload.units import CELSIUS_ZERO_K
+from hubload.engine.governing import symbol_of
 from hubload.report.numbers import json_number, json_rows
-from hubload.units import CST, KN, MM
+from hubload.units import CELSIUS_ZERO_K, CST, KN, MM
 
 
 
@@ -65,5 +65,5 @@ def lubrication_entry(result: Result) -> dict:
         "contamination_note": modified.contamination_note,
         "viscosity_40C_cSt": json_number(lubrication.viscosity_40c_m2_s / CST),
         "viscosity_100C_cSt": json_number(lubrication.viscosity_100c_m2_s / CST),
-        "life_symbol": modified.symbol,
+        "life_symbol": symbol_of(result.method, float(result.study.reliability_percent), True),
     }

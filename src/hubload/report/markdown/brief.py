@@ -6,7 +6,7 @@ import numpy as np
 
 from hubload.report import numbers
 from hubload.report.cautions import CAUTIONS
-from hubload.report.series import MISSING, lookup, shaft_min_safety
+from hubload.report.messages import warning_texts
 from hubload.studies.requirements import BearingNeeds, Requirements, Solve
 from hubload.units import KN, MM
 
@@ -17,7 +17,7 @@ def kn(newtons: float) -> str:
 
 
 def life_label(needs: Requirements) -> str:
-    return needs.life.name
+    return needs.result.governing.symbol
 
 
 def rating(solve: Solve, bearing: BearingNeeds) -> str:
@@ -60,7 +60,7 @@ def duty_section(needs: Requirements) -> list[str]:
     if needs.speed_max is not None:
         rows.append(("speed range", f"{speed_text(needs, needs.speed_min.value)} to "
                                     f"{speed_text(needs, needs.speed_max.value)}"))
-    mean = needs.document["mean_speed_rpm"] or 0.0
+    mean = float(needs.result.mean_speed_rpm)
     rows.append(("mean speed (time-weighted)", speed_text(needs, mean)))
     rows.append(("standstill", f"{100 * needs.standstill_share:.1f} % of the time "
                                "(static loads only)"))
@@ -73,7 +73,7 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
         return [text(b) for b in needs.bearings]
 
     life = life_label(needs)
-    mean = needs.document["mean_speed_rpm"] or 0.0
+    mean = float(needs.result.mean_speed_rpm)
     s0 = f"{needs.required_s0:g}"
     return [
         ("bearing", each(lambda b: b.name)),
@@ -82,6 +82,7 @@ def bearing_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
         (f"equivalent load of the spectrum Pm at the mean speed {mean:.1f} r/min",
          each(lambda b: kn(b.equivalent_load_n))),
         (f"{life} now", each(lambda b: numbers.hours_with_unit(b.life_h))),
+        *iso281_rows(needs),
         ("dynamic rating C given", each(lambda b: kn(b.dynamic_rating_n))),
         *((("C from the internal geometry", each(lambda b: kn(b.geometry_rating_n))),)
           if all(b.geometry_rating_n is not None for b in needs.bearings) else ()),
@@ -110,11 +111,22 @@ def bearing_section(needs: Requirements) -> list[str]:
               "closed form C (L_target / L)^(1/p) when the engine confirms it (p = 10/3 for "
               "ISO 281 lives; p = 4 for the refined method's ISO/TS 16281 lives, on the "
               "rating from the geometry), else a root search (brentq).", ""]
-    shaft = shaft_min_safety(needs.document)
-    if shaft is not MISSING:
+    shaft = needs.result.lowest_shaft_safety
+    if shaft is not None:
         lines += [f"Shaft: lowest fatigue safety factor over its sections "
                   f"{numbers.safety(shaft)} (see `hubload check`).", ""]
     return lines
+
+
+def iso281_rows(needs: Requirements) -> list[tuple[str, list[str]]]:
+    """With the refined method: the ISO 281 rule's lives beside the refined ones."""
+    lives = needs.result.iso281
+    if lives is None:
+        return []
+    governing = needs.result.governing
+    iso = governing.candidates[0]
+    return [(f"{iso.symbol} by the ISO 281 rule (beside the refined {governing.candidates[1].symbol})",
+             [numbers.hours_with_unit(iso.bearing_life_h[b.label]) for b in needs.bearings])]
 
 
 def moment_section(needs: Requirements) -> list[str]:
@@ -129,12 +141,13 @@ def moment_section(needs: Requirements) -> list[str]:
 
 def torque_lines(needs: Requirements) -> list[str]:
     """The largest drive torque of the motor, where the check derives it (operating points)."""
-    torques = [(abs(case["torque_Nm"]), case["name"]) for case in needs.document["cases"]
-               if isinstance(case.get("torque_Nm"), (int, float))]
-    if not torques:
+    points = needs.study.cases.operating
+    torque = np.abs(np.nan_to_num(points.torque_nm, nan=0.0)) if points is not None else None
+    if torque is None or not np.any(torque > 0):
         return []
-    value, case = max(torques)
-    return [f"Largest drive torque at the wheel: {value / KN:,.2f} kN m in case '{case}'.", ""]
+    index = int(np.argmax(torque))
+    return [f"Largest drive torque at the wheel: {torque[index] / KN:,.2f} kN m in case "
+            f"'{needs.study.cases.names[index]}'.", ""]
 
 
 def lubrication_section(needs: Requirements, inputs: dict) -> list[str]:
@@ -143,7 +156,7 @@ def lubrication_section(needs: Requirements, inputs: dict) -> list[str]:
     if isinstance(given, dict):
         lines.append("As given in the file's [lubrication] table: " + ", ".join(
             f"{key} = {value}" for key, value in given.items()) + ".")
-        kappa = lowest_kappa(needs.document)
+        kappa = lowest_kappa(needs)
         if kappa is not None:
             value, case, label, outside = kappa
             lines.append(f"Lowest viscosity ratio: kappa = {value:.3g} ({label} bearing, "
@@ -156,10 +169,15 @@ def lubrication_section(needs: Requirements, inputs: dict) -> list[str]:
     return [*lines, ""]
 
 
-def lowest_kappa(document: dict):
-    found = [(entry["kappa"], case["name"], label, bool(entry.get("kappa_outside_scope")))
-             for case in document["cases"] for label, entry in case["bearings"].items()
-             if isinstance(entry.get("kappa"), (int, float))]
+def lowest_kappa(needs: Requirements):
+    """(kappa, case name, bearing label, outside ISO 281's scope) of the lowest kappa."""
+    modified = needs.result.modified
+    if modified is None:
+        return None
+    names = needs.study.cases.names
+    found = [(float(b.kappa[i]), names[i], label, bool(b.kappa_outside_scope[i]))
+             for label, b in modified.bearings.items() for i in range(len(names))
+             if np.isfinite(b.kappa[i])]
     return min(found) if found else None
 
 
@@ -171,7 +189,7 @@ def questions(needs: Requirements) -> list[str]:
     axial = worst(needs.bearings, lambda b: b.max_axial.value)
     items = []
     if needs.speed_min is not None:
-        kappa = lowest_kappa(needs.document)
+        kappa = lowest_kappa(needs)
         film = "" if kappa is None else f"; kappa = {kappa[0]:.3g} ({kappa[2]}, '{kappa[1]}')"
         slow = needs.speed_min
         items.append(("Low-speed lubrication", f"lowest speed {speed_text(needs, slow.value)} "
@@ -184,9 +202,10 @@ def questions(needs: Requirements) -> list[str]:
                   f"{setting_assumption(needs)} Which end play or preload do you set at "
                   "assembly, with which tolerance, and how does the life change over that "
                   "range?"))
-    utilisation = max((c.get("permissible_utilisation") for c in needs.document["cases"]
-                       if isinstance(c.get("permissible_utilisation"), (int, float))),
-                      default=None)
+    shaft = needs.result.shaft
+    permissible = None if shaft is None else shaft.permissible
+    utilisation = float(np.nanmax(permissible.utilisation)) \
+        if permissible is not None and bool(permissible.inside) else None
     used = "" if utilisation is None else f"; {100 * utilisation:.0f} % of the curve in the file"
     items.append(("Permissible load curve", f"wheel moment {needs.moment.value / KN:,.2f} kN m at "
                   f"the mounting face in '{needs.moment.case}', wheel offset "
@@ -224,7 +243,7 @@ def rating_questions(needs: Requirements) -> list[tuple[str, str, str]]:
 def brief_markdown(needs: Requirements, inputs: dict) -> str:
     """The whole sheet; ``inputs`` is the file's parsed TOML (for the tables it quotes)."""
     lines = [f"# Supplier brief: {needs.study.title}", "",
-             f"From `{needs.study.source}` by hubload ({needs.document.get('method', 'iso281')} "
+             f"From `{needs.study.source}` by hubload ({needs.result.method} "
              f"method). Loads are those of the ground on the tyre on this wheel; signs as in "
              "hubload's docs/conventions.md.", "",
              f"> **Caution.** {CAUTIONS} This sheet is an input to the supplier's own "
@@ -232,8 +251,8 @@ def brief_markdown(needs: Requirements, inputs: dict) -> str:
     lines += duty_section(needs) + bearing_section(needs) + moment_section(needs)
     lines += lubrication_section(needs, inputs)
     lines += ["## 5. Open questions for the supplier", "", *questions(needs), ""]
-    warnings = lookup(needs.document, "warnings")
-    if warnings and warnings is not MISSING:
+    warnings = warning_texts(needs.result.findings, needs.study.cases.names)
+    if warnings:
         lines += ["## 6. Warnings from the check", "", *(f"- {w}" for w in warnings), ""]
     lines += ["## Cautions", "", CAUTIONS, ""]
     return "\n".join(lines)

@@ -9,7 +9,6 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.engine import Result
-from hubload.engine.overall import overall_verdict
 from hubload.report.numbers import json_number, json_rows
 from hubload.units import KN, MM, MPA
 
@@ -99,20 +98,17 @@ def extend_cases(document: dict, result: Result) -> None:
             entry["shaft"] = {name: rows[index] for name, rows in sections.items()}
 
 
-def optional_number(value) -> float | None:
-    return None if value is None else json_number(value)
-
-
 def verdict_summary(result: Result) -> dict | None:
-    found = overall_verdict(result)
+    found = result.overall
     if found is None:
         return None
-    items = [{"item": item.name, "value": optional_number(item.value), "limit": item.limit,
-              "load_margin": optional_number(item.margin), "passed": item.passed,
-              "unit": item.unit, "at_most": item.at_most}
+    items = [{"item": item.name, "value": json_number(item.value),
+              "limit": json_number(item.limit),
+              "load_margin": json_number(item.margin), "passed": bool(item.passed),
+              "unit": item.unit, "at_most": item.at_most, "kind": item.kind}
              for item in found.items]
-    worst = found.items.index(found.worst)
-    return {"passed": found.passed, "worst": items[worst], "items": items}
+    return {"passed": bool(found.passed), "worst": items[int(found.worst_index)],
+            "items": items}
 
 
 def extend_document(document: dict, result: Result) -> None:

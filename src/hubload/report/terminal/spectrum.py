@@ -6,12 +6,15 @@ from pathlib import Path
 
 import numpy as np
 from rich.console import Console
-from rich.table import Table
 from rich.markup import escape
+from rich.table import Table
+from rich.text import Text
 
+from hubload.engine.governing import symbol_of
 from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
 from hubload.report.cautions import CAUTIONS
+from hubload.report.messages import warning_texts
 from hubload.report.numbers import hours, safety, share
 from hubload.units import KN
 
@@ -23,7 +26,8 @@ def lives_table(result: SpectrumResult) -> Table:
     table = Table(title="Lives: direct (every sample) and classed spectrum", title_justify="left")
     headings = ["bearing", "direct L10 h", "classed L10 h"]
     if modified is not None:
-        headings += [f"direct {modified.symbol} h", f"classed {modified.symbol} h"]
+        symbol = symbol_of("iso281", float(result.classed.study.reliability_percent), True)
+        headings += [f"direct {symbol} h", f"classed {symbol} h"]
     for heading in headings + ["log damage", "s0 at peak"]:
         table.add_column(heading, justify="left" if heading == "bearing" else "right")
     for label in LABELS:
@@ -66,10 +70,10 @@ def shares_table(result: SpectrumResult, key: str, title: str, unit: str) -> Tab
 
 def top_cases_table(result: SpectrumResult) -> Table:
     cases = result.classed.study.cases
-    shares = result.classed.system_damage_share
+    shares = result.classed.governing.system_damage_share
     order = np.argsort(-shares)[:TOP_CASES]
-    table = Table(title=f"Classed spectrum: {len(cases)} cases; the {len(order)} most damaging",
-                  title_justify="left")
+    table = Table(title=f"Classed spectrum: {len(cases)} cases; the {len(order)} most damaging "
+                        f"({result.classed.governing.symbol})", title_justify="left")
     for heading, justify in (("class", "left"), ("time", "right"), ("W kN", "right"),
                              ("S kN", "right"), ("T kN", "right"), ("n r/min", "right"),
                              ("damage", "right")):
@@ -103,7 +107,7 @@ def error_line(result: SpectrumResult) -> str:
     line = f"Classing error (classed vs direct system life): {100 * result.classing_error:+.2f} %"
     if result.modified_classing_error is not None:
         line += (f" for L10, {100 * result.modified_classing_error:+.2f} % for "
-                 f"{result.classed.modified.symbol}")
+                 f"{result.direct_governing.symbol}")
     return line
 
 
@@ -121,20 +125,23 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
     console.print(top_cases_table(result))
     if spectrum_file:
         console.print(f"Spectrum written to {spectrum_file} (hubload check runs on it).")
-    for warning in result.warnings:
-        console.print(f"[yellow]Warning:[/] {escape(warning)}")
+    console.print(Text(f"Governing life (direct): {result.direct_governing.symbol} = "
+                       f"{hours(result.governing_life_h)} h ({result.direct_governing.basis})."))
+    for warning in warning_texts(result.findings, ()):
+        console.print(Text.assemble(("Warning:", "yellow"), f" {warning}"))
 
 
 def ranking_table(ranking: list[dict]) -> Table:
-    table = Table(title="Logs from harshest to mildest (pair damage per hour)",
+    symbol = ranking[0]["governing_life"]["symbol"] if ranking else "L10"
+    table = Table(title=f"Logs from harshest to mildest (pair damage per hour, {symbol})",
                   title_justify="left")
-    for heading, justify in (("log", "left"), ("hours", "right"), ("system L10 h", "right"),
+    for heading, justify in (("log", "left"), ("hours", "right"), (f"system {symbol} h", "right"),
                              ("vs fleet", "right")):
         table.add_column(heading, justify=justify)
     for row in ranking:
         relative = row["relative_to_fleet"]
         table.add_row(escape(Path(row["log"]).name), f"{row['duration_h'] or 0:,.2f}",
-                      hours(row["system_l10_h"]),
+                      hours(row["governing_life"]["life_h"]),
                       "" if relative is None else f"{relative:.2f} x")
     return table
 

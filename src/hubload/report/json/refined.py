@@ -22,7 +22,6 @@ def add_refined(document: dict, result: Result) -> dict:
             "c_from_geometry_kN": json_number(rated.dynamic_n / KN),
             "c0_from_geometry_kN": json_number(rated.static_n / KN)})
     refined = result.refined
-    document["method"] = "iso281" if refined is None else "refined"
     if refined is None:
         return document
     pair = result.study.pair

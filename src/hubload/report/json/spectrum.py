@@ -12,6 +12,8 @@ from dataclasses import asdict
 from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.cautions import CAUTIONS
+from hubload.report.json.check import governing_entry
+from hubload.report.messages import warning_texts
 from hubload.report.numbers import json_number
 from hubload.units import KN
 
@@ -33,7 +35,11 @@ def modified(lives: dict | None, label: str) -> dict:
 def direct_entry(result: SpectrumResult) -> dict:
     lives = result.modified_life_h
     system = None if lives is None else {"system": result.modified_system_life_h}
+    governing = result.direct_governing
     return {
+        "governing_life": {"symbol": governing.symbol, "life_h": json_number(governing.life_h),
+                           "basis": governing.basis, "method": governing.method,
+                           "reliability_percent": governing.choice.reliability},
         "bearings": {label: {"l10_h": json_number(result.life_h[label]),
                              **modified(lives, label),
                              "damage": json_number(result.damage[label]),
@@ -71,6 +77,7 @@ def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
         "system": classed.modified.system_life_h,
         **{label: b.life_h for label, b in classed.modified.bearings.items()}}
     return {
+        "governing_life": governing_entry(classed),
         "system": {"l10_h": json_number(classed.system_life_h), **modified(lives, "system")},
         "bearings": {label: {"l10_h": json_number(classed.bearings[label].life_h),
                              **modified(lives, label)} for label in LABELS},
@@ -87,6 +94,7 @@ def classed_entry(result: SpectrumResult, spectrum_file: str | None) -> dict:
             "speed_rpm": json_number(cases.speed_rpm[i]),
             **({} if temperatures is None else {"temperature_C": json_number(temperatures[i])}),
             "system_damage_share": json_number(classed.system_damage_share[i]),
+            "governing_damage_share": json_number(classed.governing.system_damage_share[i]),
         } for i, name in enumerate(cases.names)],
     }
 
@@ -112,7 +120,7 @@ def log_document(result: SpectrumResult, policy: str, spectrum_file: str | None)
                                 if summary.duration_h > 0 else None
                                 for flag, seconds in summary.flag_time_s.items()},
         "notes": list(summary.cleaning.notes),
-        "warnings": list(result.warnings),
+        "warnings": warning_texts(result.findings, ()),
     }
 
 
@@ -123,10 +131,13 @@ def single_document(result: SpectrumResult, policy: str, spectrum_file: str | No
 
 
 def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dict]:
-    """Logs from harshest to mildest: the pair's damage per hour against the fleet's."""
+    """Logs from harshest to mildest: the pair's damage per hour on the governing basis (the
+    direct life the verdict judges), against the fleet's."""
     fleet_rate = damage_rate(combined)
     rows = [{"log": r.summary.name, "duration_h": json_number(r.summary.duration_h),
              "system_l10_h": json_number(r.system_life_h),
+             "governing_life": {"symbol": r.direct_governing.symbol,
+                                "life_h": json_number(r.governing_life_h)},
              "damage_per_hour": json_number(damage_rate(r)),
              "relative_to_fleet": (json_number(damage_rate(r) / fleet_rate) if fleet_rate > 0
                                    else None)}
@@ -135,8 +146,8 @@ def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dic
 
 
 def damage_rate(result: SpectrumResult) -> float:
-    """The pair's damage per hour (1 / system life), 0 for an infinite life."""
-    life = result.system_life_h
+    """The pair's damage per hour on the governing basis (1 / life), 0 for an infinite life."""
+    life = result.governing_life_h
     return 1.0 / life if 0 < life < float("inf") else 0.0
 
 

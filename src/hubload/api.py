@@ -1,0 +1,159 @@
+"""The Python API: every command as a plain function that returns a typed result.
+
+``hubload.check(path)`` gives what ``hubload check`` prints, as an object: its
+``governing_life`` is the life every output judges, ``to_dict()`` is the document
+of ``--json``. The command-line interface calls these functions and hands their
+results to the report layer; a notebook calls them directly. Nothing here prints.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+from dataclasses import dataclass
+from pathlib import Path
+
+from hubload.domain.study import Study
+from hubload.engine import Result
+from hubload.errors import InputError
+
+
+def load(path: str | Path, method: str | None = None) -> Study:
+    """The study of a load-case file (SI units), computed by ``method`` when given.
+
+    ``method`` ("iso281" or "refined") overrides the file's ``[project] method``.
+    Bad input raises :class:`hubload.errors.InputError` naming the file and key.
+    """
+    from hubload.casefile import load_study
+    from hubload.casefile.geometry import with_method
+
+    study = load_study(path)
+    try:
+        return with_method(study, method)
+    except InputError as error:
+        raise error.located(str(path)) from None
+
+
+def as_study(study_or_path: Study | str | Path, method: str | None = None) -> Study:
+    if isinstance(study_or_path, Study):
+        from hubload.casefile.geometry import with_method
+
+        return with_method(study_or_path, method)
+    return load(study_or_path, method)
+
+
+class Wrapped:
+    """A typed result with the outputs of its command: attributes pass through to it."""
+
+    def __getattr__(self, name: str):
+        return getattr(object.__getattribute__(self, "value"), name)
+
+
+@dataclass(frozen=True)
+class CheckResult(Wrapped):
+    """The result of a check: the engine's typed result, its governing life, its JSON."""
+
+    value: Result
+
+    @property
+    def governing_life(self):
+        return self.value.governing
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload check --json``."""
+        from hubload.report.json.check import result_document
+
+        return result_document(self.value)
+
+
+def check(study_or_path: Study | str | Path, method: str | None = None) -> CheckResult:
+    """Loads, lives, governing life, damage shares, static safety, shaft and verdict."""
+    from hubload.engine import evaluate
+
+    return CheckResult(evaluate(as_study(study_or_path, method)))
+
+
+@dataclass(frozen=True)
+class SweepResult(Wrapped):
+    value: object      # hubload.studies.sweep.Sweep
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload sweep --json``."""
+        from hubload.report.json.sweep import sweep_document
+
+        return sweep_document(self.value)
+
+
+def sweep(path: str | Path, vary: Sequence[str], method: str | None = None,
+          on_progress=None) -> SweepResult:
+    """The file's lives over the grid of ``vary`` specs (``"wheel.offset_mm=40:200:17"``)."""
+    from hubload.studies.sweep import run_sweep
+
+    return SweepResult(run_sweep(str(path), tuple(vary), on_progress=on_progress,
+                                 method=method))
+
+
+@dataclass(frozen=True)
+class ComparisonResult(Wrapped):
+    value: object      # hubload.studies.compare.Comparison
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload compare --json``."""
+        from hubload.report.json.compare import compare_document
+
+        return compare_document(self.value)
+
+
+def compare(studies_or_paths: Sequence[Study | str | Path],
+            method: str | None = None) -> ComparisonResult:
+    """Several files (or studies) side by side, the first as the reference."""
+    from hubload.studies.compare import run_compare
+
+    return ComparisonResult(run_compare([as_study(s, method) for s in studies_or_paths]))
+
+
+@dataclass(frozen=True)
+class SettingResult(Wrapped):
+    value: object      # hubload.studies.setting.SettingSweep
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload setting --json``."""
+        from hubload.report.json.setting import sweep_document
+
+        return sweep_document(self.value)
+
+
+def setting(study_or_path: Study | str | Path, start_um: float = -60.0,
+            stop_um: float = 120.0, step_um: float = 5.0) -> SettingResult:
+    """Lives against the axial setting from ``start_um`` to ``stop_um`` (refined method)."""
+    from hubload.studies.setting import run_setting_sweep, setting_values_um
+
+    settings = setting_values_um(start_um, stop_um, step_um)
+    return SettingResult(run_setting_sweep(as_study(study_or_path, "refined"), settings))
+
+
+@dataclass(frozen=True)
+class BriefResult(Wrapped):
+    value: object      # hubload.studies.requirements.Requirements
+    inputs: dict
+
+    def to_markdown(self) -> str:
+        """The supplier brief as ``hubload brief`` writes it."""
+        from hubload.report.markdown.brief import brief_markdown
+
+        return brief_markdown(self.value, self.inputs)
+
+
+def brief(path: str | Path, required_s0: float | None = None,
+          method: str | None = None) -> BriefResult:
+    """The numbers of a supplier brief: required ratings, loads, open questions."""
+    import math
+
+    from hubload.casefile.load import read_document
+    from hubload.engine.findings import STATIC_SAFETY_WARNING
+    from hubload.studies.requirements import requirements_of
+
+    required_s0 = STATIC_SAFETY_WARNING if required_s0 is None else required_s0
+    if not (required_s0 > 0 and math.isfinite(required_s0)):
+        raise InputError(f"expected a positive required static safety s0, got {required_s0:g}",
+                         key_path="required_s0")
+    return BriefResult(requirements_of(load(path, method), required_s0), read_document(path))

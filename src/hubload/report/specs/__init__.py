@@ -1,0 +1,1 @@
+"""Table specifications of each command (shared by terminal, HTML and spreadsheets)."""

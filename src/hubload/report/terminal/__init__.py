@@ -1,0 +1,1 @@
+"""Terminal output (rich): one module per command, and the renderer of table specs."""

@@ -1,0 +1,89 @@
+"""Table specs on the terminal: never a cut number or name, whatever the width.
+
+Numbers never wrap: a column of numbers is as wide as its widest cell. Names may
+wrap. A table wider than the terminal is split into several, each repeating the
+leading (identifying) columns. Text from files (titles, names) goes out as rich
+Text with control characters removed, never as markup.
+"""
+
+from __future__ import annotations
+
+import io
+import re
+
+from rich import box
+from rich.console import Console
+from rich.table import Table
+from rich.text import Text
+
+from hubload.report.columns import Column, TableSpec
+
+CONTROL = re.compile(r"[\x00-\x08\x0b-\x1f\x7f-\x9f]")
+NAME_MIN_WIDTH = 12
+
+
+def plain(text: str) -> str:
+    """User text for the terminal: control characters (escape sequences) removed."""
+    return CONTROL.sub("", str(text))
+
+
+def heading(column: Column) -> Text:
+    return Text(column.label + (f"\n{column.unit}" if column.unit else ""))
+
+
+def rich_table(spec: TableSpec, columns: list[Column], title: str) -> Table:
+    table = Table(title=Text(plain(title)), title_justify="left", box=box.SIMPLE_HEAD,
+                  pad_edge=False, show_edge=False)
+    for column in columns:
+        if column.name:
+            table.add_column(heading(column), justify="left", overflow="fold",
+                             min_width=min(NAME_MIN_WIDTH, max(
+                                 (len(column.cell(r)) for r in range(spec.row_count)),
+                                 default=1)))
+        else:
+            width = max([len(column.cell(r)) for r in range(spec.row_count)]
+                        + [len(line) for line in heading(column).plain.split("\n")])
+            table.add_column(heading(column), justify="right", no_wrap=True, min_width=width)
+    for row in range(spec.row_count):
+        table.add_row(*(Text(plain(c.cell(row)), style="bold red" if c.alerted(row) else "")
+                        for c in columns))
+    return table
+
+
+def fits(console: Console, table: Table) -> bool:
+    """Whether ``table`` fits without cutting a number (rich clamps a measurement to the
+    console's width, so the natural width is measured on an unbounded console)."""
+    unbounded = Console(width=100_000, file=io.StringIO())
+    return unbounded.measure(table).minimum <= console.width
+
+
+def column_groups(spec: TableSpec, console: Console) -> list[list[Column]]:
+    """The columns in groups that each fit the console, the leading ones in every group."""
+    lead, rest = list(spec.columns[:spec.keep_first]), list(spec.columns[spec.keep_first:])
+    groups: list[list[Column]] = []
+    current: list[Column] = []
+    for column in rest:
+        trial = lead + current + [column]
+        if current and not fits(console, rich_table(spec, trial, "")):
+            groups.append(lead + current)
+            current = [column]
+        else:
+            current.append(column)
+    groups.append(lead + current)
+    return groups
+
+
+def render(spec: TableSpec, console: Console) -> None:
+    """Print ``spec`` (split to fit), then what was left out, its legend and its notes."""
+    groups = column_groups(spec, console)
+    for index, group in enumerate(groups):
+        title = spec.title if index == 0 else f"{spec.title} (continued)"
+        console.print(rich_table(spec, group, title))
+    for line in ([spec.omitted_note] if spec.omitted_note else []) + legend_lines(spec) \
+            + list(spec.notes):
+        console.print(Text(plain(line)))
+
+
+def legend_lines(spec: TableSpec) -> list[str]:
+    legend = spec.legend()
+    return ["; ".join(legend) + "."] if legend else []
