@@ -157,3 +157,32 @@ def brief(path: str | Path, required_s0: float | None = None,
         raise InputError(f"expected a positive required static safety s0, got {required_s0:g}",
                          key_path="required_s0")
     return BriefResult(requirements_of(load(path, method), required_s0), read_document(path))
+
+
+@dataclass(frozen=True)
+class LogsResult(Wrapped):
+    value: object      # hubload.logs.analysis.LogRun
+    files: dict        # the spectrum file written for each log, where one was
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload spectrum --json``."""
+        from hubload.report.json.spectrum import fleet_document, single_document
+
+        run = self.value
+        if run.combined is not None:
+            return fleet_document(run, run.options.gaps, self.files)
+        return single_document(run.single, run.options.gaps,
+                               self.files.get(run.single.summary.name), run.case_file)
+
+
+def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = (),
+             classes: Sequence[str] = (), gaps: str = "error", max_gap_s: float | None = None,
+             jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
+             on_log_done=None) -> LogsResult:
+    """The direct lives and the classed spectrum of a measured log, or of a folder of logs
+    (each log, the fleet combined, the ranking); ``case_file`` describes the wheel end."""
+    from hubload.logs.analysis import analyse, log_options
+
+    options = log_options(columns, classes, gaps, max_gap_s)
+    return LogsResult(analyse(log, case_file, options, jobs=jobs, cluster=cluster,
+                                  skip_bad=skip_bad, on_log_done=on_log_done), {})

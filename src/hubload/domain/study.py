@@ -11,7 +11,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.domain.operating import Motor, OperatingPoints, Vehicle
-from hubload.schema.fileformat import DEFAULT_ADHESION_MU
+from hubload.model.operating import DEFAULT_ADHESION_MU
 
 ArrayLike = float | np.ndarray
 

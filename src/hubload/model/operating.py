@@ -42,6 +42,9 @@ import numpy as np
 from hubload.units import SECONDS_PER_MINUTE
 
 TWO_PI = 2.0 * np.pi
+# Tyre-ground adhesion coefficient of pneumatic tyres on dry ground (common practice; Wong [4]
+# tabulates 0.6-0.9 for dry earth and gravel roads, from memory): the default cap of a force.
+DEFAULT_ADHESION_MU = 0.6
 
 
 def effective_displacement_m3(displacement_m3, half_mode):

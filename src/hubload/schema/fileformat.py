@@ -10,13 +10,13 @@ from hubload.model.lubrication import (CONTAMINATION_LEVELS, GREASE_CLEANLINESS,
                                        RELIABILITY_MAX_PERCENT, RELIABILITY_MIN_PERCENT)
 from hubload.model.shaft.strength import SURFACES
 from hubload.model.shaft.stress import CRITERIA
+from hubload.model.operating import DEFAULT_ADHESION_MU
 from hubload.model.tapered_pair import ARRANGEMENTS
 from hubload.schema.spec import Choice, Field, Table
 
 # Choices and limits the model's tables define are taken from them, so that the validator
 # can never let through a value the model has no entry for.
 
-DEFAULT_ADHESION_MU = 0.6
 VERDICT_BASES = ("shorter", "iso281", "refined")
 TIME_SUM_TOLERANCE_PERCENT = 0.5
 

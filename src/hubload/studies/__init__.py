@@ -1,5 +1,6 @@
-"""Studies on top of the engine: parameter sweeps, comparisons of files, supplier requirements.
+"""Studies on top of the engine: parameter sweeps, comparisons of files, the bearing setting,
+supplier requirements.
 
-Each builds engine Results (batched where the studies share their structure)
-and the check's JSON documents of them; ``hubload.report`` renders them.
+Each builds typed engine results (batched where the studies share their structure);
+``hubload.report`` renders them.
 """

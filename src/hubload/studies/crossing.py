@@ -7,7 +7,6 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from hubload.report.numbers import life_h
 
 
 @dataclass(frozen=True)
@@ -30,7 +29,7 @@ def target_crossings(values, lives_h, target_h: float) -> list[Crossing]:
     other point and marked as not interpolated. Missing lives (NaN) break the curve.
     """
     x = np.asarray(values, dtype=float)
-    life = np.array([life_h(v) for v in lives_h], dtype=float)
+    life = np.array([math.inf if v is None else v for v in lives_h], dtype=float)
     crossings = []
     for i in range(len(x) - 1):
         a, b = life[i], life[i + 1]

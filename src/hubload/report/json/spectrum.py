@@ -9,6 +9,7 @@ from __future__ import annotations
 
 from dataclasses import asdict
 
+from hubload.logs.analysis import LogRun
 from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.cautions import CAUTIONS
@@ -130,36 +131,28 @@ def single_document(result: SpectrumResult, policy: str, spectrum_file: str | No
             "cautions": CAUTIONS}
 
 
-def ranking(results: list[SpectrumResult], combined: SpectrumResult) -> list[dict]:
+def ranking_entries(run: LogRun) -> list[dict]:
     """Logs from harshest to mildest: the pair's damage per hour on the governing basis (the
     direct life the verdict judges), against the fleet's."""
-    fleet_rate = damage_rate(combined)
-    rows = [{"log": r.summary.name, "duration_h": json_number(r.summary.duration_h),
-             "system_l10_h": json_number(r.system_life_h),
-             "governing_life": {"symbol": r.direct_governing.symbol,
-                                "life_h": json_number(r.governing_life_h)},
-             "damage_per_hour": json_number(damage_rate(r)),
-             "relative_to_fleet": (json_number(damage_rate(r) / fleet_rate) if fleet_rate > 0
-                                   else None)}
-            for r in results]
-    return sorted(rows, key=lambda row: -(row["damage_per_hour"] or 0.0))
+    return [{"log": row.result.summary.name,
+             "duration_h": json_number(row.result.summary.duration_h),
+             "system_l10_h": json_number(row.result.system_life_h),
+             "governing_life": {"symbol": row.result.direct_governing.symbol,
+                                "life_h": json_number(row.result.governing_life_h)},
+             "damage_per_hour": json_number(row.damage_per_hour),
+             "relative_to_fleet": None if row.relative_to_fleet is None
+             else json_number(row.relative_to_fleet)}
+            for row in run.ranking()]
 
 
-def damage_rate(result: SpectrumResult) -> float:
-    """The pair's damage per hour on the governing basis (1 / life), 0 for an infinite life."""
-    life = result.governing_life_h
-    return 1.0 / life if 0 < life < float("inf") else 0.0
-
-
-def fleet_document(results: list[SpectrumResult], combined: SpectrumResult, policy: str,
-                   files: dict[str, str | None], case_file: str,
-                   failures: list[str]) -> dict:
+def fleet_document(run: LogRun, policy: str, files: dict[str, str]) -> dict:
     """The combined fleet (contract keys at the top), each log, and the ranking."""
+    combined = run.combined
     return {
-        "case_file": case_file,
+        "case_file": run.case_file,
         **log_document(combined, policy, files.get(combined.summary.name)),
-        "logs": [log_document(r, policy, files.get(r.summary.name)) for r in results],
-        "ranking": ranking(results, combined),
-        "skipped": failures,
+        "logs": [log_document(r, policy, files.get(r.summary.name)) for r in run.results],
+        "ranking": ranking_entries(run),
+        "skipped": [f.message for f in run.failures],
         "cautions": CAUTIONS,
     }

@@ -11,11 +11,13 @@ from rich.table import Table
 from rich.text import Text
 
 from hubload.engine.governing import symbol_of
+from hubload.logs.analysis import LogRun
 from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
 from hubload.report.cautions import CAUTIONS
 from hubload.report.messages import warning_texts
 from hubload.report.numbers import hours, safety, share
+from hubload.report.terminal.tables import plain
 from hubload.units import KN
 
 TOP_CASES = 10
@@ -131,17 +133,19 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
         console.print(Text.assemble(("Warning:", "yellow"), f" {warning}"))
 
 
-def ranking_table(ranking: list[dict]) -> Table:
-    symbol = ranking[0]["governing_life"]["symbol"] if ranking else "L10"
+def ranking_table(run: LogRun) -> Table:
+    ranking = run.ranking()
+    symbol = ranking[0].result.direct_governing.symbol
     table = Table(title=f"Logs from harshest to mildest (pair damage per hour, {symbol})",
                   title_justify="left")
     for heading, justify in (("log", "left"), ("hours", "right"), (f"system {symbol} h", "right"),
                              ("vs fleet", "right")):
         table.add_column(heading, justify=justify)
     for row in ranking:
-        relative = row["relative_to_fleet"]
-        table.add_row(escape(Path(row["log"]).name), f"{row['duration_h'] or 0:,.2f}",
-                      hours(row["governing_life"]["life_h"]),
+        relative = row.relative_to_fleet
+        table.add_row(Text(plain(Path(row.result.summary.name).name)),
+                      f"{row.result.summary.duration_h:,.2f}",
+                      hours(row.result.governing_life_h),
                       "" if relative is None else f"{relative:.2f} x")
     return table
 
@@ -151,11 +155,11 @@ def render(result: SpectrumResult, console: Console, spectrum_file: str | None) 
     console.print(f"[dim]Caution: {CAUTIONS}[/]")
 
 
-def render_fleet(combined: SpectrumResult, ranking: list[dict], console: Console,
-                 files: dict[str, str | None], failures: list[str]) -> None:
-    console.print(ranking_table(ranking))
-    for failure in failures:
-        console.print(f"[yellow]Skipped:[/] {failure}")
+def render_fleet(run: LogRun, console: Console, files: dict[str, str]) -> None:
+    console.print(ranking_table(run))
+    for failure in run.failures:
+        console.print(Text.assemble(("Skipped:", "yellow"), f" {plain(failure.message)}"))
+    combined = run.combined
     written = [f for name, f in files.items() if f and name != combined.summary.name]
     if written:
         console.print(f"{len(written)} per-log spectra written next to the combined one.")

@@ -150,6 +150,7 @@ def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json:
     return found
 
 
-def spectrum(**options) -> None:
-    from hubload.logs.run import Request, spectrum as run_spectrum
-    run_spectrum(Request(**options))
+def spectrum(**options):
+    from hubload.commands.logs import Request, spectrum as run_spectrum
+
+    return run_spectrum(Request(**options))

@@ -1,0 +1,131 @@
+"""``hubload spectrum``: one log or a folder of logs -> lives, spectra files, report."""
+
+from __future__ import annotations
+
+import dataclasses
+import json
+from dataclasses import dataclass
+from pathlib import Path
+
+import click
+from rich.console import Console
+from rich.progress import Progress
+
+from hubload import api
+from hubload.errors import InputError
+from hubload.logs.analysis import COMBINED_NAME, LogRun, log_paths
+from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
+from hubload.report.files import checked_output, write_text
+from hubload.report.spectrumfile import spectrum_text
+
+
+@dataclass(frozen=True)
+class Request:
+    """The options of one ``hubload spectrum`` run."""
+
+    log: str
+    case_file: str
+    out: str | None = None
+    force: bool = False
+    as_json: bool = False
+    columns: tuple[str, ...] = ()
+    classes: tuple[str, ...] = ()
+    gaps: str = "error"
+    max_gap_s: float | None = None
+    jobs: int | None = None
+    cluster: str | None = None
+    skip_bad: bool = False
+
+
+def spectrum(request: Request) -> api.LogsResult:
+    folder = Path(request.log).is_dir()
+    paths = log_paths(request.log)
+    targets = fleet_targets(request, paths) if folder else {}
+    if request.out and not folder:  # before the log is read: a refusal should not wait
+        checked_output(request.out, request.force)
+    with LogProgress(len(paths)) as advance:
+        found = api.spectrum(request.log, request.case_file, request.columns, request.classes,
+                             request.gaps, request.max_gap_s, request.jobs, request.cluster,
+                             request.skip_bad, on_log_done=advance)
+    run = found.value
+    files = write_fleet_files(targets, run) if folder else write_single(request, run)
+    found = dataclasses.replace(found, files=files)
+    if request.as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.spectrum import render, render_fleet
+
+        if folder:
+            render_fleet(run, Console(), files)
+        else:
+            render(run.single, Console(), files.get(run.single.summary.name))
+    return found
+
+
+class LogProgress:
+    """A progress bar over the logs of a folder, on a terminal only (stderr)."""
+
+    def __init__(self, count: int):
+        console = Console(stderr=True)
+        self.progress = Progress(console=console, transient=True,
+                                 disable=not console.is_terminal or count == 1)
+        self.task = self.progress.add_task("logs", total=count)
+
+    def __enter__(self):
+        self.progress.start()
+        return lambda _path: self.progress.advance(self.task)
+
+    def __exit__(self, *_exc) -> None:
+        self.progress.stop()
+
+
+def write_single(request: Request, run: LogRun) -> dict[str, str]:
+    result = run.single
+    if not request.out:
+        return {}
+    write_text(request.out, spectrum_of(run, result, Path(request.log).name), request.force)
+    return {result.summary.name: request.out}
+
+
+def spectrum_of(run: LogRun, result: SpectrumResult, log_name: str) -> str:
+    return spectrum_text(run.machine, result.classed.study.cases, log_name, run.study.title,
+                         classed_temperature_c(result.summary))
+
+
+def fleet_targets(request: Request, paths: list[str]) -> dict[str, Path]:
+    """The spectrum file of each log (``<stem>.toml``) and ``combined.toml`` in the --out
+    folder, checked before any log is read; empty without --out."""
+    if not request.out:
+        return {}
+    folder = Path(request.out)
+    if folder.exists() and not folder.is_dir():
+        raise InputError("expected a folder for the spectra of a folder of logs",
+                         file=str(folder), key_path="--out")
+    targets = {path: folder / f"{Path(path).stem}.toml" for path in paths}
+    targets[COMBINED_NAME] = folder / f"{COMBINED_NAME}.toml"
+    if len(set(targets.values())) < len(targets):
+        raise InputError("two logs would write the same spectrum file (same name stem, or a "
+                         f"log named {COMBINED_NAME!r}); rename one", file=request.log)
+    if folder.is_dir():
+        for target in targets.values():
+            checked_output(str(target), request.force)
+    return targets
+
+
+def write_fleet_files(targets: dict[str, Path], run: LogRun) -> dict[str, str]:
+    """The spectrum of each usable log and the combined one, in the --out folder."""
+    if not targets:
+        return {}
+    folder = targets[COMBINED_NAME].parent
+    try:
+        folder.mkdir(parents=True, exist_ok=True)
+    except OSError as error:
+        raise InputError(f"cannot create the folder ({error.strerror})", file=str(folder),
+                         key_path="--out") from None
+    written = {}
+    for result in [*run.results, run.combined]:
+        name = result.summary.name
+        log_name = Path(name).name if name != COMBINED_NAME else f"{len(run.results)} logs"
+        written[name] = str(write_text(str(targets[name]), spectrum_of(run, result, log_name),
+                                       True))
+    return written

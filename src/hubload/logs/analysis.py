@@ -1,0 +1,102 @@
+"""One log or a folder of logs -> typed results: each log's lives and spectrum, the fleet's.
+
+Computation only: no printing, no files. The command (``hubload.commands.spectrum``)
+writes the spectra and hands the :class:`LogRun` to the report layer.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Callable
+from dataclasses import dataclass
+from pathlib import Path
+
+from hubload.casefile.machine import load_machine
+from hubload.domain.study import Study
+from hubload.errors import InputError
+from hubload.logs.columns import parse_column_options
+from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
+from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
+from hubload.logs.spectrum import SpectrumResult, spectrum_result
+
+COMBINED_NAME = "combined"
+
+
+@dataclass(frozen=True)
+class Ranked:
+    """A log's place in its fleet: its pair damage per hour on the governing basis."""
+
+    result: SpectrumResult
+    damage_per_hour: float
+    relative_to_fleet: float | None
+
+
+@dataclass(frozen=True)
+class LogRun:
+    """The results of one log, or of a folder: each usable log, the fleet, the failures."""
+
+    case_file: str
+    study: Study
+    machine: dict                         # the case file's tables without its cases
+    options: LogOptions
+    results: tuple[SpectrumResult, ...]
+    combined: SpectrumResult | None       # a folder: all logs back to back
+    failures: tuple[Failure, ...]
+
+    @property
+    def single(self) -> SpectrumResult | None:
+        return self.results[0] if self.combined is None else None
+
+    def ranking(self) -> list[Ranked]:
+        """The logs from harshest to mildest (damage per hour of the governing life)."""
+        fleet = damage_rate(self.combined)
+        ranked = [Ranked(r, damage_rate(r), damage_rate(r) / fleet if fleet > 0 else None)
+                  for r in self.results]
+        return sorted(ranked, key=lambda row: -row.damage_per_hour)
+
+
+def damage_rate(result: SpectrumResult) -> float:
+    """The pair's damage per hour on the governing basis (1 / life), 0 for an infinite life."""
+    life = result.governing_life_h
+    return 1.0 / life if 0 < life < float("inf") else 0.0
+
+
+def log_options(columns=(), classes=(), gaps: str = "error",
+                max_gap_s: float | None = None) -> LogOptions:
+    """How to read and class a log, from the command's words (column maps, class counts)."""
+    if max_gap_s is not None and not max_gap_s > 0:
+        raise InputError(f"expected a positive time, got {max_gap_s:g}", key_path="max_gap_s")
+    return LogOptions(mapping=parse_column_options(tuple(columns)), gaps=gaps,
+                      max_gap_s=max_gap_s, classes=parse_classes(tuple(classes)))
+
+
+def log_paths(log: str | Path) -> list[str]:
+    """The log itself, or the logs of a folder (sorted by name)."""
+    target = Path(log)
+    return [str(p) for p in find_logs(target)] if target.is_dir() else [str(target)]
+
+
+def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
+            jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
+            on_log_done: Callable[[str], None] | None = None) -> LogRun:
+    """Read, clean, integrate and class every log; a folder's logs combined as a fleet."""
+    study, machine = load_machine(case_file)
+    paths = log_paths(log)
+    done = on_log_done or (lambda _path: None)
+    found = run_cluster(cluster, paths, study, options, done) if cluster \
+        else run_local(paths, study, options, jobs, done)
+    failures = tuple(f for f in found if isinstance(f, Failure))
+    folder = Path(log).is_dir()
+    if failures and (not folder or not skip_bad):
+        if not folder:
+            raise InputError(failures[0].message)
+        raise InputError(f"{len(failures)} of {len(paths)} logs could not be used "
+                         "(skipping the bad logs leaves them out): "
+                         + "; ".join(f.message for f in failures))
+    summaries = [s for s in found if not isinstance(s, Failure)]
+    if not summaries:
+        raise InputError("no usable log in the folder", file=str(log))
+    results = tuple(spectrum_result(s, study) for s in summaries)
+    combined = spectrum_result(merge_summaries(COMBINED_NAME, summaries, options.classes),
+                               study) if folder else None
+    return LogRun(case_file=str(case_file), study=study, machine=machine, options=options,
+                  results=results, combined=combined, failures=failures)
