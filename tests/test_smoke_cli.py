@@ -17,14 +17,26 @@ SCENARIOS = sorted(Path(__file__).parent.parent.joinpath("load_cases").glob("*.t
 
 
 @pytest.mark.parametrize("scenario", SCENARIOS, ids=lambda p: p.name)
-def test_bundled_scenario_checks_in_text_and_json(scenario):
+def test_bundled_scenario_lives_follow_palmgren_miner_and_the_system_rule(scenario):
+    # Each bearing's spectrum life is 1 / sum(t_i / L_i) of its case lives (Palmgren-Miner,
+    # ISO 281:2007 annex, from memory) and the pair's is (L_o^-e + L_i^-e)^(-1/e) with the
+    # Weibull slope e = 9/8 of roller bearings (Lundberg-Palmgren system life); the terminal
+    # shows the governing life the JSON gives.
     runner = CliRunner()
-    text = runner.invoke(main, ["check", str(scenario)])
-    assert text.exit_code == 0, text.output
-    assert "Caution" in text.output
     document = json.loads(runner.invoke(main, ["check", str(scenario), "--json"]).output)
-    assert document["system"]["l10_h"] is None or document["system"]["l10_h"] > 0
-    assert set(document["bearings"]) == {"outboard", "inboard"}
+    cases = document["cases"]
+    lives = {}
+    for label in ("outboard", "inboard"):
+        damage = sum(case["time_fraction"] / case["bearings"][label]["l10_h"]
+                     for case in cases if case["bearings"][label]["l10_h"] is not None)
+        lives[label] = 1 / damage
+        assert document["bearings"][label]["l10_h"] == pytest.approx(lives[label], rel=1e-12)
+    system = (lives["outboard"] ** -1.125 + lives["inboard"] ** -1.125) ** (-1 / 1.125)
+    assert document["system"]["l10_h"] == pytest.approx(system, rel=1e-12)
+    text = runner.invoke(main, ["check", str(scenario)], env={"COLUMNS": "80"})
+    assert text.exit_code == 0 and "Caution" in text.output
+    governing = document["governing_life"]
+    assert f"{governing['symbol']} = {governing['life_h']:,.0f} h" in text.output
 
 
 @settings(max_examples=30, deadline=None)

@@ -151,10 +151,16 @@ def test_a_iso_stays_between_0_1_and_50(kappa, e_c, load_ratio):
 
 # --- Contamination factor eC: ISO 281:2007 annex A (constants from memory) --------------
 
-def test_e_c_hand_computed_for_oil_with_online_filtration():
-    # -/17/14: a = 0.0288 * 1^0.68 * 85^0.55 = 0.33156; eC = a (1 - 1.6329 / 85^(1/3)) = 0.20842
-    level = lub.iso4406_level("oil-filtered", 17, 14).level
-    assert lub.contamination_factor(1.0, 85 * MM, level) == pytest.approx(0.20842, abs=2e-5)
+@pytest.mark.parametrize("method", list(lub.CONTAMINATION_LEVELS))
+@given(kappa=st.floats(0.1, 4.0), dm_mm=st.floats(15.0, 500.0), factor=st.floats(1.0, 3.0))
+def test_e_c_never_falls_with_size_or_film(method, kappa, dm_mm, factor):
+    # Property of ISO 281:2007 annex A (from memory): a larger bearing tolerates the same
+    # particles better, and a thicker film (higher kappa, up to 4) separates more of them.
+    for level in lub.CONTAMINATION_LEVELS[method]:
+        base = lub.contamination_factor(kappa, dm_mm * MM, level)
+        assert lub.contamination_factor(kappa, dm_mm * factor * MM, level) >= base - 1e-12
+        assert lub.contamination_factor(min(kappa * factor, 4.0), dm_mm * MM, level) \
+            >= base - 1e-12
 
 
 def test_iso4406_code_between_rows_uses_the_dirtier_row():
@@ -174,12 +180,12 @@ def test_iso4406_code_cleaner_than_the_table_uses_its_cleanest_row():
 def test_e_c_above_kappa_4_is_evaluated_at_4_as_a_iso():
     """ISO 281:2007 bounds kappa at 4 in the life modification factor (9.3, from memory);
     eC only feeds aISO, so it takes the same bounded kappa (as kappa < 0.1 is evaluated at
-    0.1 for both). Hand computed, -/19/16 with on-line filtration, dm 85 mm:
-    a = 0.0216 * 4^0.68 * 85^0.55 = 0.63831; eC = a (1 - 2.3362 / 85^(1/3)) = 0.29915."""
+    0.1 for both)."""
     level = lub.iso4406_level("oil-filtered", 19, 16).level
-    assert lub.contamination_factor(4.0, 85 * MM, level) == pytest.approx(0.29915, abs=2e-5)
     assert lub.contamination_factor(9.0, 85 * MM, level) == lub.contamination_factor(
         4.0, 85 * MM, level)
+    assert lub.contamination_factor(0.02, 85 * MM, level) == lub.contamination_factor(
+        0.1, 85 * MM, level)
 
 
 def test_iso4406_code_dirtier_than_the_table_gives_e_c_zero():

@@ -196,7 +196,7 @@ def govern(study: Study, evaluated: tuple[MethodLives, ...], a1) -> GoverningLif
     """
     candidates = tuple(candidate(study, lives, a1) for lives in evaluated)
     rule = study.verdict_basis if len(candidates) > 1 else "iso281"
-    shape = np.shape(candidates[0].system_life_h)
+    shape = np.broadcast_shapes(*(np.shape(c.system_life_h) for c in candidates))
     if rule == "shorter" and len(candidates) > 1:
         # ties go to the ISO 281 rule (index 0): its life is the standard's
         chosen = np.where(candidates[1].system_life_h < candidates[0].system_life_h, 1, 0)

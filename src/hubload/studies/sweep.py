@@ -53,7 +53,12 @@ class SweepChunk:
         return picker(self.result, len(self.studies), self.studies)
 
     def point(self, index: int) -> Result:
-        """The result of point ``index`` of the chunk, as a check of it gives (findings too)."""
+        """The result of point ``index`` of the chunk, as a check of it gives (findings too).
+
+        A chunk of one point is evaluated on its own: in a batch of one, a point axis of
+        length one cannot be told from a case axis of length one."""
+        if len(self.studies) == 1:
+            return evaluate(self.studies[0])
         return with_findings(self.take(index))
 
 
@@ -146,9 +151,10 @@ def parse_vary(spec: str, document: dict, file: str) -> Axis:
         raise InputError(f"expected numbers START:STOP and a whole COUNT, got {span!r}",
                          file=file, key_path=key) from None
     # a finite span needs finite ends, and linspace overflows without it (+-1e308)
-    if not math.isfinite(stop - start) or count < 2 or start == stop:
-        raise InputError(f"expected finite START != STOP and COUNT >= 2, got {span!r}",
-                         file=file, key_path=key)
+    one_point = count == 1 and start == stop   # the file's own value, e.g. for a check
+    if not math.isfinite(stop - start) or not (one_point or (count >= 2 and start != stop)):
+        raise InputError(f"expected finite START != STOP and COUNT >= 2 (or START = STOP with "
+                         f"COUNT = 1), got {span!r}", file=file, key_path=key)
     values = np.linspace(start, stop, count)
     if path.integer:
         if not np.allclose(values, np.round(values), rtol=0, atol=1e-9):

@@ -183,11 +183,11 @@ def method_columns(result: Result, lives, modified, symbols: tuple[str, str | No
 
 def summary_table(result: Result) -> TableSpec:
     rows = summary_rows(result)
-    columns = [Column("bearing", "bearing", [r[0] for r in rows], name=True),
-               Column("name", "name", [r[1] for r in rows], name=True)]
+    columns = [Column("bearing", "bearing", [r[0] for r in rows], name=True)]
     refined = result.refined is not None
     columns += method_columns(result, result, result.modified, life_symbols(result), "")
-    notes = []
+    named = [f"{label}: {name}" for label, name, _ in rows if name]
+    notes = ["; ".join(named) + "."] if named else []
     if refined:
         lives = result.iso281
         reliability = float(result.study.reliability_percent)

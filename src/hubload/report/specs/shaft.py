@@ -23,10 +23,9 @@ def sections_table(result: Result) -> TableSpec:
     shaft, given = result.shaft, result.study.shaft.sections
     required = float(shaft.required_safety)
     sections = shaft.sections
-    names = result.study.cases.names
 
-    def case_name(value, index) -> str:
-        return names[int(index)] if np.isfinite(value) else "-"
+    def case_index(value, index) -> str:
+        return str(int(index)) if np.isfinite(value) else "-"
 
     columns = (
         Column("name", "section", [s.name for s in sections], name=True),
@@ -41,18 +40,18 @@ def sections_table(result: Result) -> TableSpec:
         Column("min_safety", "n", [float(s.min_safety) for s in sections], "", safety,
                legend=f"lowest {CRITERION_NAMES[shaft.criterion]} fatigue safety",
                alert=below(required)),
-        Column("min_safety_case", "in case", [case_name(s.min_safety, s.min_safety_case)
-                                              for s in sections], name=True),
+        Column("min_safety_case", "#", [case_index(s.min_safety, s.min_safety_case)
+                                        for s in sections], legend="its case"),
         Column("yield_safety", "n yield", [float(s.yield_safety) for s in sections], "",
                safety, legend="first-cycle yield safety", alert=below(required)),
         Column("fatigue_life_h", "life", [float(s.fatigue_life_h) for s in sections], "h",
                hours, legend="S-N fatigue life of the spectrum"))
     notes = [f"Required safety n >= {required:g} (Shigley's Mechanical Engineering Design, "
              f"10th ed.)."]
-    if np.any(result.study.cases.speed_rpm > 0):
-        notes += [f"Section '{s.name}': every case stays below the endurance limit "
-                  f"(Se = {float(s.endurance_pa) / MPA:.0f} MPa): infinite fatigue life."
-                  for s in sections if np.isinf(s.fatigue_life_h)]
+    endless = [f"'{s.name}'" for s in sections if np.isinf(s.fatigue_life_h)]
+    if endless and np.any(result.study.cases.speed_rpm > 0):
+        notes.append(f"Infinite fatigue life (every case stays below the endurance limit Se) "
+                     f"in {', '.join(endless)}.")
     return TableSpec("shaft_sections", "Shaft sections", columns, notes=tuple(notes))
 
 
@@ -69,7 +68,7 @@ def cases_table(result: Result, limit: int | None) -> TableSpec:
     columns += [Column(f"shaft.{s.name}.safety", s.name, list(s.safety), "", safety,
                        alert=below(required)) for s in shaft.sections]
     permissible = shaft.permissible
-    notes = ["Fatigue safety per section; '-': standstill (no stress cycles)."]
+    notes = ["Fatigue safety of each section per case ('-': standstill, no stress cycles)."]
     if permissible is not None:
         columns += [Column("radial_wheel_force_kN", "radial",
                            list(permissible.radial_wheel_force_n / KN), "kN", fixed(2),

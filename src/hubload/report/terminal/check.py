@@ -44,7 +44,7 @@ def verdict_line(result: Result) -> Text:
         ("FAIL", "bold red", "<")
     return Text.assemble((word, style), f": system {found.life_name} = "
                          f"{hours_with_unit(found.life_h)} {relation} target "
-                         f"{hours_with_unit(found.target_h)} ({found.basis})")
+                         f"{hours_with_unit(found.target_h)} (the governing life above)")
 
 
 def dominant_line(result: Result) -> Text:
