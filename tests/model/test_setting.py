@@ -95,13 +95,14 @@ def test_cup_contraction_in_an_unbounded_housing_matches_sympy():
         50e-6 * 0.12 / 0.14, rel=1e-12)
 
 
-@pytest.mark.parametrize("inner, outer, r_i, radius, r_o", [
-    (materials.STEEL, materials.ALUMINIUM, 0.060, 0.070, 0.095),   # steel cup, aluminium housing
-    (materials.STEEL, materials.CAST_IRON, 0.060, 0.070, 0.110),   # steel cup, cast-iron housing
-    (materials.ALUMINIUM, materials.STEEL, 0.0, 0.040, 0.047),     # (a light shaft, steel cone)
+@pytest.mark.parametrize("member, inner, outer, r_i, radius, r_o", [
+    ("cup", materials.STEEL, materials.ALUMINIUM, 0.060, 0.070, 0.095),    # in aluminium
+    ("cup", materials.STEEL, materials.CAST_IRON, 0.060, 0.070, 0.110),    # in cast iron
+    ("cone", materials.ALUMINIUM, materials.STEEL, 0.0, 0.040, 0.047),     # light solid shaft
+    ("cone", materials.CAST_IRON, materials.STEEL, 0.018, 0.040, 0.047),   # hollow shaft
 ])
-def test_fit_pressure_of_different_materials_matches_sympy_lame_solution(inner, outer, r_i,
-                                                                         radius, r_o):
+def test_fit_of_different_materials_matches_sympy_lame_solution(member, inner, outer, r_i,
+                                                                radius, r_o):
     # Lame (sympy), different E and nu in the two members; DIAMETRAL interference 60 um.
     pressure, u_in, u_out, r = lame_two_cylinders(
         sp.Rational(str(r_i)), sp.Rational(str(radius)), sp.Rational(str(r_o)),
@@ -109,12 +110,12 @@ def test_fit_pressure_of_different_materials_matches_sympy_lame_solution(inner, 
         outer.youngs_modulus_pa, sp.Rational(str(outer.poissons_ratio)), sp.Rational(30, 10**6))
     model = setting.fit_pressure_pa(60e-6, 2 * radius, 2 * r_i, 2 * r_o, inner, outer)
     assert model == pytest.approx(float(pressure), rel=1e-10)
-    if r_i > 0:   # a cup: contraction of its bore (the raceway)
+    if member == "cup":   # contraction of its bore (the raceway)
         contraction = setting.cup_raceway_contraction_m(60e-6, 2 * radius, 2 * r_i, 2 * r_o,
                                                         outer, inner)
         assert contraction == pytest.approx(float(-2 * u_in.subs(r, r_i)), rel=1e-10)
-    else:         # a cone: growth of its outside (the raceway)
-        growth = setting.cone_raceway_growth_m(60e-6, 2 * radius, 2 * r_o, 0.0, inner, outer)
+    else:                 # growth of its outside (the raceway)
+        growth = setting.cone_raceway_growth_m(60e-6, 2 * radius, 2 * r_o, 2 * r_i, inner, outer)
         assert growth == pytest.approx(float(2 * u_out.subs(r, r_o)), rel=1e-10)
 
 

@@ -220,8 +220,16 @@ class PairMounting:
 
     @property
     def outboard_sign(self) -> int:
-        """s_out: +1 when outboard shaft motion closes the outboard bearing (face-to-face)."""
-        return -1 if outboard_carries_inboard_push(self.arrangement) else 1
+        return outboard_closing_sign(self.arrangement)
+
+
+def outboard_closing_sign(arrangement: str) -> int:
+    """s_out: +1 when outboard shaft motion closes the outboard bearing (face-to-face), else -1.
+
+    Back-to-back the outboard bearing carries the push that moves the shaft
+    inboard (hubload.model.tapered_pair), so inboard motion closes it.
+    """
+    return -1 if outboard_carries_inboard_push(arrangement) else 1
 
 
 def raceway_spread_m(load_centre_spread_m, outboard: SeatedBearing, inboard: SeatedBearing,
@@ -233,10 +241,9 @@ def raceway_spread_m(load_centre_spread_m, outboard: SeatedBearing, inboard: Sea
     apex: L = L_lc + s_out sum_k (D_ok / 2) tan(alpha_k) (back-to-back the
     load centres lie outside the raceways, so L < L_lc).
     """
-    outboard_sign = -1 if outboard_carries_inboard_push(arrangement) else 1
     offsets = sum(0.5 * b.cup_raceway_diameter_m * np.tan(b.contact_angle_rad)
                   for b in (outboard, inboard))
-    return load_centre_spread_m + outboard_sign * offsets
+    return load_centre_spread_m + outboard_closing_sign(arrangement) * offsets
 
 
 def fit_take_up_m(mounting: PairMounting):
