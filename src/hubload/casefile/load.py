@@ -11,6 +11,7 @@ import numpy as np
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import derive_cases, read_motor, read_vehicle
+from hubload.casefile.setting import read_setting
 from hubload.casefile.shaft import read_shaft
 from hubload.casefile.validate import validate_document
 from hubload.domain.operating import Motor, Vehicle
@@ -64,6 +65,9 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
     pair = read_pair(data["pair"])
     project = data.get("project", {})
     motor, vehicle = read_motor(data.get("motor")), read_vehicle(data.get("vehicle"))
+    lubrication = read_lubrication(data.get("lubrication"), data["case"], pair)
+    pair = read_setting(data["pair"], pair, data["case"],
+                        None if lubrication is None else lubrication.temperature_k)
     study = Study(
         source=source,
         title=project.get("title", Path(source).stem),
@@ -73,7 +77,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         cases=read_cases(data["case"], wheel, motor, vehicle),
         motor=motor,
         vehicle=vehicle,
-        lubrication=read_lubrication(data.get("lubrication"), data["case"], pair),
+        lubrication=lubrication,
         reliability_percent=project.get("reliability_percent", 90.0),
         shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
         verdict_basis=project.get("verdict_basis", "shorter"),

@@ -12,6 +12,7 @@ import numpy as np
 
 from hubload.domain.operating import Motor, OperatingPoints, Vehicle
 from hubload.model.operating import DEFAULT_ADHESION_MU
+from hubload.model.setting import PairMounting
 
 ArrayLike = float | np.ndarray
 
@@ -54,12 +55,32 @@ class Bearing:
 
 
 @dataclass(frozen=True)
+class AssemblySetting:
+    """The setting made at assembly and what changes it in operation ([pair.setting]).
+
+    Temperatures per case (case axis last); ``mounting`` holds the fits, materials and
+    raceway geometry the operating setting follows from (hubload.model.setting).
+    """
+
+    assembly_m: ArrayLike              # > 0 end play, < 0 preload
+    tolerance_m: ArrayLike             # half-width of the band
+    basis: str                         # mounted | unmounted
+    assembly_temperature_k: ArrayLike
+    shaft_temperature_k: np.ndarray
+    housing_temperature_k: np.ndarray
+    mounting: PairMounting
+    cone_interference_m: ArrayLike = 0.0
+    cup_interference_m: ArrayLike = 0.0
+
+
+@dataclass(frozen=True)
 class Pair:
     arrangement: str
     outboard: Bearing
     inboard: Bearing
     axial_setting_m: ArrayLike = 0.0   # > 0 end play, < 0 preload (refined method)
     rotating_ring: str = "inner"
+    setting: AssemblySetting | None = None   # given: each case's setting follows from it
 
     def bearings(self) -> dict[str, Bearing]:
         return {"outboard": self.outboard, "inboard": self.inboard}

@@ -20,9 +20,11 @@ from hubload.domain.batch import picker, stack_studies
 from hubload.domain.study import Study
 from hubload.engine import findings, modified_life, refined_method, shaftcheck, verdict
 from hubload.engine.findings import STATIC_SAFETY_WARNING
+from hubload.engine.friction import Friction, evaluate_friction
 from hubload.engine.governing import GoverningLife, govern
 from hubload.engine.pair import BearingResult, MethodLives, mean_speed_rpm, method_lives, \
     per_study_km
+from hubload.engine.setting import OperatingSetting, band_ends, operating_setting
 
 __all__ = ["STATIC_SAFETY_WARNING", "BearingResult", "MethodLives", "Result", "evaluate",
            "evaluate_many"]
@@ -49,6 +51,9 @@ class Result:
     iso281: MethodLives | None = None                   # the ISO 281 rule beside the refined
     geometry_ratings: dict = field(default_factory=dict)  # label -> C, C0 from the geometry
     findings: tuple[findings.Finding, ...] = ()
+    setting: OperatingSetting | None = None              # each case's axial setting
+    band: tuple[MethodLives, MethodLives] | None = None  # refined lives at the band's ends
+    friction: Friction | None = None                     # with [lubrication] only
 
     @property
     def method(self) -> str:
@@ -91,21 +96,36 @@ def evaluate(study: Study, with_findings: bool = True) -> Result:
     logs that evaluate millions of samples as cases and report their flags as shares).
     """
     mean_rpm = mean_speed_rpm(study)
-    refined = refined_method.solve(study) if study.method == "refined" else None
+    setting = operating_setting(study)
+    refined = refined_method.solve(study, setting.operating_m) \
+        if study.method == "refined" else None
     lives = method_lives(study, mean_rpm, refined)
     beside = method_lives(study, mean_rpm) if refined is not None else None
+    band = band_lives(study, mean_rpm) if refined is not None and setting.band else None
     a1 = modified_life.per_study(modified_life.reliability_life_factor(study))
+    governing = govern(study, lives, (), a1) if refined is None else \
+        govern(study, beside, (lives, *(band or ())), a1, ("low", "high") if band else ())
     result = Result(
         study=study, bearings=lives.bearings, system_life_h=lives.system_life_h,
         system_life_km=lives.system_life_km, system_damage_share=lives.system_damage_share,
-        mean_speed_rpm=mean_rpm,
-        governing=govern(study, (lives,) if beside is None else (beside, lives), a1),
-        a1=a1, modified=lives.modified,
+        mean_speed_rpm=mean_rpm, governing=governing, a1=a1, modified=lives.modified,
         shaft=shaftcheck.evaluate_shaft(study, lambda h: per_study_km(h, mean_rpm, study)),
-        refined=refined, iso281=beside, geometry_ratings=refined_method.geometry_ratings(study))
+        refined=refined, iso281=beside, geometry_ratings=refined_method.geometry_ratings(study),
+        setting=setting, band=band,
+        friction=None if lives.modified is None else evaluate_friction(
+            study, lives.bearings, lives.modified.viscosity_m2_s))
     single = np.ndim(result.system_life_h) == 0
     return replace(result, findings=findings.collect(result)) if single and with_findings \
         else result
+
+
+def band_lives(study: Study, mean_rpm) -> tuple[MethodLives, MethodLives]:
+    """The refined lives at the low and the high end of the assembly setting's band."""
+    found = []
+    for end in band_ends(study):
+        solved = refined_method.solve(end, operating_setting(end).operating_m)
+        found.append(method_lives(end, mean_rpm, solved))
+    return tuple(found)
 
 
 def evaluate_many(studies: list[Study]) -> list[Result]:

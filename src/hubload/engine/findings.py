@@ -16,6 +16,7 @@ import numpy as np
 
 from hubload.domain.study import Study
 from hubload.model import lubrication as lub
+from hubload.model.friction import load_torque_nm
 
 STATIC_SAFETY_WARNING = 2.0          # common practice minimum s0 for roller bearings with shocks
 RATING_DEVIATION_WARNING = 0.15      # ratings from the geometry this far from the typed ones
@@ -169,7 +170,8 @@ def methods_findings(study: Study, governing) -> list[Finding]:
     target = study.target_life_h
     if target is None or len(governing.candidates) < 2:
         return []
-    iso, refined = governing.candidates
+    iso = governing.candidates[0]
+    refined = min(governing.candidates[1:], key=lambda c: float(c.system_life_h))
     iso_h, refined_h = float(iso.system_life_h), float(refined.system_life_h)
     if (iso_h >= target) == (refined_h >= target):
         return []
@@ -179,11 +181,55 @@ def methods_findings(study: Study, governing) -> list[Finding]:
         "governing_symbol": governing.symbol, "rule": governing.rule})]
 
 
+PRELOAD_FRICTION_RATIO = 1.25   # load friction this much above the external load's
+
+
+def setting_findings(result) -> list[Finding]:
+    """An end play that turns into preload in operation; a tight cup that comes loose; a
+    preload that drives the bearings' load friction well above the external load's."""
+    setting = result.setting
+    if setting is None or setting.assembly_m is None:
+        return []
+    found = []
+    operating = np.asarray(setting.operating_m)
+    if float(setting.assembly_m) > 0:
+        for index in np.flatnonzero(operating < 0):
+            found.append(Finding("setting_becomes_preload", int(index),
+                                 values={"assembly_m": float(setting.assembly_m),
+                                         "operating_m": float(operating[index])}))
+    for label, lost in setting.cup_fit_lost.items():
+        cases = np.flatnonzero(np.broadcast_to(lost, operating.shape))
+        if cases.size:
+            found.append(Finding("cup_fit_lost", int(cases[0]), label,
+                                 {"cases": float(cases.size)}))
+    return found + preload_friction_findings(result)
+
+
+def preload_friction_findings(result) -> list[Finding]:
+    if result.friction is None or result.iso281 is None:
+        return []
+    found = []
+    preloaded = np.asarray(result.setting.operating_m) < 0
+    for label, friction in result.friction.bearings.items():
+        external = result.iso281.bearings[label]
+        given = result.study.pair.bearings()[label]
+        external_nm = load_torque_nm(external.radial_n, external.axial_n, given.y,
+                                     given.mean_diameter_m)
+        with np.errstate(divide="ignore", invalid="ignore"):
+            ratio = np.where(external_nm > 0, np.asarray(friction.load_nm) / external_nm, 1.0)
+        steep = preloaded & (ratio > PRELOAD_FRICTION_RATIO)
+        if np.any(steep):
+            worst = int(np.argmax(np.where(steep, ratio, 0.0)))
+            found.append(Finding("preload_raises_friction", worst, label,
+                                 {"ratio": float(ratio[worst])}))
+    return found
+
+
 def collect(result) -> tuple[Finding, ...]:
     """Every finding of a single study's result, in the order the outputs list them."""
     study = result.study
     return tuple(
         operating_findings(study) + static_findings(study, result.bearings)
         + modified_findings(result.modified) + rating_findings(study, result.geometry_ratings)
-        + refined_findings(result.refined) + shaft_findings(study, result.shaft)
-        + methods_findings(study, result.governing))
+        + refined_findings(result.refined) + setting_findings(result)
+        + shaft_findings(study, result.shaft) + methods_findings(study, result.governing))

@@ -49,6 +49,7 @@ class LifeCandidate:
     case_life_h: dict[str, np.ndarray]
     system_damage_share: np.ndarray
     bearing_damage_share: dict[str, np.ndarray]
+    band_end: str = ""                 # "low" or "high": at that end of the setting band
 
     @property
     def reliability(self) -> float:
@@ -62,7 +63,9 @@ class LifeCandidate:
 
     @property
     def basis(self) -> str:
-        return basis_text(self.method, self.reliability, self.modified)
+        text = basis_text(self.method, self.reliability, self.modified)
+        return f"{text}, at the {self.band_end} end of the setting band" if self.band_end \
+            else text
 
 
 @dataclass(frozen=True)
@@ -130,10 +133,14 @@ class GoverningLife:
         return int(np.argmax(shares)) if np.any(shares > 0) else None
 
     def other(self) -> LifeCandidate | None:
-        """The candidate that does not govern (single study), when two were evaluated."""
+        """The other method's life (single study), when two methods were evaluated: the ISO
+        281 rule's when a refined life governs, else the shortest refined one."""
         if len(self.candidates) == 1:
             return None
-        return self.candidates[1 - int(np.asarray(self.chosen).flat[0])]
+        if self.choice.method == "refined":
+            return self.candidates[0]
+        refined = self.candidates[1:]
+        return min(refined, key=lambda c: float(np.asarray(c.system_life_h).flat[0]))
 
 
 def symbol_of(method: str, reliability_percent: float, modified: bool) -> str:
@@ -162,7 +169,7 @@ def basis_text(method: str, reliability_percent: float, modified: bool) -> str:
             f"(no [lubrication] given)")
 
 
-def candidate(study: Study, lives: MethodLives, a1) -> LifeCandidate:
+def candidate(study: Study, lives: MethodLives, a1, band_end: str = "") -> LifeCandidate:
     """The life of ``lives`` that a verdict judges: modified with lubrication, else a1 L10."""
     modified = lives.modified
     if modified is not None:
@@ -186,20 +193,30 @@ def candidate(study: Study, lives: MethodLives, a1) -> LifeCandidate:
         reliability_percent=per_study(study.reliability_percent),
         system_life_h=np.asarray(system_h, dtype=float), system_life_km=system_km,
         bearing_life_h=bearing_h, bearing_life_km=bearing_km, case_life_h=case_h,
-        system_damage_share=system_share, bearing_damage_share=bearing_share)
+        system_damage_share=system_share, bearing_damage_share=bearing_share,
+        band_end=band_end)
 
 
-def govern(study: Study, evaluated: tuple[MethodLives, ...], a1) -> GoverningLife:
-    """The governing life of a study from the lives of each evaluated method.
+def govern(study: Study, iso281: MethodLives, refined: tuple[MethodLives, ...], a1,
+           band_ends: tuple[str, ...] = ()) -> GoverningLife:
+    """The governing life of a study from the ISO 281 rule's lives and, with the refined
+    method, the refined lives (the middle of the setting band, then its ends).
 
-    ``evaluated`` holds the ISO 281 rule's lives, then (refined method) the refined ones.
+    ``verdict_basis`` "shorter" takes the shortest of all, "refined" the shortest refined
+    one (the worse end of the band), "iso281" the ISO 281 rule's; ties go to the ISO 281
+    rule, then to the middle of the band.
     """
-    candidates = tuple(candidate(study, lives, a1) for lives in evaluated)
-    rule = study.verdict_basis if len(candidates) > 1 else "iso281"
-    shape = np.broadcast_shapes(*(np.shape(c.system_life_h) for c in candidates))
-    if rule == "shorter" and len(candidates) > 1:
-        # ties go to the ISO 281 rule (index 0): its life is the standard's
-        chosen = np.where(candidates[1].system_life_h < candidates[0].system_life_h, 1, 0)
+    ends = ("",) + tuple(band_ends)
+    candidates = (candidate(study, iso281, a1),) + tuple(
+        candidate(study, lives, a1, end) for lives, end in zip(refined, ends))
+    if len(candidates) == 1:
+        return GoverningLife(rule="iso281", candidates=candidates, chosen=np.asarray(0))
+    rule = study.verdict_basis
+    lives = np.stack(np.broadcast_arrays(*(c.system_life_h for c in candidates)))
+    if rule == "iso281":
+        chosen = np.zeros(lives.shape[1:], dtype=int)
+    elif rule == "refined":
+        chosen = 1 + np.argmin(lives[1:], axis=0)
     else:
-        chosen = np.full(shape, 1 if rule == "refined" else 0)
+        chosen = np.argmin(lives, axis=0)
     return GoverningLife(rule=rule, candidates=candidates, chosen=np.asarray(chosen))

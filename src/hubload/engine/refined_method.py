@@ -105,15 +105,15 @@ def mounted_pair(study: Study, at=lambda value: value) -> tuple[MountedBearing, 
                          scalar(at(pair.inboard.position_m)))
 
 
-def respond(study: Study, bearings, at=lambda value: value):
+def respond(study: Study, bearings, setting_m, at=lambda value: value):
     cases, wheel = study.cases, study.wheel
     return pair_response(bearings, at(cases.wheel_load_n), at(cases.side_force_n),
                          at(cases.tractive_force_n), at(wheel.offset_m),
-                         at(wheel.loaded_radius_m), at(study.pair.axial_setting_m),
+                         at(wheel.loaded_radius_m), at(setting_m),
                          rotating_ring=study.pair.rotating_ring)
 
 
-def pair_responses(study: Study):
+def pair_responses(study: Study, setting_m):
     """The model's response for every point and case; one solve when the geometry is shared.
 
     A batched study whose bearing geometry or positions differ between points is
@@ -121,14 +121,14 @@ def pair_responses(study: Study):
     """
     parameters = point_parameters(study)
     if all(uniform(value) for value in parameters):
-        return respond(study, mounted_pair(study))
+        return respond(study, mounted_pair(study), setting_m)
     lead = np.broadcast_shapes(*(np.shape(v)[:-1] for v in parameters if np.ndim(v) > 1))
     points = []
     for index in np.ndindex(lead):
         def at(value, index=index):
             array = np.asarray(value)
             return array[index] if array.ndim > 1 else array
-        points.append(respond(study, mounted_pair(study, at), at))
+        points.append(respond(study, mounted_pair(study, at), setting_m, at))
     return stack_points(points, lead)
 
 
@@ -143,9 +143,10 @@ def stack_points(points: list, lead: tuple[int, ...]):
     return stacked.reshape(lead + stacked.shape[1:])
 
 
-def solve(study: Study) -> RefinedPair:
-    """Refined loads, lives [h] and shaft displacements of the pair, per case."""
-    response = pair_responses(study)
+def solve(study: Study, setting_m) -> RefinedPair:
+    """Refined loads, lives [h] and shaft displacements of the pair, per case, at the axial
+    setting ``setting_m`` [m] of each case (engine.setting)."""
+    response = pair_responses(study, setting_m)
     geometry = geometry_ratings(study)
     converged = np.asarray(response.converged)
     bearings = {}
@@ -164,4 +165,4 @@ def solve(study: Study) -> RefinedPair:
         bearings=bearings, axial_displacement_m=response.axial_displacement_m,
         tilt_rad=response.tilt_rad,
         radial_displacement_at_wheel_m=response.radial_displacement_at_wheel_m,
-        converged=converged, setting_m=np.asarray(study.pair.axial_setting_m, dtype=float))
+        converged=converged, setting_m=np.asarray(setting_m, dtype=float))

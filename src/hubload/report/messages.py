@@ -10,7 +10,7 @@ from __future__ import annotations
 from collections.abc import Callable, Sequence
 
 from hubload.engine.findings import Finding
-from hubload.units import BAR, CST, KN, MM
+from hubload.units import BAR, CST, KN, MM, UM
 
 
 def quoted(names: Sequence[str], index: int | None) -> str:
@@ -185,6 +185,7 @@ KIND_NAMES = {
                            "separating oil film: ask the supplier about these low speeds)",
     "no_equilibrium": "no equilibrium in the refined model (life counted as zero)",
     "permissible_exceeded": "radial wheel force above the supplier's permissible load",
+    "setting_becomes_preload": "assembly end play turned into preload in operation",
 }
 WORST_SHOWN = 3
 LISTED_CASES = 5      # a kind concerning more cases is summarised on the terminal
@@ -257,6 +258,27 @@ def log_permissible_exceeded(found: list[Finding], names) -> list[str]:
             f"the supplier's permissible load in the log."]
 
 
+def setting_becomes_preload(found: list[Finding], names) -> list[str]:
+    where = ", ".join(f"{quoted(names, f.case)} ({f.values['operating_m'] / UM:+.0f} um)"
+                      for f in found)
+    return [f"The assembly end play of {found[0].values['assembly_m'] / UM:g} um turns into a "
+            f"preload in operation in {where}: shaft and cones run warmer than housing and cups "
+            f"(docs/operating-setting.md). Check the temperatures and the setting with the "
+            f"bearing supplier."]
+
+
+def cup_fit_lost(found: list[Finding], names) -> list[str]:
+    return [f"The {f.subject} cup's interference fit is lost in {f.values['cases']:.0f} "
+            f"case(s), first in {quoted(names, f.case)}: the housing expands more than the cup "
+            f"(light alloy); a loose cup can creep in its seat." for f in found]
+
+
+def preload_raises_friction(found: list[Finding], names) -> list[str]:
+    return [f"Preload drives the {f.subject} bearing's load friction to {f.values['ratio']:.1f} "
+            f"times that of the external load alone (case {quoted(names, f.case)}): friction "
+            f"and heat grow steeply with preload." for f in found]
+
+
 STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "all_standstill": all_standstill, "static_safety_low": static_safety_low,
     "kappa_outside_scope": kappa_outside_scope, "thin_oil": thin_oil,
@@ -266,4 +288,6 @@ STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "permissible_exceeded": permissible_exceeded, "methods_disagree": methods_disagree,
     "log_static_safety_low": log_static_safety_low, "log_flag_time": log_flag_time,
     "log_shaft_safety_low": log_shaft_safety_low,
-    "log_permissible_exceeded": log_permissible_exceeded}
+    "log_permissible_exceeded": log_permissible_exceeded,
+    "setting_becomes_preload": setting_becomes_preload, "cup_fit_lost": cup_fit_lost,
+    "preload_raises_friction": preload_raises_friction}

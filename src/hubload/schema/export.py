@@ -89,8 +89,18 @@ def template_lines(table: Table, path: str) -> list[str]:
             lines.append(f"{spec.key} = {toml_value(value)}{comment}")
     lines.append("")
     for sub in table.tables:
-        lines += template_lines(sub, f"{path}.{sub.name}" if path else sub.name)
+        sub_lines = template_lines(sub, f"{path}.{sub.name}" if path else sub.name)
+        if sub.name in alternative_tables(table):   # given instead of keys written above
+            sub_lines = [f"# {line}" if line else line for line in sub_lines]
+        lines += sub_lines
     return lines
+
+
+def alternative_tables(table: Table) -> set[str]:
+    """Sub-tables that a choice of ``table`` offers instead of its keys: the template writes
+    them commented out, so that it stays a valid file."""
+    return {group[0] for choice in table.choices for group in choice.groups
+            if len(group) == 1 and table.table_named(group[0]) is not None}
 
 
 def template_text(table: Table) -> str:

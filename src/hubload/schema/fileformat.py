@@ -10,7 +10,9 @@ from hubload.model.lubrication import (CONTAMINATION_LEVELS, GREASE_CLEANLINESS,
                                        RELIABILITY_MAX_PERCENT, RELIABILITY_MIN_PERCENT)
 from hubload.model.shaft.strength import SURFACES
 from hubload.model.shaft.stress import CRITERIA
+from hubload.model.materials import MATERIALS
 from hubload.model.operating import DEFAULT_ADHESION_MU
+from hubload.model.setting import SETTING_BASES
 from hubload.model.tapered_pair import ARRANGEMENTS
 from hubload.schema.spec import Choice, Field, Table
 
@@ -18,6 +20,7 @@ from hubload.schema.spec import Choice, Field, Table
 # can never let through a value the model has no entry for.
 
 VERDICT_BASES = ("shorter", "iso281", "refined")
+MATERIAL_NAMES = tuple(MATERIALS)
 TIME_SUM_TOLERANCE_PERCENT = 0.5
 
 PROJECT = Table(
@@ -135,6 +138,10 @@ BEARING_FIELDS = (
           choices=("straight", "logarithmic")),
     Field("crown_drop_um", "number", "Drop of the logarithmic profile at the ends of the "
           "effective length [um] (both contacts together).", exclusive_minimum=0),
+    Field("bore_mm", "number", "Bore d of the cone [mm] (shaft seat); needed by the fits of a "
+          "[pair.setting] on the unmounted basis.", exclusive_minimum=0),
+    Field("outside_diameter_mm", "number", "Outside diameter D of the cup [mm] (housing seat); "
+          "needed by the cup fit of a [pair.setting].", exclusive_minimum=0),
 )
 
 BEARING_FACTORS = Choice(
@@ -164,15 +171,67 @@ def bearing_table(name: str, doc: str, position_mm: float) -> Table:
     return Table(name=name, doc=doc, fields=fields, choices=(BEARING_FACTORS, BEARING_GEOMETRY))
 
 
+PAIR_SETTING = Table(
+    name="setting",
+    required=False,
+    doc="The setting made at assembly, with its tolerance, and what changes it in operation "
+        "(fits, temperatures, materials); each case is solved at its own operating setting "
+        "(docs/operating-setting.md). Needs each bearing's internal geometry.",
+    fields=(
+        Field("assembly_um", "number", "Axial setting at assembly [um]: > 0 end play, < 0 "
+              "preload.", required=True, minimum=-500, maximum=2000, example=60),
+        Field("tolerance_um", "number", "Half-width of the assembly setting's band [um] "
+              "(setting = assembly_um +/- tolerance_um); the verdict uses the worse end.",
+              default=0.0, minimum=0, maximum=500, example=20),
+        Field("basis", "string", "mounted: the setting was measured with the rings pressed in "
+              "(fits included); unmounted: it follows from component dimensions, and the fits "
+              "(cone_interference_um, cup_interference_um) take up part of it.",
+              default="mounted", choices=SETTING_BASES),
+        Field("assembly_temperature_C", "number", "Temperature of every part when the setting "
+              "was made [C].", default=20.0, minimum=-40, maximum=150),
+        Field("shaft_temperature_C", "number", "Operating temperature of shaft, cones and rollers "
+              "[C] (a case may override it; default: the case's bearing temperature).",
+              minimum=-40, maximum=200),
+        Field("housing_temperature_C", "number", "Operating temperature of housing and cups [C] "
+              "(a case may override it; default: the case's bearing temperature).",
+              minimum=-40, maximum=200),
+        Field("shaft_material", "string", "Shaft material (expansion coefficient and modulus "
+              "from hubload's table, docs/operating-setting.md).", default="steel",
+              choices=MATERIAL_NAMES),
+        Field("housing_material", "string", "Housing material.", default="steel",
+              choices=MATERIAL_NAMES),
+        Field("shaft_expansion_per_K", "number", "Linear expansion coefficient of the shaft "
+              "[1/K], instead of the material's.", exclusive_minimum=0, maximum=1e-4),
+        Field("housing_expansion_per_K", "number", "Linear expansion coefficient of the housing "
+              "[1/K], instead of the material's.", exclusive_minimum=0, maximum=1e-4),
+        Field("shaft_modulus_GPa", "number", "Young's modulus of the shaft [GPa], instead of the "
+              "material's.", exclusive_minimum=1, maximum=500),
+        Field("housing_modulus_GPa", "number", "Young's modulus of the housing [GPa], instead of "
+              "the material's.", exclusive_minimum=1, maximum=500),
+        Field("cone_interference_um", "number", "Diametral interference of each cone on the "
+              "shaft [um] (unmounted basis; needs each bearing's bore_mm).", minimum=0,
+              maximum=500),
+        Field("cup_interference_um", "number", "Diametral interference of each cup in the housing "
+              "[um] (unmounted basis, or a light-alloy housing; needs outside_diameter_mm).",
+              minimum=0, maximum=500),
+        Field("shaft_bore_mm", "number", "Bore of a hollow shaft under the cones [mm] (default 0: "
+              "solid).", default=0.0, minimum=0),
+        Field("housing_outside_diameter_mm", "number", "Outside diameter of the housing wall "
+              "around the cups [mm] (default: a thick housing).", exclusive_minimum=0),
+    ),
+)
+
 PAIR = Table(
     name="pair",
     doc="The pair of tapered roller bearings in the motor's front housing.",
     fields=(
         Field("arrangement", "string", "How the two bearings are mounted.",
               required=True, choices=ARRANGEMENTS, example="back-to-back"),
-        Field("axial_setting_um", "number", "Axial setting of the pair [um] for the refined "
-              "method: > 0 end play (axial free travel of the shaft), < 0 preload, 0 "
-              "line-to-line.", default=0.0, minimum=-500, maximum=2000, example=0),
+        Field("axial_setting_um", "number", "Axial setting of the pair in operation [um] for the "
+              "refined method: > 0 end play (axial free travel of the shaft), < 0 preload, 0 "
+              "line-to-line (the default). Give either this or a [pair.setting] table (the "
+              "assembly setting, from which each case's operating setting follows).",
+              minimum=-500, maximum=2000, example=0),
         Field("rotating_ring", "string", "Ring that turns relative to the load: inner (the "
               "shaft carries the wheel and turns in a fixed housing) or outer (the housing turns "
               "with the wheel on a fixed shaft); refined method.", default="inner",
@@ -181,7 +240,11 @@ PAIR = Table(
     tables=(
         bearing_table("outboard", "The bearing nearer the wheel.", 40),
         bearing_table("inboard", "The bearing farther from the wheel.", -30),
+        PAIR_SETTING,
     ),
+    choices=(Choice("setting", groups=(("axial_setting_um",), ("setting",)), required=False,
+                    doc="Give the operating setting as axial_setting_um, or the assembly "
+                        "setting as a [pair.setting] table, not both."),),
 )
 
 CASE = Table(
@@ -215,6 +278,12 @@ CASE = Table(
               "the wheel load)."),
         Field("temperature_C", "number", "Bearing operating temperature in this case [C] "
               "(default: [lubrication] temperature_C).", minimum=-40, maximum=150),
+        Field("shaft_temperature_C", "number", "Temperature of shaft, cones and rollers in this "
+              "case [C] (a [pair.setting]; default: its shaft_temperature_C).",
+              minimum=-40, maximum=200),
+        Field("housing_temperature_C", "number", "Temperature of housing and cups in this case "
+              "[C] (a [pair.setting]; default: its housing_temperature_C).",
+              minimum=-40, maximum=200),
     ),
     choices=(Choice("speed", groups=(("speed_rpm",), ("speed_kmh",), ("pressure_bar", "flow_lpm")),
                     doc="Give exactly one of speed_rpm or speed_kmh (a force case), or "

@@ -1,5 +1,8 @@
 """Lives of the pair against its axial setting (refined method), in one batched solve.
 
+With a [pair.setting] the swept value is the assembly setting, and each case runs at the
+operating setting that follows from it (engine.setting); else it is the operating setting.
+
 The setting becomes a leading axis of the study (shape (S, 1) against the
 cases), so every setting and case of the sweep is solved in one call of the
 refined model.
@@ -14,6 +17,7 @@ import numpy as np
 from hubload.casefile.geometry import with_method
 from hubload.domain.study import Study
 from hubload.engine import Result, evaluate
+from hubload.engine.setting import at_assembly
 from hubload.errors import InputError
 from hubload.units import UM
 
@@ -107,7 +111,10 @@ def run_setting_sweep(study: Study, settings_um: np.ndarray) -> SettingSweep:
     """The study evaluated by the refined method at every setting [um]."""
     refined = with_method(study, "refined")
     settings_m = np.asarray(settings_um, dtype=float) * UM
-    batched = replace(refined, pair=replace(refined.pair, axial_setting_m=settings_m[:, None]))
+    if refined.pair.setting is not None:   # the assembly setting varies; each case follows
+        batched = at_assembly(refined, settings_m[:, None])
+    else:
+        batched = replace(refined, pair=replace(refined.pair, axial_setting_m=settings_m[:, None]))
     result = evaluate(batched, with_findings=False)
     found = SettingSweep(study=refined, settings_m=settings_m, result=result, best=None)
     return replace(found, best=best_range(settings_m, found.refined_life_h))

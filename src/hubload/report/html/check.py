@@ -14,6 +14,7 @@ from hubload.report.messages import summary_lines, warning_texts
 from hubload.report.numbers import hours, hours_with_unit, share
 from hubload.report.plots.spectrum import damage_share_figure, loads_figure
 from hubload.report.specs import check as specs
+from hubload.report.specs.assembly import setting_table
 from hubload.report.specs.operating import operating_table
 from hubload.report.specs.refined import displacement_table, distribution_table
 from hubload.report.specs.shaft import cases_table, checks_table, sections_table
@@ -92,6 +93,7 @@ def cases_section(result: Result) -> str:
     if result.refined is not None:
         tables += [distribution_table(result, CASE_ROWS_SHOWN),
                    displacement_table(result, CASE_ROWS_SHOWN)]
+    tables.append(setting_table(result, CASE_ROWS_SHOWN))
     parts = [spec_table(table) for table in tables if table is not None]
     if len(result.study.cases) > CASE_ROWS_SHOWN:
         parts.append("<details><summary>the whole spectrum, every case</summary>"

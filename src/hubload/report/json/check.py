@@ -13,7 +13,7 @@ import numpy as np
 from hubload.engine import MethodLives, Result
 from hubload.engine.governing import GoverningLife, LifeCandidate
 from hubload.report.cautions import CAUTIONS
-from hubload.report.json import modified, refined, shaft
+from hubload.report.json import assembly, modified, refined, shaft
 from hubload.report.json.operating import case_entries as operating_entries
 from hubload.report.messages import warning_texts
 from hubload.report.numbers import json_number, json_numbers, json_rows
@@ -137,6 +137,8 @@ def result_document(result: Result) -> dict:
     modified.add_modified_life(document, result)
     refined.add_refined(document, result)
     document["iso281"] = iso281_entry(result)
+    assembly.add_setting(document, result)
+    assembly.add_friction(document, result)
     shaft.extend_document(document, result)
     return document
 

@@ -15,6 +15,14 @@ from hubload.units import KN, MPA, MRAD, UM
 
 
 
+def nominal_setting_m(result: Result) -> float:
+    """The pair's setting: the assembly setting of a [pair.setting], else the file's one."""
+    setting = result.setting
+    if setting.assembly_m is not None:
+        return float(setting.assembly_m)
+    return float(np.asarray(setting.operating_m).flat[0])
+
+
 def add_refined(document: dict, result: Result) -> dict:
     """``document`` (the result_document) with the refined-method keys added in place."""
     for label, rated in result.geometry_ratings.items():
@@ -26,7 +34,7 @@ def add_refined(document: dict, result: Result) -> dict:
         return document
     pair = result.study.pair
     document["refined"] = {
-        "axial_setting_um": json_number(np.asarray(refined.setting_m) / UM),
+        "axial_setting_um": json_number(nominal_setting_m(result) / UM),
         "rotating_ring": pair.rotating_ring,
         "life": "ISO/TS 16281 reference rating life from the lamina loads (l10_h keys)",
         "contact_pressure_limit_MPa": 4000.0,

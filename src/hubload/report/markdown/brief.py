@@ -8,7 +8,8 @@ from hubload.report import numbers
 from hubload.report.cautions import CAUTIONS
 from hubload.report.messages import warning_texts
 from hubload.studies.requirements import BearingNeeds, Requirements, Solve
-from hubload.units import KN, MM
+from hubload.report.specs.assembly import band_line
+from hubload.units import KN, MM, UM
 
 
 
@@ -30,12 +31,22 @@ def rating(solve: Solve, bearing: BearingNeeds) -> str:
 
 def setting_assumption(needs: Requirements) -> str:
     """What the lives assume about the bearing setting, by method."""
+    result = needs.result
+    setting = result.setting
+    if setting.assembly_m is not None:
+        assembly, tolerance = float(setting.assembly_m) / UM, float(setting.tolerance_m) / UM
+        operating = np.asarray(setting.operating_m) / UM
+        text = (f"The file gives an assembly setting of {assembly:g} +/- {tolerance:g} um "
+                f"({numbers.setting_kind(assembly)}, {setting.basis}); with its fits and "
+                f"temperatures the cases run at {operating.min():+.0f} to {operating.max():+.0f} "
+                f"um in operation.")
+        band = band_line(result)
+        return f"{text} {band}" if band else text
     if needs.study.method != "refined":
         return "The pair rule used here assumes a line-to-line setting."
-    setting_um = float(np.max(needs.study.pair.axial_setting_m)) / 1e-6
+    setting_um = float(np.asarray(setting.operating_m).flat[0]) / UM
     return (f"The refined lives here assume an axial setting of {setting_um:g} um "
-            f"({numbers.setting_kind(setting_um)}) "
-            "in operation.")
+            f"({numbers.setting_kind(setting_um)}) in operation.")
 
 
 def speed_text(needs: Requirements, rpm: float) -> str:

@@ -12,6 +12,33 @@ from hubload.units import UM
 
 
 
+def mark_assembly(axes, sweep: SettingSweep) -> None:
+    """The file's assembly band (hatched, readable in grey) and, by an arrow, where the
+    dominant case's operating setting lies from it (fits and temperatures)."""
+    given = sweep.study.pair.setting
+    if given is None:
+        return
+    assembly, tolerance = float(given.assembly_m) / UM, float(given.tolerance_m) / UM
+    axes.axvspan(assembly - tolerance, assembly + tolerance, facecolor="none",
+                 edgecolor="#555555", hatch="///", linewidth=0.0,
+                 label=f"assembly band {assembly:g} +/- {tolerance:g} um")
+    axes.axvline(assembly, color="#555555", linewidth=1.0, linestyle="-.")
+    nearest = int(np.argmin(np.abs(sweep.settings_m / UM - assembly)))
+    shares = np.asarray(sweep.result.governing.system_damage_share)[nearest]
+    if not np.any(shares > 0):
+        return
+    dominant = int(np.argmax(shares))
+    operating = np.asarray(sweep.result.setting.operating_m)
+    shift = float(operating[nearest, dominant] - sweep.settings_m[nearest]) / UM
+    low, high = axes.get_ylim()
+    level = low * (high / low) ** 0.1   # near the foot, clear of the curves and the target
+    axes.annotate("", xy=(assembly + shift, level), xytext=(assembly, level),
+                  arrowprops={"arrowstyle": "->", "color": "#111111", "linewidth": 1.4})
+    axes.annotate(f"in operation ({shift:+.0f} um,\n'{sweep.study.cases.names[dominant]}')",
+                  (assembly + shift, level), textcoords="offset points", xytext=(4, 6),
+                  fontsize=7)
+
+
 @styled
 def setting_figure(sweep: SettingSweep) -> Figure:
     """Each bearing's and the system's life (log scale) against the setting, best range shaded."""
@@ -36,7 +63,9 @@ def setting_figure(sweep: SettingSweep) -> Figure:
                      linestyle=":", label="target")
     axes.axvline(0.0, color="#777777", linewidth=0.8)
     axes.set_yscale("log")
-    axes.set_xlabel("axial setting [um]   (< 0 preload, > 0 end play)")
+    mark_assembly(axes, sweep)
+    which = "assembly setting" if sweep.study.pair.setting is not None else "axial setting"
+    axes.set_xlabel(f"{which} [um]   (< 0 preload, > 0 end play)")
     axes.set_ylabel("life [h]")
     axes.set_title(f"{sweep.study.title}\nlives against the bearing setting (refined method)",
                    loc="left")

@@ -7,7 +7,7 @@ import numpy as np
 from hubload.engine import Result
 from hubload.engine.findings import STATIC_RATING_PRESSURE_PA
 from hubload.report.columns import Column, TableSpec, cut_to_cases
-from hubload.report.numbers import fixed, setting_kind
+from hubload.report.numbers import fixed
 from hubload.report.specs.check import SHORT
 from hubload.units import KN, MPA, MRAD, UM
 
@@ -40,7 +40,6 @@ def distribution_table(result: Result, limit: int | None) -> TableSpec:
 
 def displacement_table(result: Result, limit: int | None) -> TableSpec:
     refined = result.refined
-    setting_um = float(np.squeeze(refined.setting_m)) / UM
     spec = TableSpec("displacement", "Shaft in the housing per case", (
         Column("case_index", "#", list(range(len(result.study.cases)))),
         Column("tilt_mrad", "tilt", list(refined.tilt_rad / MRAD), "mrad", fixed(3)),
@@ -51,7 +50,7 @@ def displacement_table(result: Result, limit: int | None) -> TableSpec:
         Column("equilibrium", "equilibrium", ["yes" if c else "none found"
                                               for c in refined.converged],
                alert=lambda text: text != "yes")),
-        notes=(f"Axial setting {setting_um:g} um ({setting_kind(setting_um)}); "
-               f"{result.study.pair.rotating_ring} ring rotating; axial from the middle of the "
-               f"end play, + outboard.",))
+        notes=(f"{result.study.pair.rotating_ring.capitalize()} ring rotating; axial from the "
+               f"middle of the end play, + outboard; each case at its operating setting (see the "
+               f"setting table).",))
     return limited(result, spec, limit)

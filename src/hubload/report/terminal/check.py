@@ -16,6 +16,7 @@ from hubload.report.columns import CASE_ROWS_SHOWN
 from hubload.report.messages import summary_lines, warning_texts
 from hubload.report.numbers import hours_with_unit, share
 from hubload.report.specs import check as specs
+from hubload.report.specs.assembly import setting_table
 from hubload.report.specs.operating import operating_table
 from hubload.report.specs.refined import displacement_table, distribution_table
 from hubload.report.specs.shaft import cases_table, checks_table, item_limit, item_value, \
@@ -90,6 +91,7 @@ def case_tables(result: Result, show_all: bool):
               specs.lubrication_table(result, further)]
     if result.refined is not None:
         tables += [distribution_table(result, further), displacement_table(result, further)]
+    tables.append(setting_table(result, further))
     return [table for table in tables if table is not None]
 
 

@@ -19,8 +19,12 @@ from hubload.units import UM
 def setting_table(sweep: SettingSweep) -> TableSpec:
     result = sweep.result
     refined = sweep.refined
-    columns = [Column("setting_um", "setting", list(sweep.settings_m / UM), "um",
-                      lambda v: f"{v:g}")]
+    best = sweep.best
+    marked = [best is not None and best.low_m - 1e-12 <= s <= best.high_m + 1e-12
+              for s in sweep.settings_m]
+    columns = [Column("setting_um", "setting", [(v, m) for v, m in zip(sweep.settings_m / UM,
+                                                                      marked)],
+                      "um", lambda pair: f"{pair[0]:g}" + (" *" if pair[1] else "  "))]
     for label, bearing in result.bearings.items():
         found = result.refined.bearings[label]
         columns += [Column(f"{label}.life_h", f"{refined.symbol} {SHORT[label]}",
@@ -36,16 +40,19 @@ def setting_table(sweep: SettingSweep) -> TableSpec:
                               legend=f"the verdict's life ({governing.rule} of "
                                      f"{governing.candidates[0].symbol} and "
                                      f"{refined.symbol})"))
-    best = sweep.best
-    if best is not None:
-        inside = [best.low_m - 1e-12 <= s <= best.high_m + 1e-12 for s in sweep.settings_m]
-        columns.append(Column("best", "best", ["*" if flag else "" for flag in inside]))
-    return TableSpec("setting", f"{sweep.study.title}: lives against the axial setting "
-                                f"(refined method; > 0 end play, < 0 preload)", tuple(columns),
-                     notes=("zone: the smallest load zone over the cases.",))
+    which = "assembly" if sweep.study.pair.setting is not None else "axial"
+    return TableSpec("setting", f"Lives against the {which} setting (refined method)",
+                     tuple(columns),
+                     notes=("setting: > 0 end play, < 0 preload; * within the best range; "
+                            "zone: the smallest load zone over the cases.",))
 
 
 def render_setting(sweep: SettingSweep, console: Console) -> None:
+    console.print(Text.assemble((plain(sweep.study.title), "bold"),
+                                f"  ({plain(sweep.study.source)})"))
+    if sweep.study.pair.setting is not None:
+        console.print(Text("Each case runs at the operating setting that follows from the "
+                           "assembly setting (fits, temperatures; docs/operating-setting.md)."))
     render(setting_table(sweep), console)
     best = sweep.best
     if best is None:

@@ -77,7 +77,7 @@ def render(spec: TableSpec, console: Console) -> None:
     """Print ``spec`` (split to fit), then what was left out, its legend and its notes."""
     groups = column_groups(spec, console)
     for index, group in enumerate(groups):
-        title = spec.title if index == 0 else f"{spec.title} (continued)"
+        title = spec.title if index == 0 else "(continued)"
         console.print(rich_table(spec, group, title))
     for line in ([spec.omitted_note] if spec.omitted_note else []) + legend_lines(spec) \
             + list(spec.notes):
