@@ -38,9 +38,9 @@ from types import MappingProxyType
 
 import numpy as np
 
-MM = 1e-3
-CST = 1e-6
-NMM = 1e-3
+from hubload.units import CST, MM
+
+NMM = 1e-3                     # N mm in N m
 
 F1_TAPERED = 0.0004
 F0_TAPERED = MappingProxyType({"oil-bath": 6.0, "grease": 6.0, "oil-jet": 10.0,
