@@ -6,6 +6,7 @@ Modules, from the bottom up:
 - ``contact``: line-contact stiffness of a lamina, Hertz pressure, roller profile;
 - ``layout``: where each lamina of each roller sits and how the shaft compresses it;
 - ``solver``: equilibrium of the rigid shaft, many cases at once;
+- ``kernel``: its compiled Newton iteration (numba, loaded only when solving);
 - ``life``: ISO/TS 16281 reference rating life from the lamina loads;
 - ``integrals``: Sjovall's Jr, Ja (for checks and documentation);
 - ``pair``: the whole response of the pair to the wheel forces.

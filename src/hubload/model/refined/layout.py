@@ -104,6 +104,28 @@ class Laminae:
             (rollers, laminae) + lamina_values.shape[1:])
             for start, rollers, laminae in self.slices]
 
+    def merged(self, per_roller: int) -> Laminae:
+        """The same rollers cut into ``per_roller`` wider laminae (neighbours merged).
+
+        A merged lamina sits at its members' mean lever (the approach is affine in the
+        lever, so its influence row is the mean row), has their mean gap and the sum of
+        their stiffnesses: a coarse model of the pair for a first equilibrium estimate.
+        """
+        parts = []
+        for bearing_rows in zip(*(self.per_bearing(values) for values in (
+                self.influence, self.stiffness, self.profile_gap_m, self.setting_gap))):
+            laminae = bearing_rows[1].shape[1]
+            starts = np.linspace(0, laminae, min(per_roller, laminae) + 1).astype(int)[:-1]
+            counts = np.diff(np.append(starts, laminae))
+            sums = [np.add.reduceat(values, starts, axis=1) for values in bearing_rows]
+            parts.append((sums[0] / counts[None, :, None], sums[1],
+                          sums[2] / counts, sums[3] / counts))
+        slices = tuple((int(sum(p[1].size for p in parts[:index])), rows.shape[0],
+                        rows.shape[1]) for index, (rows, *_) in enumerate(parts))
+        return Laminae(*(np.concatenate([p[k].reshape((-1,) + p[k].shape[2:]) for p in parts])
+                         for k in range(4)), slices=slices, mid_x_m=self.mid_x_m,
+                       half_spread_m=self.half_spread_m, exponent=self.exponent)
+
 
 def roller_azimuths_rad(rollers: int):
     """Azimuth of each roller [rad], roller 0 at the top (+y)."""
