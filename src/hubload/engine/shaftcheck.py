@@ -13,6 +13,7 @@ import numpy as np
 
 from hubload.domain.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
+from hubload.model.requirements import wheel_moment_nm
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study
 
@@ -46,13 +47,23 @@ class SectionResult:
 
 @dataclass(frozen=True)
 class PermissibleResult:
-    """The supplier's curve read at the wheel offset; NaN where the offset is off the curve."""
+    """The supplier's curve read at the wheel offset; NaN where the offset is off the curve.
+
+    Per case two readings: the radial wheel force itself, and the radial force at the wheel
+    offset that bends the mounting face as much as all tyre forces together (the side force's
+    couple included); ``utilisation`` is the larger, ``moment_governs`` says where it is the
+    second.
+    """
 
     position_m: np.ndarray           # the wheel offset, per study
     inside: np.ndarray
     permissible_n: np.ndarray
     radial_wheel_force_n: np.ndarray
+    moment_equivalent_force_n: np.ndarray     # NaN for a wheel offset at or inboard of x = 0
+    utilisation_radial: np.ndarray
+    utilisation_moment: np.ndarray
     utilisation: np.ndarray
+    moment_governs: np.ndarray
 
 
 @dataclass(frozen=True)
@@ -135,20 +146,38 @@ def read_curve(position_m, curve: PermissibleCurve):
 
 
 def permissible_result(study: Study) -> PermissibleResult | None:
-    """Utilisation of the supplier's curve per case: resultant radial wheel force
-    (wheel load and tractive force) over the permissible load at the wheel offset.
-    Linear interpolation inside the curve; outside it nothing is assessed (NaN)."""
+    """Utilisation of the supplier's curve per case, the larger of two readings at the wheel
+    offset (linear interpolation inside the curve; outside it nothing is assessed, NaN):
+
+    - the resultant radial wheel force (wheel load and tractive force);
+    - the radial force at the offset with the same bending moment at the mounting face
+      (x = 0) as all tyre forces together, M / offset with M = |r x F| of the ground forces
+      (requirements.wheel_moment_nm, side force times loaded radius included): a curve of
+      permissible radial load against load position is a curve of permissible moment, so a
+      side force that adds to the moment uses it up too (common practice of reading such
+      curves). Undefined (NaN) for an offset at or inboard of the mounting face.
+    """
     curve = study.shaft.permissible
     if curve is None:
         return None
-    offset = per_study(study.wheel.offset_m)
-    permissible = read_curve(offset, curve)
-    radial = np.hypot(study.cases.wheel_load_n, study.cases.tractive_force_n)
-    utilisation = radial / permissible[..., None]
-    return PermissibleResult(position_m=offset, inside=np.isfinite(permissible),
-                             permissible_n=permissible,
-                             radial_wheel_force_n=np.broadcast_to(radial, utilisation.shape),
-                             utilisation=utilisation)
+    cases, wheel = study.cases, study.wheel
+    offset = per_study(wheel.offset_m)
+    permissible = read_curve(offset, curve)[..., None]
+    radial = np.hypot(cases.wheel_load_n, cases.tractive_force_n)
+    moment = wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
+                             cases.tractive_force_n, wheel.offset_m, wheel.loaded_radius_m)
+    lever = np.asarray(wheel.offset_m, dtype=float)
+    equivalent = np.where(lever > 0, moment / np.where(lever > 0, lever, 1.0), np.nan)
+    by_radial, by_moment = radial / permissible, equivalent / permissible
+    utilisation = np.fmax(by_radial, by_moment)
+    shape = utilisation.shape
+    return PermissibleResult(
+        position_m=offset, inside=np.isfinite(permissible[..., 0]),
+        permissible_n=permissible[..., 0], radial_wheel_force_n=np.broadcast_to(radial, shape),
+        moment_equivalent_force_n=np.broadcast_to(equivalent, shape),
+        utilisation_radial=np.broadcast_to(by_radial, shape),
+        utilisation_moment=np.broadcast_to(by_moment, shape), utilisation=utilisation,
+        moment_governs=np.nan_to_num(by_moment, nan=-np.inf) > by_radial)
 
 
 def evaluate_shaft(study: Study, to_km) -> ShaftResult | None:

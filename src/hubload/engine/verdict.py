@@ -108,8 +108,7 @@ def shaft_items(study: Study, shaft) -> list[CheckItem]:
     items = []
     for section in shaft.sections:
         name = section.name
-        items.append(CheckItem("shaft_fatigue_safety",
-                               f"shaft '{name}' fatigue safety ({shaft.criterion})",
+        items.append(CheckItem("shaft_fatigue_safety", f"shaft '{name}' fatigue safety",
                                section.min_safety, required, subject=name))
         items.append(CheckItem("shaft_yield_safety", f"shaft '{name}' yield safety",
                                section.yield_safety, required, subject=name))

@@ -87,10 +87,14 @@ def extend_cases(document: dict, result: Result) -> None:
         for entry in cases:
             entry["permissible_utilisation"] = None
     else:
-        for entry, row in zip(cases, json_rows({
-                "permissible_utilisation": permissible.utilisation,
-                "radial_wheel_force_kN": permissible.radial_wheel_force_n / KN}, len(cases))):
-            entry.update(row)
+        rows = json_rows({
+            "permissible_utilisation": permissible.utilisation,
+            "radial_wheel_force_kN": permissible.radial_wheel_force_n / KN,
+            "moment_equivalent_force_kN": permissible.moment_equivalent_force_n / KN,
+            "permissible_utilisation_radial": permissible.utilisation_radial,
+            "permissible_utilisation_moment": permissible.utilisation_moment}, len(cases))
+        for entry, row, moment in zip(cases, rows, permissible.moment_governs.tolist()):
+            entry.update(row, permissible_governs="moment" if moment else "radial force")
     if shaft is not None:
         sections = {section.name: case_sections(section, len(cases))
                     for section in shaft.sections}

@@ -45,28 +45,39 @@ def friction_columns(result: Result) -> list[Column]:
     columns = []
     for label, bearing in friction.bearings.items():
         columns += [Column(f"{label}.friction_torque_Nm", f"M {SHORT[label]}",
-                           list(bearing.torque_nm), "N m", fixed(2),
-                           legend=f"friction torque of the {label} bearing"),
-                    Column(f"{label}.power_W", f"P {SHORT[label]}", list(bearing.power_w), "W",
-                           fixed(1))]
+                           list(bearing.torque_nm), "N m", fixed(2)),
+                    Column(f"{label}.power_W", f"loss {SHORT[label]}", list(bearing.power_w),
+                           "W", fixed(1))]
     return columns
 
 
-def setting_table(result: Result, limit: int | None) -> TableSpec | None:
-    """Per case: the operating setting and its terms, the bearings' friction and power."""
+def setting_table(result: Result, limit: int | None, friction: bool = True) -> TableSpec | None:
+    """Per case: the operating setting and its terms, the bearings' friction and power loss
+    (``friction`` False: the setting only, its friction said in one line, friction_line)."""
     columns = (setting_columns(result) if shows_setting(result) else []) + \
-        friction_columns(result)
+        (friction_columns(result) if friction else [])
     if not columns:
         return None
     count = len(result.study.cases)
     spec = TableSpec("setting", "Bearing setting and friction per case",
                      (Column("case_index", "#", list(range(count))), *columns),
-                     notes=tuple(setting_notes(result)))
+                     notes=tuple(setting_notes(result, friction)))
     governing = result.governing
     return cut_to_cases(spec, governing.system_damage_share, governing.symbol, limit)
 
 
-def setting_notes(result: Result) -> list[str]:
+def friction_line(result: Result) -> str:
+    """The bearings' friction in one line: the spectrum's mean power loss and the peak torque."""
+    friction = result.friction
+    label, bearing = max(friction.bearings.items(), key=lambda kv: float(np.max(kv[1].torque_nm)))
+    worst = int(np.argmax(bearing.torque_nm))
+    return (f"Friction (Palmgren, f0 = {friction.f0:g}): the pair's mean power loss "
+            f"{float(friction.mean_power_w):.1f} W over the spectrum; highest torque "
+            f"{float(bearing.torque_nm[worst]):.2f} N m ({label} bearing, case {worst}); per case: "
+            f"--all or --json.")
+
+
+def setting_notes(result: Result, friction: bool = True) -> list[str]:
     notes = []
     setting = result.setting
     if setting.assembly_m is not None:
@@ -78,10 +89,10 @@ def setting_notes(result: Result) -> list[str]:
     band = band_line(result)
     if band:
         notes.append(band)
-    if result.friction is not None:
-        notes.append(f"Friction: Palmgren's model (f0 = {result.friction.f0:g}); mean power "
-                     f"loss of the pair {float(result.friction.mean_power_w):.1f} W over the "
-                     f"spectrum.")
+    if result.friction is not None and friction:
+        notes.append(f"M: friction torque, loss: power loss (Palmgren, f0 = "
+                     f"{result.friction.f0:g}); the pair's mean loss over the spectrum "
+                     f"{float(result.friction.mean_power_w):.1f} W.")
     return notes
 
 

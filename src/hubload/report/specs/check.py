@@ -115,19 +115,21 @@ def lubrication_table(result: Result, limit: int | None) -> TableSpec | None:
                    alert=kappa_alert),
             Column(f"{label}.e_c", f"eC {short}", list(bearing.e_c), "", fixed(2)),
             Column(f"{label}.a_iso", f"aISO {short}", list(bearing.a_iso), "", fixed(2))]
-    notes = [f"{modified.symbol} = a1 aISO L10 (ISO 281:2007, 9.1), a1 = {float(modified.a1):.3g}; "
-             f"kappa = nu / nu1; '-': standstill."]
-    if any(b.kappa_outside_scope.any() for b in modified.bearings.values()):
-        notes.append("kappa marked !: below 0.1, outside ISO 281's scope; eC and aISO "
-                     "evaluated at kappa = 0.1 (see the warning).")
+    symbol = life_symbols(result)[1]
+    notes = [f"{symbol} = a1 aISO L10 (ISO 281:2007, 9.1), a1 = {float(modified.a1):.3g}; "
+             f"kappa = nu / nu1; '-': standstill"
+             + ("; !: kappa < 0.1, outside ISO 281's scope (eC, aISO at 0.1)."
+                if any(b.kappa_outside_scope.any() for b in modified.bearings.values())
+                else ".")]
     spec = TableSpec("lubrication", "Lubrication per case (ISO 281 modified life)",
                      tuple(columns), notes=tuple(notes))
     return case_limit(result, spec, limit)
 
 
-def ratings_table(result: Result) -> TableSpec | None:
-    """Typed ratings beside those from the internal geometry (ISO 281 C, ISO 76 C0)."""
-    if not result.geometry_ratings:
+def ratings_table(result: Result, always: bool = True) -> TableSpec | None:
+    """Typed ratings beside those from the internal geometry (ISO 281 C, ISO 76 C0); with
+    ``always`` False only where they matter: the refined method rates from the geometry."""
+    if not result.geometry_ratings or not (always or result.refined is not None):
         return None
     pair = result.study.pair.bearings()
     labels = list(result.geometry_ratings)

@@ -46,13 +46,13 @@ def sections_table(result: Result) -> TableSpec:
                safety, legend="first-cycle yield safety", alert=below(required)),
         Column("fatigue_life_h", "life", [float(s.fatigue_life_h) for s in sections], "h",
                hours, legend="S-N fatigue life of the spectrum"))
-    notes = [f"Required safety n >= {required:g} (Shigley's Mechanical Engineering Design, "
-             f"10th ed.)."]
+    notes = []
     endless = [f"'{s.name}'" for s in sections if np.isinf(s.fatigue_life_h)]
     if endless and np.any(result.study.cases.speed_rpm > 0):
         notes.append(f"Infinite fatigue life (every case stays below the endurance limit Se) "
                      f"in {', '.join(endless)}.")
-    return TableSpec("shaft_sections", "Shaft sections", columns, notes=tuple(notes))
+    return TableSpec("shaft_sections", f"Shaft sections (required n >= {required:g}; Shigley, "
+                                       f"10th ed.)", columns, notes=tuple(notes))
 
 
 def utilisation_text(value) -> str:
@@ -68,16 +68,15 @@ def cases_table(result: Result, limit: int | None) -> TableSpec:
     columns += [Column(f"shaft.{s.name}.safety", s.name, list(s.safety), "", safety,
                        alert=below(required)) for s in shaft.sections]
     permissible = shaft.permissible
-    notes = ["Fatigue safety of each section per case ('-': standstill, no stress cycles)."]
+    notes = ["Fatigue safety of each section ('-': standstill)."]
     if permissible is not None:
         columns += [Column("radial_wheel_force_kN", "radial",
                            list(permissible.radial_wheel_force_n / KN), "kN", fixed(2),
                            legend="radial wheel force"),
                     Column("permissible_utilisation", "used", list(permissible.utilisation),
-                           "%", utilisation_text, legend="utilisation of the supplier's "
-                           "permissible radial load", alert=lambda u: float(u) > 1.0)]
+                           "%", utilisation_text, legend="utilisation of the supplier's curve", alert=lambda u: float(u) > 1.0)]
         if bool(permissible.inside):
-            notes.append(f"Supplier's permissible radial load "
+            notes[0] += (f" Supplier's permissible radial load "
                          f"{float(permissible.permissible_n) / KN:.1f} kN at the wheel offset "
                          f"{float(permissible.position_m) / MM:g} mm.")
     spec = TableSpec("shaft_cases", "Shaft per case", tuple(columns), notes=tuple(notes))

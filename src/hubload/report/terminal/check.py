@@ -16,7 +16,7 @@ from hubload.report.columns import CASE_ROWS_SHOWN
 from hubload.report.messages import summary_lines, warning_texts
 from hubload.report.numbers import hours_with_unit, share
 from hubload.report.specs import check as specs
-from hubload.report.specs.assembly import setting_table
+from hubload.report.specs.assembly import friction_line, setting_table
 from hubload.report.specs.operating import operating_table
 from hubload.report.specs.refined import displacement_table, distribution_table
 from hubload.report.specs.shaft import cases_table, checks_table, item_limit, item_value, \
@@ -81,18 +81,28 @@ def lubrication_notes(result: Result) -> list[str]:
     return lines
 
 
+def large(result: Result, show_all: bool) -> bool:
+    """A spectrum too large for every per-case table on a terminal (a classed log)."""
+    return not show_all and len(result.study.cases) > CASE_ROWS_SHOWN
+
+
 def case_tables(result: Result, show_all: bool):
-    """The per-case tables in order; beyond the first, a large spectrum shows fewer rows."""
-    many = len(result.study.cases) > CASE_ROWS_SHOWN
-    first = None if show_all else CASE_ROWS_SHOWN
-    further = None if show_all else (SECONDARY_ROWS if many else CASE_ROWS_SHOWN)
-    tables = [specs.spectrum_table(result, first), operating_table(result, further),
-              specs.loads_table(result, further), specs.lives_table(result, further),
-              specs.lubrication_table(result, further)]
+    """The per-case tables in order. A large spectrum shows its most damaging cases in the
+    spectrum table and the lives table only; the other tables are one --all away."""
+    if large(result, show_all):
+        return [specs.spectrum_table(result, CASE_ROWS_SHOWN),
+                specs.lives_table(result, SECONDARY_ROWS)]
+    tables = [specs.spectrum_table(result, None), operating_table(result, None),
+              specs.loads_table(result, None), specs.lives_table(result, None),
+              specs.lubrication_table(result, None)]
     if result.refined is not None:
-        tables += [distribution_table(result, further), displacement_table(result, further)]
-    tables.append(setting_table(result, further))
+        tables += [distribution_table(result, None), displacement_table(result, None)]
+    tables.append(setting_table(result, None, friction=show_all or result.refined is not None))
     return [table for table in tables if table is not None]
+
+
+LARGE_NOTE = ("Per-case loads, operating points, lubrication, setting, friction and shaft "
+              "tables of a spectrum this large: --all lists them, --report or --json has them.")
 
 
 def render_check(result: Result, console: Console, show_all: bool = False) -> None:
@@ -102,17 +112,21 @@ def render_check(result: Result, console: Console, show_all: bool = False) -> No
     console.print(governing_line(result))
     for table in case_tables(result, show_all):
         render(table, console)
-    ratings = specs.ratings_table(result)
+    if large(result, show_all):
+        console.print(Text(LARGE_NOTE))
+    ratings = specs.ratings_table(result, always=show_all)
     if ratings is not None:
         render(ratings, console)
     render(specs.summary_table(result), console)
     for line in lubrication_notes(result):
         console.print(Text(f"Note: {line}"))
+    if result.friction is not None and not (show_all or result.refined is not None):
+        console.print(Text(friction_line(result)))
     console.print(dominant_line(result))
     if result.shaft is not None:
         render(sections_table(result), console)
-        render(cases_table(result, None if show_all else (
-            SECONDARY_ROWS if len(study.cases) > CASE_ROWS_SHOWN else CASE_ROWS_SHOWN)), console)
+        if not large(result, show_all):
+            render(cases_table(result, None), console)
     console.print(verdict_line(result))
     if result.shaft is not None and result.overall is not None:  # else the verdict line says all
         render(checks_table(result), console)
