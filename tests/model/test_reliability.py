@@ -9,16 +9,9 @@ from hypothesis import strategies as st
 from scipy import optimize, stats
 
 from hubload.model import reliability as rel
+from reliability_reference import scipy_life, simulated_renewal_counts
 
 LN_090 = math.log(1 / 0.9)
-
-
-def scipy_life(kind, l10_h, slope):
-    """The same distribution built in scipy straight from the formula stated in ISO 281:2007, 9.2
-    (kind iso281) or from F(L10) = 0.1 of a two-parameter Weibull (kind weibull)."""
-    if kind == "iso281":
-        return stats.weibull_min(slope, loc=0.05 * l10_h, scale=0.95 * l10_h / LN_090 ** (1 / slope))
-    return stats.weibull_min(slope, scale=l10_h / LN_090 ** (1 / slope))
 
 
 def significant(value, digits=2):
@@ -105,16 +98,6 @@ def test_renewal_function_of_erlang2_lives_matches_closed_form():
     renewals = rel.renewal_function_on_grid(stats.gamma(2, scale=1 / lam).cdf(grid))
     expected = lam * grid / 2 - 0.25 + np.exp(-2 * lam * grid) / 4
     assert renewals == pytest.approx(expected, abs=2e-6)
-
-
-def simulated_renewal_counts(distribution, times, samples, rng):
-    """Renewals up to each time in ``samples`` simulated histories (a fresh life at each failure)."""
-    elapsed = np.zeros(samples)
-    counts = np.zeros((samples, len(times)))
-    while np.any(elapsed <= times[-1]):
-        elapsed += distribution.rvs(size=samples, random_state=rng)
-        counts += elapsed[:, None] <= times[None, :]
-    return counts
 
 
 @pytest.mark.parametrize("kind, slope", [("weibull", 1.5), ("iso281", 1.5), ("weibull", 3.0),
