@@ -105,9 +105,10 @@ def test_quadrature_is_converged(sigma, cap):
 
 
 def simulate_machines(spec, machines, median, sigma, years, warranty_years, cap, calibration, rng):
-    """Per simulated machine: first failures and renewals per unit at each year end and at the warranty end."""
+    """Per simulated machine: failed units and renewals at each year end and at the warranty end."""
     usage = median * np.exp(sigma * rng.standard_normal(machines))
-    times = np.column_stack([usage[:, None] * np.arange(1, years + 1), np.minimum(usage * warranty_years, cap)])
+    times = np.column_stack([usage[:, None] * np.arange(1, years + 1),
+                             np.minimum(usage * warranty_years, cap)])
     first = np.zeros((machines, years + 1))
     renewals = np.zeros((machines, years + 1))
     any_claim = np.zeros(machines, dtype=bool)
@@ -135,9 +136,9 @@ def test_fleet_forecast_matches_a_seeded_simulation(spec, sigma, cap, calibratio
     # tolerance 4 standard errors of the simulated mean.
     first, renewals, any_claim = simulate_machines(spec, 100_000, 1500.0, sigma, 4, 2.0, cap, calibration,
                                                    np.random.default_rng(7))
-    result = fleet.fleet_forecast([LifeDistribution(*u) for u in spec], machines=1, usage_median_h_per_year=1500.0,
-                                  usage_sigma_ln=sigma, years=4, warranty_years=2.0, warranty_cap_h=cap,
-                                  calibration=calibration)
+    result = fleet.fleet_forecast([LifeDistribution(*u) for u in spec], machines=1,
+                                  usage_median_h_per_year=1500.0, usage_sigma_ln=sigma, years=4,
+                                  warranty_years=2.0, warranty_cap_h=cap, calibration=calibration)
     forecast = {"first": np.append(result.first_failures_cumulative, result.warranty_first_failures),
                 "renewals": np.append(result.failures_cumulative, result.warranty_failures),
                 "claim": np.array([result.machines_with_claim])}

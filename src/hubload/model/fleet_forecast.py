@@ -55,7 +55,7 @@ import numpy as np
 from numpy.polynomial.legendre import leggauss
 from scipy import fft
 
-from hubload.model.reliability import LifeDistribution, expected_renewals, series_failure_probability
+from hubload.model.reliability import expected_renewals, series_failure_probability
 
 # Gauss-Legendre nodes on each piece of the z range (see the module docstring).
 NODES_PER_PIECE = 32
@@ -93,8 +93,8 @@ def lognormal_usage_nodes(median_h_per_year: float, sigma_ln: float, kinks_h_per
 
     kinks_h_per_year (..., b): usages at which the integrand has a kink (any value,
     0 and inf allowed); each row gets Gauss-Legendre nodes on the pieces of z between
-    them and FIXED_CUTS_Z [1]; results have shape (..., (b + 6) nodes_per_piece). sigma_ln 0 gives the
-    single node (median, 1) per row.
+    them and FIXED_CUTS_Z [1]; results have shape (..., (b + 6) nodes_per_piece).
+    sigma_ln 0 gives the single node (median, 1) per row.
     """
     kinks = np.asarray(kinks_h_per_year, dtype=float)
     if sigma_ln == 0.0:

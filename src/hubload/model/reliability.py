@@ -43,7 +43,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 from scipy.interpolate import CubicSpline
 
-# F(L10) = 0.1 by the definition of L10 [1, 3.10]: the cumulative hazard at L10.
+# F(L10) = 0.1 by the definition of the basic rating life L10 [1]: the cumulative hazard at L10.
 HAZARD_AT_L10 = math.log(1.0 / 0.9)
 # ISO 281:2007, 9.2 [1]: slope and minimum life (fraction of L10) behind table 12.
 ISO281_SLOPE = 1.5
