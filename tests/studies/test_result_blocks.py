@@ -71,14 +71,19 @@ def test_sweep_reports_where_the_shaft_safety_crosses_its_required_value():
 
 
 def grid_sweep(lives_h):
-    """A 2 x 2 sweep stand-in whose points carry only the governing life (target 100 h)."""
-    axes = tuple(SimpleNamespace(key=key, values=values)
+    """A 2 x 2 sweep whose points carry only the governing life (target 100 h)."""
+    from hubload.casefile.variation import KeyPath
+    from hubload.schema.spec import Field
+    from hubload.studies.sweep import Axis
+
+    axes = tuple(Axis(KeyPath(key, ((key, None),), Field(key, "number", f"{key} [mm]")), values)
                  for key, values in (("a", np.array([1.0, 2.0])), ("b", np.array([10.0, 20.0]))))
+    study = SimpleNamespace(cases=SimpleNamespace(names=()), shaft=None)
     return SimpleNamespace(
         title="t", axes=axes, shape=(2, 2), file_values={"a": None, "b": None},
         governing_life_h=np.array([np.inf if v is None else v for v in lives_h]),
-        targets_h=np.full(4, 100.0), first=SimpleNamespace(governing=SimpleNamespace(
-            symbol="L10")))
+        targets_h=np.full(4, 100.0), first=SimpleNamespace(
+            governing=SimpleNamespace(symbol="L10"), study=study))
 
 
 def test_life_map_draws_grids_with_zero_or_only_infinite_lives():

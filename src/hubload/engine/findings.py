@@ -225,6 +225,17 @@ def preload_friction_findings(result) -> list[Finding]:
     return found
 
 
+def one_sided_findings(study: Study) -> list[Finding]:
+    """Every case with a side force has it on the same side: a wheel end sees both (turns
+    both ways, slopes both ways), and the inside wheel of a turn can be the harder case."""
+    side = np.asarray(study.cases.side_force_n, dtype=float)
+    loaded = np.abs(side) > 0
+    if not np.any(loaded) or (np.any(side[loaded] > 0) and np.any(side[loaded] < 0)):
+        return []
+    return [Finding("one_sided_side_force", values={
+        "inboard": bool(np.all(side[loaded] > 0)), "cases": float(np.sum(loaded))})]
+
+
 def collect(result) -> tuple[Finding, ...]:
     """Every finding of a single study's result, in the order the outputs list them."""
     study = result.study
@@ -232,4 +243,5 @@ def collect(result) -> tuple[Finding, ...]:
         operating_findings(study) + static_findings(study, result.bearings)
         + modified_findings(result.modified) + rating_findings(study, result.geometry_ratings)
         + refined_findings(result.refined) + setting_findings(result)
-        + shaft_findings(study, result.shaft) + methods_findings(study, result.governing))
+        + shaft_findings(study, result.shaft) + methods_findings(study, result.governing)
+        + one_sided_findings(study))

@@ -205,8 +205,8 @@ def summary_lines(findings: Sequence[Finding], names: Sequence[str],
         severity = SEVERITY.get(kind, lambda f: 0.0)
         worst = sorted(per_case, key=severity, reverse=True)[:WORST_SHOWN]
         lines.append(f"{KIND_NAMES[kind]}: {len(per_case):,} cases, the worst "
-                     + ", ".join(quoted(names, f.case) for f in worst)
-                     + "; --all or --json lists every case.")
+                     + ", ".join(f"#{f.case}" for f in worst)
+                     + " (case numbers of the tables); --all or --json lists every case.")
     return lines
 
 
@@ -279,6 +279,16 @@ def preload_raises_friction(found: list[Finding], names) -> list[str]:
             f"and heat grow steeply with preload." for f in found]
 
 
+def one_sided_side_force(found: list[Finding], names) -> list[str]:
+    side = "inboard" if found[0].values["inboard"] else "outboard"
+    return [f"Every case with a side force ({found[0].values['cases']:.0f}) has it {side}: a "
+            f"wheel end sees both sides (turns both ways, slopes both ways), and the inside "
+            f"wheel of a turn often loads the outboard bearing harder. Add the mirrored cases "
+            f"(side force of the other sign, the other wheel's load), or describe the machine "
+            f"in a machine file (hubload machine, docs/machine.md), which derives every wheel "
+            f"end's cases both ways."]
+
+
 STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "all_standstill": all_standstill, "static_safety_low": static_safety_low,
     "kappa_outside_scope": kappa_outside_scope, "thin_oil": thin_oil,
@@ -290,4 +300,5 @@ STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "log_shaft_safety_low": log_shaft_safety_low,
     "log_permissible_exceeded": log_permissible_exceeded,
     "setting_becomes_preload": setting_becomes_preload, "cup_fit_lost": cup_fit_lost,
-    "preload_raises_friction": preload_raises_friction}
+    "preload_raises_friction": preload_raises_friction,
+    "one_sided_side_force": one_sided_side_force}

@@ -57,9 +57,9 @@ WHEEL = Table(
     fields=(
         Field("offset_mm", "number", "Axial position of the wheel centre plane [mm] "
               "(may be negative: wheel centre inboard of the mounting face).",
-              required=True, example=95),
+              required=True, example=95, label="wheel offset"),
         Field("loaded_radius_mm", "number", "Contact patch to wheel axis under load [mm].",
-              required=True, exclusive_minimum=0, example=330),
+              required=True, exclusive_minimum=0, example=330, label="loaded radius"),
         Field("rolling_radius_mm", "number", "Rolling radius [mm], used for km/h <-> r/min and "
               "for distances (default: loaded_radius_mm).", exclusive_minimum=0),
         Field("adhesion_mu", "number", "Tyre-ground adhesion coefficient: a tractive or braking "
@@ -258,12 +258,12 @@ CASE = Table(
               maximum=100 + TIME_SUM_TOLERANCE_PERCENT, example=100),
         Field("wheel_load_kN", "number", "Vertical force of the ground on the tyre [kN]; "
               "required unless a [vehicle] block derives it from lateral_accel_g.",
-              minimum=0, example=25),
+              minimum=0, example=25, label="wheel load"),
         Field("side_force_kN", "number", "Force of the ground on the tyre along the axle [kN], "
               "positive towards the vehicle centreline (inboard); default 0, or wheel load x "
-              "lateral_accel_g.", example=0),
+              "lateral_accel_g.", example=0, label="side force (+ inboard)"),
         Field("tractive_force_kN", "number", "Longitudinal force at the tyre [kN], "
-              "+ driving, - braking (default 0).", example=5),
+              "+ driving, - braking (default 0).", example=5, label="tractive force"),
         Field("speed_rpm", "number", "Wheel speed [r/min] (0: standstill).", minimum=0),
         Field("speed_kmh", "number", "Vehicle speed [km/h], converted with the rolling radius.",
               minimum=0, example=8),

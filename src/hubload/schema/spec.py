@@ -23,6 +23,7 @@ class Field:
     exclusive_maximum: float | None = None
     choices: tuple[str, ...] = ()
     example: Any = None
+    label: str = ""          # a few words for axes and headers where the doc's start reads poorly
 
     def __post_init__(self):
         if self.kind not in KINDS:

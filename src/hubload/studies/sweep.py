@@ -29,16 +29,33 @@ MAX_POINTS = 100_000
 BATCH_POINTS = 1024
 
 
+LINK = "&"        # KEY=START:STOP:COUNT&KEY2=START:STOP moves two keys along one axis
+
+
 @dataclass(frozen=True)
 class Axis:
-    """One varied key and its evenly spaced values."""
+    """One sweep axis: a varied key and its evenly spaced values, and any keys linked to it
+    (moved together, e.g. a tyre's loaded and rolling radius), each with its own values."""
 
     path: KeyPath
     values: np.ndarray
+    linked: tuple[tuple[KeyPath, np.ndarray], ...] = ()
 
     @property
     def key(self) -> str:
         return self.path.text
+
+    @property
+    def text(self) -> str:
+        """Every key that moves along the axis: 'a & b'."""
+        return f" {LINK} ".join(path.text for path, _ in self.moving())
+
+    def moving(self) -> tuple[tuple[KeyPath, np.ndarray], ...]:
+        return ((self.path, self.values), *self.linked)
+
+    def at(self, index: int) -> dict[KeyPath, float]:
+        """The value of every key of the axis at grid index ``index``."""
+        return {path: float(values[index]) for path, values in self.moving()}
 
 
 @dataclass(frozen=True)
@@ -133,7 +150,26 @@ class Sweep:
 
 
 def parse_vary(spec: str, document: dict, file: str) -> Axis:
-    """``KEY=START:STOP:COUNT`` -> Axis; InputError (naming the file and key) when malformed."""
+    """``KEY=START:STOP:COUNT``, optionally linked to more keys moving with it
+    (``&KEY2=START:STOP[:COUNT]``, the same count) -> Axis; InputError (naming the file and
+    key) when malformed."""
+    first, *others = spec.split(LINK)
+    axis = parse_one(first, document, file)
+    linked = []
+    for part in others:
+        if part.count(":") == 1:
+            part = f"{part}:{len(axis.values)}"
+        found = parse_one(part, document, file)
+        if len(found.values) != len(axis.values):
+            raise InputError(f"linked keys move together: expected COUNT {len(axis.values)} "
+                             f"like {axis.key}, got {len(found.values)}", file=file,
+                             key_path=found.key)
+        linked.append((found.path, found.values))
+    return Axis(path=axis.path, values=axis.values, linked=tuple(linked))
+
+
+def parse_one(spec: str, document: dict, file: str) -> Axis:
+    """One ``KEY=START:STOP:COUNT``."""
     key, equals, span = spec.partition("=")
     key = key.strip()
     parts = span.split(":")
@@ -182,17 +218,17 @@ def run_sweep(file: str, specs: Sequence[str],
     if not specs:
         raise InputError("give at least one --vary KEY=START:STOP:COUNT", file=file)
     axes = tuple(parse_vary(spec, document, file) for spec in specs)
-    keys = [axis.key for axis in axes]
+    keys = [path.text for axis in axes for path, _ in axis.moving()]
     if len(set(keys)) != len(keys):
         raise InputError(f"each key may be varied once, got {', '.join(keys)}", file=file)
     total = math.prod(len(axis.values) for axis in axes)
     if total > MAX_POINTS:
         raise InputError(f"the grid has {total:,} points; at most {MAX_POINTS:,} are allowed",
                          file=file)
-    grid = list(itertools.product(*(axis.values for axis in axes)))
+    grid = list(itertools.product(*(range(len(axis.values)) for axis in axes)))
     chunks, values = [], []
     for start, stop in chunk_bounds(total):
-        chunk = [{axis.path: float(v) for axis, v in zip(axes, point)}
+        chunk = [{path: value for axis, i in zip(axes, point) for path, value in axis.at(i).items()}
                  for point in grid[start:stop]]
         studies = variant_studies(document, chunk, file)
         chunks.append(SweepChunk(tuple(studies),
@@ -203,7 +239,8 @@ def run_sweep(file: str, specs: Sequence[str],
             on_progress(len(values), total)
     return Sweep(title=base.title, source=file, axes=axes, values=tuple(values),
                  chunks=tuple(chunks), target_life_h=base.target_life_h,
-                 file_values={axis.key: current_value(document, axis.path) for axis in axes})
+                 file_values={path.text: current_value(document, path)
+                              for axis in axes for path, _ in axis.moving()})
 
 
 def chunk_bounds(total: int) -> list[tuple[int, int]]:

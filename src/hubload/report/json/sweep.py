@@ -32,7 +32,11 @@ def sweep_document(sweep: Sweep) -> dict:
         "source": sweep.source,
         "parameters": [{"key": axis.key, "start": json_number(axis.values[0]),
                         "stop": json_number(axis.values[-1]), "count": len(axis.values),
-                        "file_value": sweep.file_values.get(axis.key)}
+                        "file_value": sweep.file_values.get(axis.key),
+                        "linked": [{"key": path.text, "start": json_number(values[0]),
+                                    "stop": json_number(values[-1]),
+                                    "file_value": sweep.file_values.get(path.text)}
+                                   for path, values in axis.linked]}
                        for axis in sweep.axes],
         "target_life_h": sweep.target_life_h,
         "governing_life": sweep.first.governing.symbol,

@@ -10,6 +10,7 @@ from matplotlib.figure import Figure
 
 from hubload.report.plots import (BEARING_COLOURS, SYSTEM_COLOUR, TARGET_COLOUR, add_caution,
                                   drawable, new_figure, styled)
+from hubload.report.keywords import key_words
 from hubload.report.numbers import hours
 from hubload.report.quantities import all_quantities
 from hubload.studies.sweep import Sweep
@@ -55,11 +56,12 @@ def sweep_line_figure(sweep: Sweep) -> Figure:
     mark_file_value(axes, sweep)
     lives_axes.set_yscale("log")
     lives_axes.set_ylabel("life [h]")
-    lives_axes.set_title(f"{sweep.title}\nlives against {axis.key}", loc="left")
+    lives_axes.set_title(f"{sweep.title}\nlives against {axis_words(sweep, axis, short=True)}",
+                         loc="left")
     lives_axes.legend(fontsize=7, loc="best")
     if safety:
         plot_safeties(axes[1], x, sweep, safety, colours)
-    axes[-1].set_xlabel(axis.key)
+    axes[-1].set_xlabel(axis_words(sweep, axis))
     add_caution(figure)
     return figure
 
@@ -100,6 +102,13 @@ def plot_safeties(axes, x, sweep: Sweep, safety, colours) -> None:
     axes.axhline(1.0, color=TARGET_COLOUR, linewidth=1.2, label="1 (limit)")
     axes.axhline(SAFETY_GUIDE, color=TARGET_COLOUR, linewidth=1, linestyle=":",
                  label=f"s0 = {SAFETY_GUIDE:g} (common practice)")
+    for _, crossings in sweep.shaft_crossings():
+        for crossing in crossings:
+            axes.plot([crossing.value], [required], marker="o", color=SYSTEM_COLOUR, zorder=5)
+            word = "falls below" if crossing.falls_below else "reaches"
+            axes.annotate(f"shaft {word}\nrequired at {crossing.value:.4g}",
+                          (crossing.value, required), textcoords="offset points",
+                          xytext=(6, 8), fontsize=7)
     axes.set_ylabel("safety factor [-]")
     axes.set_ylim(bottom=0)
     axes.legend(fontsize=7, loc="best")
@@ -125,7 +134,7 @@ def sweep_contour_figure(sweep: Sweep) -> Figure:
                             format=hours_label)
             lines = axes.contour(columns.values, rows.values, shown, levels=levels,
                                  colors="white", linewidths=0.5, alpha=0.6)
-            axes.clabel(lines, fontsize=6, fmt=lambda v: hours_label(v) + " h")
+            axes.clabel(lines, fontsize=7, colors="black", fmt=lambda v: hours_label(v) + " h")
         draw_target_contour(axes, sweep, shown)
     if not drawn.size or drawn.min() == drawn.max():  # nothing to shade: say so
         same = f"{hours(drawn.min())} h wherever finite" if drawn.size else "infinite"
@@ -136,20 +145,40 @@ def sweep_contour_figure(sweep: Sweep) -> Figure:
     axes.autoscale_view()
     axes.grid(False)
     mark_file_point(axes, sweep)
-    axes.set_xlabel(columns.key)
-    axes.set_ylabel(rows.key)
-    axes.set_title(f"{sweep.title}\nsystem {name} over {rows.key} and {columns.key}", loc="left")
+    axes.set_xlabel(axis_words(sweep, columns))
+    axes.set_ylabel(axis_words(sweep, rows))
+    axes.set_title(f"{sweep.title}\nsystem {name} over {axis_words(sweep, rows, short=True)} "
+                   f"and {axis_words(sweep, columns, short=True)}", loc="left")
     add_caution(figure)
     return figure
 
 
+MIN_LEVELS = 6     # a map with fewer colour levels cannot be read off
+
+
 def nice_levels(low: float, high: float) -> list[float]:
-    """1-2-5 steps per decade that enclose [low, high] (for log-scaled life maps)."""
-    steps = [m * 10.0 ** k for k in range(math.floor(math.log10(low)) - 1,
-                                          math.ceil(math.log10(high)) + 1) for m in (1, 2, 5)]
-    below = max(v for v in steps if v <= low)
-    above = min(v for v in steps if v >= high)
-    return [v for v in steps if below <= v <= above]
+    """Round steps per decade (1-2-5, or finer where the range spans little) that enclose
+    [low, high] with at least MIN_LEVELS levels (for log-scaled life maps)."""
+    for mantissas in ((1, 2, 5), (1, 1.5, 2, 3, 5, 7), (1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 7, 8, 9)):
+        steps = [m * 10.0 ** k for k in range(math.floor(math.log10(low)) - 1,
+                                              math.ceil(math.log10(high)) + 1)
+                 for m in mantissas]
+        below = max(v for v in steps if v <= low)
+        above = min(v for v in steps if v >= high)
+        levels = [v for v in steps if below <= v <= above]
+        if len(levels) >= MIN_LEVELS:
+            break
+    return levels
+
+
+def axis_words(sweep: Sweep, axis, short: bool = False) -> str:
+    """What an axis moves, in words with units (the file format's descriptions)."""
+    study = sweep.first.study
+    sections = [s.name for s in study.shaft.sections] if study.shaft is not None else []
+    words = [key_words(path, study.cases.names, sections) for path, _ in axis.moving()]
+    if short:
+        words = [w.split(" [")[0] for w in words]
+    return " & ".join(words)
 
 
 def hours_label(value: float, _position=None) -> str:

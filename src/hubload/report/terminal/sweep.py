@@ -11,10 +11,12 @@ from rich.table import Table
 from rich.text import Text
 
 from hubload.report.cautions import CAUTIONS
+from hubload.report.keywords import key_words
 from hubload.report.numbers import hours, safety
 from hubload.report.quantities import Quantity, all_quantities, governing_key, \
     governing_quantity
-from hubload.report.terminal.tables import plain
+from hubload.report.columns import Column, TableSpec
+from hubload.report.terminal.tables import plain, render as render_spec
 from hubload.studies.sweep import Sweep
 
 MAP_MAX_COLUMNS = 7
@@ -37,40 +39,30 @@ def table_quantities(sweep: Sweep) -> list[Quantity]:
     return found
 
 
-def pass_text(passed: bool) -> Text:
-    return Text("pass", style="green") if passed else Text("FAIL", style="bold red")
+def pass_text(passed) -> str:
+    return "pass" if passed else "FAIL"
 
 
-def point_table(sweep: Sweep, kind: str) -> Table:
+def point_table(sweep: Sweep, kind: str) -> TableSpec:
+    """Per point: the varied keys' values, then the lives (or the safeties)."""
     quantities = [q for q in table_quantities(sweep) if q.kind == kind]
-    unit = " (h)" if kind == "life" else ""
-    table = Table(title=("Lives" if kind == "life" else "Safety factors") + unit,
-                  title_justify="left", box=box.SIMPLE_HEAD, pad_edge=False,
-                  collapse_padding=True)
-    for axis in sweep.axes:
-        table.add_column(axis.key, justify="right", min_width=min(len(axis.key), 24))
-    for item in quantities:
-        table.add_column(item.label.replace(" ", "\n", 1), justify="right", no_wrap=True)
-    targets = sweep.targets_h if kind == "life" else None
-    overall = sweep.column(lambda r: r.overall.passed) \
-        if kind == "life" and sweep.first.overall is not None and sweep.first.shaft is not None \
-        else None
-    if targets is not None:
-        table.add_column("target")
-    if overall is not None:
-        table.add_column("overall")
-    columns = [sweep.column(item.of) for item in quantities]
-    governing = sweep.governing_life_h
-    for row, values in enumerate(sweep.values):
-        cells = [f"{values[a.key]:g}" for a in sweep.axes]
-        cells += [quantity_text(column[row], item.kind)
-                  for item, column in zip(quantities, columns)]
-        if targets is not None:
-            cells.append(pass_text(governing[row] >= targets[row]))
-        if overall is not None:
-            cells.append(pass_text(bool(overall[row])))
-        table.add_row(*cells)
-    return table
+    moving = [path for axis in sweep.axes for path, _ in axis.moving()]
+    columns = [Column(path.text, path.segments[-1][0], [v[path.text] for v in sweep.values],
+                      text=lambda v: f"{v:g}") for path in moving]
+    text = hours if kind == "life" else safety
+    columns += [Column(item.key, item.label, list(sweep.column(item.of)),
+                       "h" if kind == "life" else "", text) for item in quantities]
+    if kind == "life" and sweep.targets_h is not None:
+        passed = sweep.governing_life_h >= sweep.targets_h
+        columns.append(Column("target", "target", [pass_text(p) for p in passed],
+                              alert=lambda t: t == "FAIL"))
+    first = sweep.first
+    if kind == "life" and first.overall is not None and first.shaft is not None:
+        overall = sweep.column(lambda r: r.overall.passed)
+        columns.append(Column("overall", "overall", [pass_text(p) for p in overall],
+                              alert=lambda t: t == "FAIL"))
+    return TableSpec(f"sweep_{kind}", "Lives" if kind == "life" else "Safety factors",
+                     tuple(columns), keep_first=len(moving))
 
 
 def compact_hours(value: float) -> str:
@@ -159,13 +151,23 @@ def crossing_table(sweep: Sweep, title: str, found) -> Table | None:
     return table
 
 
+def axis_lines(sweep: Sweep) -> list[str]:
+    """What each axis moves, in the file format's words."""
+    study = sweep.first.study
+    sections = [s.name for s in study.shaft.sections] if study.shaft is not None else []
+    return [f"{path.text}: {key_words(path, study.cases.names, sections)}"
+            for axis in sweep.axes for path, _ in axis.moving()]
+
+
 def render(sweep: Sweep, console: Console) -> None:
     console.print(Text.assemble((plain(sweep.title), "bold"), f"  ({plain(sweep.source)})"))
+    for line in axis_lines(sweep):
+        console.print(Text(plain(line)))
     if len(sweep.axes) == 2:
         console.print(life_map(sweep))
     else:
-        console.print(point_table(sweep, "life"))
-        console.print(point_table(sweep, "safety"))
+        render_spec(point_table(sweep, "life"), console)
+        render_spec(point_table(sweep, "safety"), console)
     if len(sweep.axes) >= 2:
         for table in crossing_tables(sweep):
             console.print(table)

@@ -10,6 +10,7 @@ from __future__ import annotations
 
 import io
 import re
+import textwrap
 
 from rich import box
 from rich.console import Console
@@ -27,11 +28,15 @@ def plain(text: str) -> str:
     return CONTROL.sub("", str(text))
 
 
-def heading(column: Column) -> Text:
-    return Text(column.label + (f"\n{column.unit}" if column.unit else ""))
+def heading(column: Column, width: int = 0) -> Text:
+    """The label (wrapped at spaces to ``width`` when given) over the unit."""
+    lines = textwrap.wrap(column.label, width) if width else [column.label]
+    return Text("\n".join(lines or [""]) + (f"\n{column.unit}" if column.unit else ""))
 
 
-def rich_table(spec: TableSpec, columns: list[Column], title: str) -> Table:
+def rich_table(spec: TableSpec, columns: list[Column], title: str,
+               wrap: bool = False) -> Table:
+    """The columns as a rich table; ``wrap``: headers wrapped at spaces to the cells' width."""
     table = Table(title=Text(plain(title)), title_justify="left", box=box.SIMPLE_HEAD,
                   pad_edge=False, show_edge=False)
     for column in columns:
@@ -41,9 +46,11 @@ def rich_table(spec: TableSpec, columns: list[Column], title: str) -> Table:
                                  (len(column.cell(r)) for r in range(spec.row_count)),
                                  default=1)))
         else:
+            words = column.label.split() if wrap else [column.label]
             width = max([len(column.cell(r)) for r in range(spec.row_count)]
-                        + [len(line) for line in heading(column).plain.split("\n")])
-            table.add_column(heading(column), justify="right", no_wrap=True, min_width=width)
+                        + [len(column.unit)] + [len(word) for word in words])
+            table.add_column(heading(column, width if wrap else 0), justify="right",
+                             no_wrap=True, min_width=width)
     for row in range(spec.row_count):
         table.add_row(*(Text(plain(c.cell(row)), style="bold red" if c.alerted(row) else "")
                         for c in columns))
@@ -57,28 +64,34 @@ def fits(console: Console, table: Table) -> bool:
     return unbounded.measure(table).minimum <= console.width
 
 
-def column_groups(spec: TableSpec, console: Console) -> list[list[Column]]:
-    """The columns in groups that each fit the console, the leading ones in every group."""
-    lead, rest = list(spec.columns[:spec.keep_first]), list(spec.columns[spec.keep_first:])
+def column_groups(spec: TableSpec, console: Console) -> tuple[list[list[Column]], bool]:
+    """The columns in groups that each fit the console, the leading ones in every group, and
+    whether the headers wrap: one table with headers on one line if it fits, else with
+    headers wrapped at spaces, else split."""
+    columns = list(spec.columns)
+    for wrap in (False, True):
+        if fits(console, rich_table(spec, columns, "", wrap)):
+            return [columns], wrap
+    lead, rest = columns[:spec.keep_first], columns[spec.keep_first:]
     groups: list[list[Column]] = []
     current: list[Column] = []
     for column in rest:
         trial = lead + current + [column]
-        if current and not fits(console, rich_table(spec, trial, "")):
+        if current and not fits(console, rich_table(spec, trial, "", True)):
             groups.append(lead + current)
             current = [column]
         else:
             current.append(column)
     groups.append(lead + current)
-    return groups
+    return groups, True
 
 
 def render(spec: TableSpec, console: Console) -> None:
     """Print ``spec`` (split to fit), then what was left out, its legend and its notes."""
-    groups = column_groups(spec, console)
+    groups, wrap = column_groups(spec, console)
     for index, group in enumerate(groups):
         title = spec.title if index == 0 else "(continued)"
-        console.print(rich_table(spec, group, title))
+        console.print(rich_table(spec, group, title, wrap))
     for line in ([spec.omitted_note] if spec.omitted_note else []) + legend_lines(spec) \
             + list(spec.notes):
         console.print(Text(plain(line)))
