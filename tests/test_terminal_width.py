@@ -68,3 +68,17 @@ def test_study_commands_fit_the_terminal(width, args):
 def test_spectrum_of_a_log_fits_the_terminal(width, tmp_path):
     log = write_log(tmp_path / "log.csv", realistic_log(3000))
     assert_uncut(run(width, "spectrum", log, "--case-file", YARD), width)
+
+
+def test_a_classed_spectrum_of_a_thousand_cases_stays_short(tmp_path):
+    # Issue goal: under 150 lines at 80 columns, the most damaging cases only by default.
+    import sys
+
+    sys.path.insert(0, str(ROOT / "tests" / "benchmarks"))
+    from bench_report import classed_spectrum
+
+    big = classed_spectrum(tmp_path / "classed.toml")
+    text = run(80, "check", big)
+    assert_uncut(text, 80)
+    assert len(text.splitlines()) < 150 and "990 more cases" in " ".join(text.split())
+    assert len(run(80, "check", big, "--all").splitlines()) > 1000

@@ -16,7 +16,10 @@ def mark_assembly(axes, sweep: SettingSweep) -> None:
     """The file's assembly band (hatched, readable in grey) and, by an arrow, where the
     dominant case's operating setting lies from it (fits and temperatures)."""
     given = sweep.study.pair.setting
-    if given is None:
+    if given is None:   # the file's own (operating) setting
+        value = float(np.asarray(sweep.study.pair.axial_setting_m).flat[0]) / UM
+        axes.axvline(value, color="#555555", linewidth=1.0, linestyle="-.",
+                     label=f"file: {value:g} um")
         return
     assembly, tolerance = float(given.assembly_m) / UM, float(given.tolerance_m) / UM
     axes.axvspan(assembly - tolerance, assembly + tolerance, facecolor="none",
