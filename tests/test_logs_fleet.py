@@ -133,3 +133,43 @@ def test_bad_log_in_a_fleet_stops_the_run_unless_skipped(fleet, tmp_path):
     assert len(stopped.output.strip().splitlines()) == 1  # one line, like every input error
     skipped = spectrum_json(mixed, "--case-file", YARD_LOADER, "--jobs", "1", "--skip-bad")
     assert len(skipped["logs"]) == 3 and len(skipped["skipped"]) == 1
+
+
+def test_fleet_mix_weights_each_log_by_its_share_of_machines(fleet, tmp_path):
+    # Palmgren-Miner is linear in time: a fleet in which a share w_i of the machines works like
+    # log i wears at sum w_i D_i per hour, D_i a log's damage per hour (whatever its length).
+    folder, _ = fleet
+    logs = json.loads(CliRunner().invoke(main, ["spectrum", str(folder), "--case-file",
+                                                str(YARD_LOADER), "--jobs", "1", "--json"]).output)
+    rates = {entry["log"].split("/")[-1]: {label: 1 / entry["direct"]["bearings"][label]["l10_h"]
+                                           for label in ("outboard", "inboard")}
+             for entry in logs["logs"]}
+    shares = {"machine-1.csv": 1, "machine-2.parquet": 3, "machine-3.csv": 0}
+    weights = tmp_path / "mix.csv"
+    weights.write_text("log,share\n" + "".join(f"{k},{v}\n" for k, v in shares.items()))
+    mixed = spectrum_json(folder, "--case-file", YARD_LOADER, "--jobs", "1", "--weights",
+                          weights)
+    for label in ("outboard", "inboard"):
+        expected = sum(shares[name] / 4 * rates[name][label] for name in shares)
+        assert 1 / mixed["direct"]["bearings"][label]["l10_h"] == pytest.approx(expected,
+                                                                                rel=1e-9)
+    assert mixed["fleet_mix"] == {"machine-1.csv": 0.25, "machine-2.parquet": 0.75,
+                                  "machine-3.csv": 0.0}
+    first = mixed["ranking"][0]
+    assert {"s0", "shaft_min_safety", "dominant_class", "governing_life"} <= set(first)
+
+
+@pytest.mark.parametrize("text, where", [
+    ("log,share\nmachine-1.csv,1\n", "no share for"),
+    ("log,share\nnope.csv,1\nmachine-1.csv,1\nmachine-2.parquet,1\nmachine-3.csv,1\n",
+     "row 2, column 1"),
+    ("log,share\nmachine-1.csv,-1\nmachine-2.parquet,1\nmachine-3.csv,1\n", "row 2, column 2"),
+    ("name,count\n", "row 1"),
+])
+def test_bad_fleet_mix_names_the_row(fleet, tmp_path, text, where):
+    folder, _ = fleet
+    weights = tmp_path / "mix.csv"
+    weights.write_text(text)
+    found = CliRunner().invoke(main, ["spectrum", str(folder), "--case-file", str(YARD_LOADER),
+                                      "--jobs", "1", "--weights", str(weights)])
+    assert found.exit_code == 2 and where in found.output and "mix.csv" in found.output

@@ -142,6 +142,12 @@ class BriefResult(Wrapped):
 
         return brief_markdown(self.value, self.inputs)
 
+    def to_html(self) -> str:
+        """The same brief as a printable, self-contained HTML page."""
+        from hubload.report.html.brief import brief_html
+
+        return brief_html(self.value, self.inputs)
+
 
 def brief(path: str | Path, required_s0: float | None = None,
           method: str | None = None) -> BriefResult:
@@ -178,11 +184,13 @@ class LogsResult(Wrapped):
 def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = (),
              classes: Sequence[str] = (), gaps: str = "error", max_gap_s: float | None = None,
              jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
-             on_log_done=None) -> LogsResult:
+             on_log_done=None, weights: str | Path | None = None) -> LogsResult:
     """The direct lives and the classed spectrum of a measured log, or of a folder of logs
-    (each log, the fleet combined, the ranking); ``case_file`` describes the wheel end."""
+    (each log, the fleet combined -- by logged hours, or by the fleet mix of a ``weights``
+    CSV file -- and the ranking); ``case_file`` describes the wheel end."""
     from hubload.logs.analysis import analyse, log_options
 
     options = log_options(columns, classes, gaps, max_gap_s)
     return LogsResult(analyse(log, case_file, options, jobs=jobs, cluster=cluster,
-                                  skip_bad=skip_bad, on_log_done=on_log_done), {})
+                                  skip_bad=skip_bad, on_log_done=on_log_done,
+                                  weights=weights), {})

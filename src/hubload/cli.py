@@ -119,7 +119,8 @@ def compare(files, as_json, plot, force, method):
 @main.command()
 @click.argument("file", type=click.Path(dir_okay=False))
 @click.option("--out", type=click.Path(dir_okay=False),
-              help="Write the Markdown sheet to this file (default: print it).")
+              help="Write the sheet to this file: Markdown (.md) or a printable HTML page "
+                   "(.html), by the extension (default: print the Markdown).")
 @click.option("--force", is_flag=True, help="Overwrite an existing --out file.")
 @click.option("--s0", "required_s0", type=float, default=None,
               help="Static safety s0 the required static ratings must reach "
@@ -127,7 +128,7 @@ def compare(files, as_json, plot, force, method):
 @method_option()
 @reports_input_errors
 def brief(file, out, force, required_s0, method):
-    """A supplier brief for FILE: required ratings and open questions (Markdown)."""
+    """A supplier brief for FILE: cases, demands, required ratings, shaft, open questions."""
     from hubload import commands
     commands.brief(file, out=out, force=force, required_s0=required_s0, method=method)
 
@@ -172,6 +173,9 @@ def setting(file, start_um, stop_um, step_um, as_json, plot, force):
 @click.option("--cluster", metavar="ADDRESS", help="Run the logs on a Dask distributed "
               "scheduler, e.g. tcp://scheduler-host:8786.")
 @click.option("--skip-bad", is_flag=True, help="In a folder, leave out logs that cannot be used.")
+@click.option("--weights", type=click.Path(dir_okay=False), help="A folder's fleet mix: CSV with "
+              "columns log,share (share of machines working like each log); the logs are "
+              "combined in those proportions instead of by their logged hours.")
 @reports_input_errors
 def spectrum(**options):
     """Duty spectrum and direct damage of a measured LOG (CSV/Parquet file or folder)."""

@@ -196,3 +196,24 @@ def test_solved_rating_meets_the_target_of_the_verdicts_life_at_99_percent(tmp_p
     assert scaled["life_h"] == pytest.approx(document["project"]["target_life_h"], rel=1e-6)
     markdown = CliRunner().invoke(main, ["brief", str(path)]).output
     assert "infinite" not in table_row(markdown, f"{verdict['life']} now")
+
+
+@pytest.mark.parametrize("scenario", SCENARIOS, ids=lambda p: p.stem)
+def test_brief_holds_every_case_and_the_shafts_verdict(scenario, tmp_path):
+    # A supplier must be able to redo the calculation: every case with its loads as the check
+    # used them, and every shaft item with its limit and result (when the file has a shaft).
+    markdown = CliRunner().invoke(main, ["brief", str(scenario)]).output
+    check = json.loads(CliRunner().invoke(main, ["check", str(scenario), "--json"]).output)
+    for case in check["cases"]:
+        row = table_row(markdown, case["name"])
+        assert f"{case['wheel_load_kN']:.2f}" in row and f"{case['side_force_kN']:.2f}" in row
+        assert f"{case['speed_rpm']:.1f}" in row
+    overall = check["overall_verdict"]
+    if check["shaft"] is not None:
+        for item in overall["items"][1:]:
+            assert table_row(markdown, item["item"])[-1] in ("pass", "FAIL", "not assessed")
+    page = tmp_path / "brief.html"
+    assert CliRunner().invoke(main, ["brief", str(scenario), "--out", str(page)]).exit_code == 0
+    html = page.read_text(encoding="utf-8")
+    assert html.startswith("<!DOCTYPE html>") and "Caution." in html
+    assert all(case["name"] in html for case in check["cases"])

@@ -118,9 +118,10 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
 def brief(file: str, out: str | None = None, force: bool = False,
           required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
-    checked(out, force)
+    checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else ())
     found = api.brief(file, required_s0=required_s0, method=method)
-    text = found.to_markdown()
+    html = out is not None and out.lower().endswith((".html", ".htm"))
+    text = found.to_html() if html else found.to_markdown()
     if out is None:
         click.echo(text, nl=False)
     else:

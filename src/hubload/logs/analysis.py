@@ -17,6 +17,7 @@ from hubload.logs.columns import parse_column_options
 from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
 from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
 from hubload.logs.spectrum import SpectrumResult, spectrum_result
+from hubload.logs.weights import mixed, read_weights
 
 COMBINED_NAME = "combined"
 
@@ -41,6 +42,7 @@ class LogRun:
     results: tuple[SpectrumResult, ...]
     combined: SpectrumResult | None       # a folder: all logs back to back
     failures: tuple[Failure, ...]
+    mix: dict[str, float] | None = None   # the fleet mix the combination used (None: by hours)
 
     @property
     def single(self) -> SpectrumResult | None:
@@ -52,6 +54,15 @@ class LogRun:
         ranked = [Ranked(r, damage_rate(r), damage_rate(r) / fleet if fleet > 0 else None)
                   for r in self.results]
         return sorted(ranked, key=lambda row: -row.damage_per_hour)
+
+
+def usable_shares(mix: dict[str, float], summaries) -> dict[str, float]:
+    """The fleet mix of the logs that could be used (skipped logs leave it), normalised."""
+    kept = {s.name: mix[s.name] for s in summaries}
+    total = sum(kept.values())
+    if total <= 0:
+        raise InputError("the usable logs have no share in the fleet mix")
+    return {name: share / total for name, share in kept.items()}
 
 
 def damage_rate(result: SpectrumResult) -> float:
@@ -77,15 +88,18 @@ def log_paths(log: str | Path) -> list[str]:
 
 def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
             jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
-            on_log_done: Callable[[str], None] | None = None) -> LogRun:
-    """Read, clean, integrate and class every log; a folder's logs combined as a fleet."""
+            on_log_done: Callable[[str], None] | None = None,
+            weights: str | Path | None = None) -> LogRun:
+    """Read, clean, integrate and class every log; a folder's logs combined as a fleet, by
+    their logged hours or, with ``weights`` (a CSV file), by the fleet mix it gives."""
     study, machine = load_machine(case_file)
     paths = log_paths(log)
+    folder = Path(log).is_dir()
+    mix = read_weights(weights, paths) if folder and weights is not None else None
     done = on_log_done or (lambda _path: None)
     found = run_cluster(cluster, paths, study, options, done) if cluster \
         else run_local(paths, study, options, jobs, done)
     failures = tuple(f for f in found if isinstance(f, Failure))
-    folder = Path(log).is_dir()
     if failures and (not folder or not skip_bad):
         if not folder:
             raise InputError(failures[0].message)
@@ -96,7 +110,9 @@ def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
     if not summaries:
         raise InputError("no usable log in the folder", file=str(log))
     results = tuple(spectrum_result(s, study) for s in summaries)
-    combined = spectrum_result(merge_summaries(COMBINED_NAME, summaries, options.classes),
+    shares = None if mix is None else usable_shares(mix, summaries)
+    parts = summaries if shares is None else mixed(summaries, shares)
+    combined = spectrum_result(merge_summaries(COMBINED_NAME, parts, options.classes),
                                study) if folder else None
     return LogRun(case_file=str(case_file), study=study, machine=machine, options=options,
-                  results=results, combined=combined, failures=failures)
+                  results=results, combined=combined, failures=failures, mix=shares)

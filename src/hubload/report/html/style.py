@@ -27,6 +27,7 @@ tbody th, thead th:first-child { text-align: left; font-weight: 600; }
 tbody tr:nth-child(even) { background: #fafbfc; }
 dl { display: grid; grid-template-columns: max-content auto; gap: 2px 16px; }
 dt { color: var(--muted); } dd { margin: 0; }
+table.document td, table.document th { text-align: left; }
 td.alert, th.alert { color: var(--fail); font-weight: 600; }
 p.note { color: var(--muted); font-size: 0.85em; margin: -12px 0 14px; }
 details { margin: 8px 0 18px; } summary { cursor: pointer; color: var(--muted); }

@@ -8,6 +8,7 @@ are null.
 from __future__ import annotations
 
 from dataclasses import asdict
+from pathlib import Path
 
 from hubload.logs.analysis import LogRun
 from hubload.logs.pipeline import CLASS_CHANNELS, LABELS
@@ -16,6 +17,7 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.json.check import governing_entry
 from hubload.report.messages import warning_texts
 from hubload.report.numbers import json_number
+from hubload.report.specs.fleet import dominant_class, lowest_s0, lowest_shaft
 from hubload.units import KN
 
 
@@ -135,6 +137,12 @@ def ranking_entries(run: LogRun) -> list[dict]:
     """Logs from harshest to mildest: the pair's damage per hour on the governing basis (the
     direct life the verdict judges), against the fleet's."""
     return [{"log": row.result.summary.name,
+             "s0": json_number(lowest_s0(row)),
+             "shaft_min_safety": json_number(lowest_shaft(row)),
+             "dominant_class": dominant_class(row),
+             "flags_time_fraction": {flag: json_number(seconds / row.result.summary.total("time_s"))
+                                     for flag, seconds in row.result.summary.flag_time_s.items()
+                                     if seconds > 0},
              "duration_h": json_number(row.result.summary.duration_h),
              "system_l10_h": json_number(row.result.system_life_h),
              "governing_life": {"symbol": row.result.direct_governing.symbol,
@@ -154,5 +162,6 @@ def fleet_document(run: LogRun, policy: str, files: dict[str, str]) -> dict:
         "logs": [log_document(r, policy, files.get(r.summary.name)) for r in run.results],
         "ranking": ranking_entries(run),
         "skipped": [f.message for f in run.failures],
+        "fleet_mix": None if run.mix is None else {Path(k).name: v for k, v in run.mix.items()},
         "cautions": CAUTIONS,
     }

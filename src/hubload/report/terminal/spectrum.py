@@ -14,10 +14,12 @@ from hubload.engine.governing import symbol_of
 from hubload.logs.analysis import LogRun
 from hubload.logs.pipeline import LABELS
 from hubload.logs.spectrum import SpectrumResult
+from hubload.logs.weights import mix_note
 from hubload.report.cautions import CAUTIONS
 from hubload.report.messages import warning_texts
 from hubload.report.numbers import hours, safety, share
-from hubload.report.terminal.tables import plain
+from hubload.report.specs.fleet import fleet_table
+from hubload.report.terminal.tables import plain, render as render_spec
 from hubload.units import KN
 
 TOP_CASES = 10
@@ -133,30 +135,15 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
         console.print(Text.assemble(("Warning:", "yellow"), f" {warning}"))
 
 
-def ranking_table(run: LogRun) -> Table:
-    ranking = run.ranking()
-    symbol = ranking[0].result.direct_governing.symbol
-    table = Table(title=f"Logs from harshest to mildest (pair damage per hour, {symbol})",
-                  title_justify="left")
-    for heading, justify in (("log", "left"), ("hours", "right"), (f"system {symbol} h", "right"),
-                             ("vs fleet", "right")):
-        table.add_column(heading, justify=justify)
-    for row in ranking:
-        relative = row.relative_to_fleet
-        table.add_row(Text(plain(Path(row.result.summary.name).name)),
-                      f"{row.result.summary.duration_h:,.2f}",
-                      hours(row.result.governing_life_h),
-                      "" if relative is None else f"{relative:.2f} x")
-    return table
-
-
 def render(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
     render_log(result, console, spectrum_file)
     console.print(f"[dim]Caution: {CAUTIONS}[/]")
 
 
 def render_fleet(run: LogRun, console: Console, files: dict[str, str]) -> None:
-    console.print(ranking_table(run))
+    render_spec(fleet_table(run), console)
+    if run.mix is not None:
+        console.print(Text(mix_note(run.mix)))
     for failure in run.failures:
         console.print(Text.assemble(("Skipped:", "yellow"), f" {plain(failure.message)}"))
     combined = run.combined
