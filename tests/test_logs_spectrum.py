@@ -230,3 +230,22 @@ def test_shaft_sections_over_a_log_match_the_shaft_check_of_the_same_cases(
         assert got["min_safety"] == pytest.approx(want["min_safety"], rel=1e-12)
         assert got["yield_safety"] == pytest.approx(want["yield_safety"], rel=1e-12)
     assert any("lowest fatigue safety" in warning for warning in found["warnings"])
+
+
+def test_refined_method_solves_the_classes_and_matches_a_check_of_the_spectrum(tmp_path):
+    # The refined method runs on the log's classes, not on its rows: the classed governing life
+    # is the one `check --method refined` gives for the written spectrum file (one answer).
+    from logsupport import realistic_log, write_log
+
+    log = write_log(tmp_path / "log.parquet", realistic_log(20000, seed=5))
+    out = tmp_path / "spectrum.toml"
+    found = CliRunner().invoke(main, ["spectrum", log, "--case-file", str(YARD_LOADER),
+                                      "--method", "refined", "--out", str(out), "--json"])
+    assert found.exit_code == 0, found.output
+    document = json.loads(found.output)
+    check = json.loads(CliRunner().invoke(main, ["check", str(out), "--method", "refined",
+                                                 "--json"]).output)
+    assert document["classed"]["governing_life"]["life_h"] == pytest.approx(
+        check["governing_life"]["life_h"], rel=1e-6)
+    # the classing error still compares like with like (ISO 281 rule, direct and classed)
+    assert abs(document["classing_error"]) < 0.03

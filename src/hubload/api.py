@@ -184,7 +184,8 @@ class LogsResult(Wrapped):
 def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = (),
              classes: Sequence[str] = (), gaps: str = "error", max_gap_s: float | None = None,
              jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
-             on_log_done=None, weights: str | Path | None = None) -> LogsResult:
+             on_log_done=None, weights: str | Path | None = None,
+             method: str | None = None) -> LogsResult:
     """The direct lives and the classed spectrum of a measured log, or of a folder of logs
     (each log, the fleet combined -- by logged hours, or by the fleet mix of a ``weights``
     CSV file -- and the ranking); ``case_file`` describes the wheel end."""
@@ -193,4 +194,4 @@ def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = ()
     options = log_options(columns, classes, gaps, max_gap_s)
     return LogsResult(analyse(log, case_file, options, jobs=jobs, cluster=cluster,
                                   skip_bad=skip_bad, on_log_done=on_log_done,
-                                  weights=weights), {})
+                                  weights=weights, method=method), {})

@@ -173,6 +173,7 @@ def setting(file, start_um, stop_um, step_um, as_json, plot, force):
 @click.option("--cluster", metavar="ADDRESS", help="Run the logs on a Dask distributed "
               "scheduler, e.g. tcp://scheduler-host:8786.")
 @click.option("--skip-bad", is_flag=True, help="In a folder, leave out logs that cannot be used.")
+@method_option()
 @click.option("--weights", type=click.Path(dir_okay=False), help="A folder's fleet mix: CSV with "
               "columns log,share (share of machines working like each log); the logs are "
               "combined in those proportions instead of by their logged hours.")

@@ -10,7 +10,6 @@ from __future__ import annotations
 import json
 
 import click
-from rich.console import Console
 
 from hubload import api
 from hubload.errors import InputError
@@ -25,9 +24,16 @@ def checked(path: str | None, force: bool, suffixes: tuple[str, ...] = ()) -> No
         checked_output(path, force, suffixes)
 
 
+def console(stderr: bool = False):
+    """A rich console, imported only when a command prints tables (--json does not)."""
+    from rich.console import Console
+
+    return Console(stderr=stderr)
+
+
 def written(kind: str, path: str, as_json: bool = False) -> None:
     """Name every file written (on stderr with --json: stdout stays one JSON document)."""
-    Console(stderr=as_json).print(f"{kind} written to {path}", highlight=False, markup=False)
+    console(stderr=as_json).print(f"{kind} written to {path}", highlight=False, markup=False)
 
 
 def check(file: str, as_json: bool = False, report: str | None = None,
@@ -54,7 +60,7 @@ def check(file: str, as_json: bool = False, report: str | None = None,
     else:
         from hubload.report.terminal.check import render_check
 
-        render_check(found.value, Console(), show_all=show_all)
+        render_check(found.value, console(), show_all=show_all)
     return found
 
 
@@ -93,7 +99,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     else:
         from hubload.report.terminal.sweep import render
 
-        render(found.value, Console())
+        render(found.value, console())
     return found
 
 
@@ -112,7 +118,7 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
     else:
         from hubload.report.terminal.compare import render
 
-        render(found.value, Console())
+        render(found.value, console())
     return found
 
 
@@ -147,7 +153,7 @@ def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json:
     else:
         from hubload.report.terminal.setting import render_setting
 
-        render_setting(found.value, Console())
+        render_setting(found.value, console())
     return found
 
 

@@ -36,6 +36,7 @@ class Request:
     cluster: str | None = None
     skip_bad: bool = False
     weights: str | None = None
+    method: str | None = None
 
 
 def spectrum(request: Request) -> api.LogsResult:
@@ -47,7 +48,8 @@ def spectrum(request: Request) -> api.LogsResult:
     with LogProgress(len(paths)) as advance:
         found = api.spectrum(request.log, request.case_file, request.columns, request.classes,
                              request.gaps, request.max_gap_s, request.jobs, request.cluster,
-                             request.skip_bad, on_log_done=advance, weights=request.weights)
+                             request.skip_bad, on_log_done=advance, weights=request.weights,
+                             method=request.method)
     run = found.value
     files = write_fleet_files(targets, run) if folder else write_single(request, run)
     found = dataclasses.replace(found, files=files)

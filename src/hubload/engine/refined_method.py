@@ -17,7 +17,7 @@ import numpy as np
 from hubload.domain.study import Bearing, Study
 from hubload.engine.modified_life import per_study
 from hubload.model import iso281
-from hubload.model.refined import MountedBearing, RollerSet, pair_bearings, pair_response, ratings
+from hubload.model.refined import ratings
 from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
 
 LABELS = ("outboard", "inboard")
@@ -92,7 +92,10 @@ def point_parameters(study: Study):
     return values
 
 
-def mounted_pair(study: Study, at=lambda value: value) -> tuple[MountedBearing, MountedBearing]:
+def mounted_pair(study: Study, at=lambda value: value):
+    """The pair's two mounted bearings (hubload.model.refined.layout) of one point."""
+    from hubload.model.refined.layout import RollerSet, pair_bearings
+
     def roller_set(bearing: Bearing) -> RollerSet:
         g = bearing.geometry
         return RollerSet(int(scalar(at(g.rollers))), scalar(at(g.roller_diameter_m)),
@@ -106,6 +109,8 @@ def mounted_pair(study: Study, at=lambda value: value) -> tuple[MountedBearing, 
 
 
 def respond(study: Study, bearings, setting_m, at=lambda value: value):
+    from hubload.model.refined.pair import pair_response
+
     cases, wheel = study.cases, study.wheel
     return pair_response(bearings, at(cases.wheel_load_n), at(cases.side_force_n),
                          at(cases.tractive_force_n), at(wheel.offset_m),

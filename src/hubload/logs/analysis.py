@@ -10,6 +10,7 @@ from collections.abc import Callable
 from dataclasses import dataclass
 from pathlib import Path
 
+from hubload.casefile.geometry import with_method
 from hubload.casefile.machine import load_machine
 from hubload.domain.study import Study
 from hubload.errors import InputError
@@ -89,10 +90,16 @@ def log_paths(log: str | Path) -> list[str]:
 def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
             jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
             on_log_done: Callable[[str], None] | None = None,
-            weights: str | Path | None = None) -> LogRun:
+            weights: str | Path | None = None, method: str | None = None) -> LogRun:
     """Read, clean, integrate and class every log; a folder's logs combined as a fleet, by
-    their logged hours or, with ``weights`` (a CSV file), by the fleet mix it gives."""
+    their logged hours or, with ``weights`` (a CSV file), by the fleet mix it gives.
+    ``method`` ("iso281", "refined") overrides the case file's for the classed spectrum; the
+    samples themselves always go through the ISO 281 rule (logs.pipeline)."""
     study, machine = load_machine(case_file)
+    try:
+        study = with_method(study, method)
+    except InputError as error:
+        raise error.located(str(case_file)) from None
     paths = log_paths(log)
     folder = Path(log).is_dir()
     mix = read_weights(weights, paths) if folder and weights is not None else None

@@ -8,6 +8,7 @@ by the chunk size and the number of occupied classes; there is no loop per row.
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 from dataclasses import dataclass, field
 from pathlib import Path
@@ -99,8 +100,13 @@ def parse_classes(options: tuple[str, ...] | list[str]) -> tuple[int, ...]:
 
 
 def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSummary:
-    """Read, clean, integrate and class one log."""
+    """Read, clean, integrate and class one log.
+
+    Every sample is evaluated by the ISO 281 rule for the pair, whatever the study's method:
+    the refined method solves the log's classes instead (logs.spectrum), not millions of rows.
+    """
     path = Path(path)
+    study = dataclasses.replace(study, method="iso281")
     plan = plan_columns(headers(path), options.mapping, str(path),
                         has_motor=study.motor is not None, has_vehicle=study.vehicle is not None,
                         has_lubrication=study.lubrication is not None)

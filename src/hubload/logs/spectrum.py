@@ -188,7 +188,7 @@ def spectrum_result(summary: LogSummary, study: Study) -> SpectrumResult:
     result = SpectrumResult(
         summary=summary, damage=damage, life_h=life_h, system_life_h=system_h,
         static_safety=static_safety, classed=classed,
-        classing_error=relative_error(float(classed.system_life_h), system_h),
+        classing_error=relative_error(float(iso281_lives(classed).system_life_h), system_h),
         shares=shares, shaft_life_h=shaft_lives(summary, study),
         findings=tuple(static_findings(static_safety) + flag_findings(summary)
                        + shaft_findings(summary, study)))
@@ -223,7 +223,7 @@ def with_modified_lives(result: SpectrumResult) -> SpectrumResult:
         damage = summary.total(f"damage_modified_{label}")
         modified_h[label] = summary.duration_h / damage if damage > 0 else float("inf")
     system_h = float(iso281.system_life(*modified_h.values()))
-    classed_h = float(result.classed.modified.system_life_h)
+    classed_h = float(iso281_lives(result.classed).modified.system_life_h)
     return dataclasses.replace(result, modified_life_h=modified_h, modified_system_life_h=system_h,
                                modified_classing_error=relative_error(classed_h, system_h))
 
@@ -250,6 +250,12 @@ def shaft_findings(summary: LogSummary, study: Study) -> list[Finding]:
     if utilisation > 1.0:
         found.append(Finding("log_permissible_exceeded", values={"utilisation": utilisation}))
     return found
+
+
+def iso281_lives(classed: Result):
+    """The classed spectrum's lives by the ISO 281 rule, the method of the direct lives: the
+    classing error compares like with like, also when the classes are solved refined."""
+    return classed if classed.iso281 is None else classed.iso281
 
 
 def relative_error(classed_h: float, direct_h: float) -> float | None:

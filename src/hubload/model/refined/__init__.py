@@ -14,8 +14,16 @@ Modules, from the bottom up:
 The method, constants, sources and assumptions are described in docs/refined-method.md.
 """
 
-from hubload.model.refined.layout import MountedBearing, RollerSet, pair_bearings
-from hubload.model.refined.pair import BearingResponse, PairResponse, pair_response
+from importlib import import_module
 
-__all__ = ["BearingResponse", "MountedBearing", "PairResponse", "RollerSet", "pair_bearings",
-           "pair_response"]
+# Loaded on first use: the ratings from the geometry need none of the solver, and a check by
+# the ISO 281 rule should not pay for importing it.
+EXPORTS = {"MountedBearing": "layout", "RollerSet": "layout", "pair_bearings": "layout",
+           "BearingResponse": "pair", "PairResponse": "pair", "pair_response": "pair"}
+__all__ = sorted(EXPORTS)
+
+
+def __getattr__(name: str):
+    if name in EXPORTS:
+        return getattr(import_module(f"hubload.model.refined.{EXPORTS[name]}"), name)
+    raise AttributeError(f"module 'hubload.model.refined' has no attribute {name!r}")

@@ -13,10 +13,11 @@ from rich.text import Text
 from hubload.engine.governing import symbol_of
 from hubload.logs.analysis import LogRun
 from hubload.logs.pipeline import LABELS
-from hubload.logs.spectrum import SpectrumResult
+from hubload.logs.spectrum import SpectrumResult, iso281_lives
 from hubload.logs.weights import mix_note
 from hubload.report.cautions import CAUTIONS
 from hubload.report.messages import warning_texts
+from hubload.report.columns import Column, TableSpec
 from hubload.report.numbers import hours, safety, share
 from hubload.report.specs.fleet import fleet_table
 from hubload.report.terminal.tables import plain, render as render_spec
@@ -25,26 +26,46 @@ from hubload.units import KN
 TOP_CASES = 10
 
 
-def lives_table(result: SpectrumResult) -> Table:
-    modified = result.classed.modified
-    table = Table(title="Lives: direct (every sample) and classed spectrum", title_justify="left")
-    headings = ["bearing", "direct L10 h", "classed L10 h"]
-    if modified is not None:
-        symbol = symbol_of("iso281", float(result.classed.study.reliability_percent), True)
-        headings += [f"direct {symbol} h", f"classed {symbol} h"]
-    for heading in headings + ["log damage", "s0 at peak"]:
-        table.add_column(heading, justify="left" if heading == "bearing" else "right")
-    for label in LABELS:
-        extra = [] if modified is None else [hours(result.modified_life_h[label]),
-                                             hours(modified.bearings[label].life_h)]
-        table.add_row(label, hours(result.life_h[label]),
-                      hours(result.classed.bearings[label].life_h), *extra,
-                      f"{result.damage[label]:.3g}", safety(result.static_safety[label]))
-    extra = [] if modified is None else [hours(result.modified_system_life_h),
-                                         hours(modified.system_life_h)]
-    table.add_row("pair (system)", hours(result.system_life_h),
-                  hours(result.classed.system_life_h), *extra, "", "", style="bold")
-    return table
+def lives_table(result: SpectrumResult) -> TableSpec:
+    """Direct lives (every sample, ISO 281 rule) beside the classed spectrum's by the same rule,
+    and, when the classes are solved by the refined method, its reference lives too."""
+    classed = result.classed
+    iso = iso281_lives(classed)
+    reliability = float(classed.study.reliability_percent)
+    rows = [*LABELS, None]
+
+    def per_row(bearing, system):
+        return [system() if label is None else bearing(label) for label in rows]
+
+    columns = [Column("bearing", "bearing", [label or "pair (system)" for label in rows],
+                      name=True),
+               Column("direct.l10_h", "direct L10", per_row(lambda k: result.life_h[k],
+                                                            lambda: result.system_life_h),
+                      "h", hours),
+               Column("classed.l10_h", "classed L10", per_row(
+                   lambda k: iso.bearings[k].life_h, lambda: iso.system_life_h), "h", hours)]
+    if iso.modified is not None:
+        symbol = symbol_of("iso281", reliability, True)
+        columns += [Column("direct.l10m_h", f"direct {symbol}", per_row(
+                        lambda k: result.modified_life_h[k], lambda: result.modified_system_life_h),
+                        "h", hours),
+                    Column("classed.l10m_h", f"classed {symbol}", per_row(
+                        lambda k: iso.modified.bearings[k].life_h,
+                        lambda: iso.modified.system_life_h), "h", hours)]
+    if classed.refined is not None:
+        columns.append(Column("classed.l10r_h", "classed L10r", per_row(
+            lambda k: classed.bearings[k].life_h, lambda: classed.system_life_h), "h", hours))
+        if classed.modified is not None:
+            columns.append(Column("classed.l10mr_h", f"classed {symbol_of('refined', reliability, True)}",
+                                  per_row(lambda k: classed.modified.bearings[k].life_h,
+                                          lambda: classed.modified.system_life_h), "h", hours))
+    columns += [Column("damage", "log damage", per_row(lambda k: result.damage[k], lambda: None),
+                       "", lambda v: "" if v is None else f"{v:.3g}"),
+                Column("s0", "s0 at peak", per_row(lambda k: result.static_safety[k],
+                                                   lambda: None), "",
+                       lambda v: "" if v is None else safety(v))]
+    return TableSpec("log_lives", "Lives: direct (every sample) and classed spectrum",
+                     tuple(columns))
 
 
 def shaft_table(result: SpectrumResult) -> Table | None:
@@ -119,7 +140,7 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
     console.print(f"[bold]{escape(result.summary.name)}[/]")
     for line in cleaning_lines(result):
         console.print(f"  {line}")
-    console.print(lives_table(result))
+    render_spec(lives_table(result), console)
     console.print(error_line(result))
     shaft = shaft_table(result)
     if shaft is not None:
