@@ -17,6 +17,7 @@ Values broadcast: a batched study gives every item's value, margin and pass per 
 from __future__ import annotations
 
 from dataclasses import dataclass
+from functools import cached_property
 
 import numpy as np
 
@@ -54,7 +55,7 @@ class CheckItem:
     life_exponent: np.ndarray | float = 1.0
     subject: str | None = None      # shaft section name
 
-    @property
+    @cached_property
     def margin(self) -> np.ndarray:
         """Load margin: factor on the loads until the limit is reached (NaN: not assessed)."""
         value = np.asarray(self.value, dtype=float)
@@ -63,9 +64,10 @@ class CheckItem:
                 return np.where(value == 0, np.inf, self.limit / np.where(value == 0, 1, value))
             return (value / self.limit) ** (1.0 / np.asarray(self.life_exponent))
 
-    @property
+    @cached_property
     def passed(self) -> np.ndarray:
-        return np.nan_to_num(self.margin, nan=-np.inf) >= 1.0
+        margin = self.margin
+        return ~np.isnan(margin) & (margin >= 1.0)
 
 
 @dataclass(frozen=True)
@@ -76,11 +78,10 @@ class OverallVerdict:
     def passed(self) -> np.ndarray:
         return np.logical_and.reduce([item.passed for item in self.items])
 
-    @property
+    @cached_property
     def worst_index(self) -> np.ndarray:
-        margins = np.stack(np.broadcast_arrays(*(np.nan_to_num(item.margin, nan=-np.inf)
-                                                 for item in self.items)))
-        return np.argmin(margins, axis=0)
+        margins = np.stack(np.broadcast_arrays(*(item.margin for item in self.items)))
+        return np.argmin(np.where(np.isnan(margins), -np.inf, margins), axis=0)
 
     @property
     def worst(self) -> CheckItem:

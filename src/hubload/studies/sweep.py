@@ -19,7 +19,8 @@ import numpy as np
 
 from hubload.casefile.load import read_document, study_from_document
 from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_studies
-from hubload.domain.batch import picker, stack_studies
+from hubload.domain.batch import StackError, picker, stack_studies
+from hubload.domain.grid import grid_builder, point_study
 from hubload.domain.study import Study
 from hubload.engine import Result, evaluate, with_findings
 from hubload.errors import InputError
@@ -62,7 +63,7 @@ class Axis:
 class SweepChunk:
     """Up to BATCH_POINTS consecutive points: their studies and their batched result."""
 
-    studies: tuple[Study, ...]
+    studies: Sequence[Study]        # a tuple, or PointStudies
     result: Result
 
     @cached_property
@@ -226,13 +227,18 @@ def run_sweep(file: str, specs: Sequence[str],
         raise InputError(f"the grid has {total:,} points; at most {MAX_POINTS:,} are allowed",
                          file=file)
     grid = list(itertools.product(*(range(len(axis.values)) for axis in axes)))
+    build = grid_study(document, axes, base, file) if len(axes) > 1 else None
     chunks, values = [], []
     for start, stop in chunk_bounds(total):
         chunk = [{path: value for axis, i in zip(axes, point) for path, value in axis.at(i).items()}
                  for point in grid[start:stop]]
-        studies = variant_studies(document, chunk, file)
-        chunks.append(SweepChunk(tuple(studies),
-                                 evaluate(stack_studies(studies), with_findings=False)))
+        if build is None:
+            studies = tuple(variant_studies(document, chunk, file))
+            batched = stack_studies(studies)
+        else:
+            batched = build([np.array(column) for column in zip(*grid[start:stop])])
+            studies = PointStudies(base, batched, stop - start)
+        chunks.append(SweepChunk(studies, evaluate(batched, with_findings=False)))
         values += [{path.text: int(v) if path.integer else v for path, v in point.items()}
                    for point in chunk]
         if on_progress is not None:
@@ -241,6 +247,37 @@ def run_sweep(file: str, specs: Sequence[str],
                  chunks=tuple(chunks), target_life_h=base.target_life_h,
                  file_values={path.text: current_value(document, path)
                               for axis in axes for path, _ in axis.moving()})
+
+
+@dataclass(frozen=True)
+class PointStudies:
+    """The studies of a chunk built as one batched study, taken out point by point on demand."""
+
+    base: Study
+    batched: Study
+    count: int
+
+    def __len__(self) -> int:
+        return self.count
+
+    def __getitem__(self, index: int) -> Study:
+        return point_study(self.base, self.batched, index)
+
+
+def grid_study(document: dict, axes: tuple[Axis, ...], base: Study, file: str):
+    """A builder of a grid's batched studies from each axis's variants (domain.grid), or None
+    where the points must be built one by one: when two axes move keys of one table (its
+    cross-key rules, e.g. the time shares adding to 100 % or the bearings' order, hold only
+    point by point) or vary the same leaf of the study (a derived value)."""
+    tables = [{path.segments[0][0] for path, _ in axis.moving()} for axis in axes]
+    if sum(len(t) for t in tables) != len(set().union(*tables)):
+        return None
+    variants = [variant_studies(document, [axis.at(i) for i in range(len(axis.values))], file)
+                for axis in axes]
+    try:
+        return grid_builder(base, variants)
+    except StackError:
+        return None
 
 
 def chunk_bounds(total: int) -> list[tuple[int, int]]:

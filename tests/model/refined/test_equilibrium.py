@@ -66,8 +66,10 @@ def independent_residuals(bearings, loads_per_bearing, ground_force, patch):
         moments.append(np.cross(np.broadcast_to(points, on_shaft.shape), on_shaft).reshape(-1, 3))
     forces, moments = np.concatenate([f.reshape(-1, 3) for f in forces]), np.concatenate(
         [m.reshape(-1, 3) for m in moments])
-    force_scale = max(np.abs(forces).sum(), 1e-30)
-    moment_scale = max(np.abs(moments[:, 1:]).sum(), 1e-30)
+    # Floors of 1 N and 1 N m: near zero load and setting the contacts carry millinewtons,
+    # where a relative test would judge noise far below what a wheel bearing can feel.
+    force_scale = max(np.abs(forces).sum(), 1.0)
+    moment_scale = max(np.abs(moments[:, 1:]).sum(), 1.0)
     return (np.abs(forces.sum(axis=0)) / force_scale,
             np.abs(moments.sum(axis=0)[1:]) / moment_scale)
 

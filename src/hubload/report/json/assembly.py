@@ -14,7 +14,7 @@ from hubload.units import UM
 def add_setting(document: dict, result: Result) -> None:
     """The setting of every case and, with a [pair.setting], how it came about (in place)."""
     setting = result.setting
-    cases = document["cases"]
+    cases = document.get("cases", [])   # a sweep point's document has no cases
     for case, value in zip(cases, json_numbers(setting.operating_m / UM)):
         case["operating_setting_um"] = value
     if setting.assembly_m is None:
@@ -24,6 +24,9 @@ def add_setting(document: dict, result: Result) -> None:
     document["setting"] = {"assembly_um": json_number(setting.assembly_m / UM),
                            "tolerance_um": json_number(setting.tolerance_m / UM),
                            "basis": setting.basis}
+    document["setting_band"] = band_entry(result)
+    if not cases:
+        return
     terms = setting.terms
     take_up = np.broadcast_to(terms.fit_take_up_m if setting.basis == "unmounted" else 0.0,
                               np.shape(setting.operating_m))
@@ -32,7 +35,6 @@ def add_setting(document: dict, result: Result) -> None:
                       "axial_thermal": terms.axial_thermal_m / UM}, len(cases))
     for case, row in zip(cases, rows):
         case["setting_loss_um"] = row
-    document["setting_band"] = band_entry(result)
 
 
 def band_entry(result: Result) -> dict | None:
@@ -57,8 +59,8 @@ def add_friction(document: dict, result: Result) -> None:
     if friction is None:
         document["friction"] = None
         return
-    cases = document["cases"]
-    for label, bearing in friction.bearings.items():
+    cases = document.get("cases", [])
+    for label, bearing in (friction.bearings.items() if cases else ()):
         rows = json_rows({"friction_torque_Nm": bearing.torque_nm, "power_W": bearing.power_w},
                          len(cases))
         for case, row in zip(cases, rows):

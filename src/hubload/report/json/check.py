@@ -113,8 +113,9 @@ def finding_entries(result: Result) -> list[dict]:
             for f in result.findings]
 
 
-def result_document(result: Result) -> dict:
-    """The whole result as plain JSON-ready data."""
+def result_document(result: Result, per_case: bool = True) -> dict:
+    """The whole result as plain JSON-ready data (``per_case`` False: without ``cases``, as a
+    sweep point carries it)."""
     study = result.study
     dominant = int(np.argmax(result.system_damage_share))
     document = {
@@ -122,7 +123,7 @@ def result_document(result: Result) -> dict:
         "source": study.source,
         "method": result.method,
         "governing_life": governing_entry(result),
-        "cases": case_entries(result),
+        **({"cases": case_entries(result)} if per_case else {}),
         "bearings": bearing_summaries(result),
         "system": {"l10_h": json_number(result.system_life_h),
                    "l10_km": json_number(result.system_life_km)},

@@ -24,12 +24,12 @@ def add_modified_life(document: dict, result: Result) -> dict:
         document["lubrication"] = None
         return document
     document["lubrication"] = lubrication_entry(result)
-    cases = document["cases"]
-    per_case = json_rows({
+    cases = document.get("cases", [])   # a sweep point's document has no cases
+    per_case = [] if not cases else json_rows({
         "temperature_C": result.study.lubrication.temperature_k - CELSIUS_ZERO_K,
         "viscosity_cSt": modified.viscosity_m2_s / CST,
         "system_damage_share_modified": modified.system_damage_share}, len(cases))
-    per_bearing = {label: json_rows({
+    per_bearing = {} if not cases else {label: json_rows({
         "nu1_cSt": bearing.reference_viscosity_m2_s / CST, "kappa": bearing.kappa,
         "kappa_outside_scope": np.asarray(bearing.kappa_outside_scope, dtype=bool),
         "e_c": bearing.e_c, "a_iso": bearing.a_iso, "l10m_h": bearing.case_life_h,

@@ -39,7 +39,9 @@ def add_refined(document: dict, result: Result) -> dict:
         "life": "ISO/TS 16281 reference rating life from the lamina loads (l10_h keys)",
         "contact_pressure_limit_MPa": 4000.0,
     }
-    cases = document["cases"]
+    cases = document.get("cases", [])   # a sweep point's document has no cases
+    if not cases:
+        return document
     per_case = json_rows({
         "tilt_mrad": refined.tilt_rad / MRAD,
         "axial_displacement_um": refined.axial_displacement_m / UM,

@@ -80,7 +80,9 @@ def case_sections(section, count: int) -> list[dict]:
 
 
 def extend_cases(document: dict, result: Result) -> None:
-    cases = document["cases"]
+    cases = document.get("cases", [])   # a sweep point's document has no cases
+    if not cases:
+        return
     shaft = result.shaft
     permissible = None if shaft is None else shaft.permissible
     if permissible is None:

@@ -15,7 +15,7 @@ FILE_LEVEL_KEYS = ("title", "source", "method", "cases", "cautions")
 
 def point_document(result) -> dict:
     """The check's JSON document of one point, without the keys that describe the file."""
-    document = result_document(result)
+    document = result_document(result, per_case=False)
     return {key: value for key, value in document.items() if key not in FILE_LEVEL_KEYS}
 
 
