@@ -16,6 +16,10 @@ from hubload.domain.study import Study
 from hubload.engine import Result
 from hubload.errors import InputError
 
+# Static safety s0 of rolling bearings: 0.5 to 4 in the tables of common practice (ISO 76
+# guidance, makers' catalogues); 20 is beyond any demand and keeps the ratings finite.
+MAX_REQUIRED_S0 = 20.0
+
 
 def load(path: str | Path, method: str | None = None) -> Study:
     """The study of a load-case file (SI units), computed by ``method`` when given.
@@ -159,9 +163,9 @@ def brief(path: str | Path, required_s0: float | None = None,
     from hubload.studies.requirements import requirements_of
 
     required_s0 = STATIC_SAFETY_WARNING if required_s0 is None else required_s0
-    if not (required_s0 > 0 and math.isfinite(required_s0)):
-        raise InputError(f"expected a positive required static safety s0, got {required_s0:g}",
-                         key_path="required_s0")
+    if not (0 < required_s0 <= MAX_REQUIRED_S0 and math.isfinite(required_s0)):
+        raise InputError(f"expected a positive required static safety s0 up to "
+                         f"{MAX_REQUIRED_S0:g}, got {required_s0:g}", key_path="required_s0")
     return BriefResult(requirements_of(load(path, method), required_s0), read_document(path))
 
 

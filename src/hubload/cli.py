@@ -1,36 +1,100 @@
 """Command-line interface: a thin click layer that parses options and hands them on.
 
 Bad input raises :class:`hubload.errors.InputError`; it is printed as one line
-and the command exits with status 2, never with a traceback.
+and the command exits with status 2, never with a traceback. Click's usage errors
+(an unknown option, a missing argument) are one line and status 2 as well. A numpy
+warning never reaches the terminal: the model suppresses the expected ones where
+they arise, so any other is a number that went wrong and ends the run with one line.
+Anything else that escapes is a bug: one line naming it, status 1 (set
+HUBLOAD_TRACEBACK=1 to see the traceback).
 """
 
 from __future__ import annotations
 
 import functools
+import os
+import signal
 import sys
+import warnings
 
 import click
 
 from hubload.errors import InputError
 
 INPUT_ERROR_STATUS = 2
+BUG_STATUS = 1
+TRACEBACK_VARIABLE = "HUBLOAD_TRACEBACK"
 # The API's argument names as the command line spells them (errors name the option).
 OPTION_NAMES = {"required_s0": "--s0", "start_um": "--from", "stop_um": "--to",
                 "step_um": "--step"}
 
 
+def one_line(text: str) -> str:
+    """``text`` as one terminal line: line breaks become spaces, control characters go."""
+    from hubload.report.terminal.tables import plain
+
+    return plain(" ".join(str(text).split("\n")))
+
+
+def fail(message: str, status: int) -> None:
+    click.echo(f"error: {one_line(message)}", err=True)
+    sys.exit(status)
+
+
 def reports_input_errors(command):
-    """Turn InputError into one line on stderr and exit status 2."""
+    """Turn InputError into one line on stderr and exit status 2 (numpy warnings too: a
+    warning means a number went wrong); anything else into one line and status 1."""
     @functools.wraps(command)
     def wrapper(*args, **kwargs):
         try:
-            command(*args, **kwargs)
+            with warnings.catch_warnings():
+                warnings.simplefilter("error", RuntimeWarning)
+                command(*args, **kwargs)
         except InputError as error:
             if error.key_path in OPTION_NAMES:
                 error = InputError(error.message, error.file, OPTION_NAMES[error.key_path])
-            click.echo(f"error: {error}", err=True)
-            sys.exit(INPUT_ERROR_STATUS)
+            fail(str(error), INPUT_ERROR_STATUS)
+        except RuntimeWarning as warning:
+            fail(f"the calculation met a non-finite number ({warning}); check the inputs' "
+                 "magnitudes", INPUT_ERROR_STATUS)
+        except MemoryError:
+            fail("not enough memory for this input; use a smaller file, grid or log",
+                 INPUT_ERROR_STATUS)
+        except Exception as error:  # a bug: one line, never a traceback (unless asked)
+            if os.environ.get(TRACEBACK_VARIABLE):
+                raise
+            fail(f"internal error ({type(error).__name__}: {error}); please report it with "
+                 f"the input (set {TRACEBACK_VARIABLE}=1 for the traceback)", BUG_STATUS)
     return wrapper
+
+
+class OneLineGroup(click.Group):
+    """Click's usage errors as one line (``error: ...``) and status 2, like every other."""
+
+    def main(self, *args, **kwargs):
+        kwargs.pop("standalone_mode", None)
+        previous = signal.signal(signal.SIGTERM, stopped)
+        try:
+            return super().main(*args, standalone_mode=False, **kwargs)
+        except click.exceptions.Exit as done:
+            sys.exit(done.exit_code)
+        except click.UsageError as error:
+            if type(error).__name__ == "NoArgsIsHelpError":  # bare `hubload`: the help
+                click.echo(error.ctx.get_help(), err=True)
+                sys.exit(INPUT_ERROR_STATUS)
+            where = f" (see '{error.ctx.command_path} --help')" if error.ctx else ""
+            fail(error.format_message() + where, INPUT_ERROR_STATUS)
+        except click.ClickException as error:
+            fail(error.format_message(), error.exit_code)
+        except click.Abort:
+            fail("interrupted", BUG_STATUS)
+        finally:
+            signal.signal(signal.SIGTERM, previous)
+
+
+def stopped(signum, _frame) -> None:
+    """SIGTERM as an exit that unwinds: temporary output files are removed on the way."""
+    sys.exit(128 + signum)
 
 
 json_option = click.option("--json", "as_json", is_flag=True,
@@ -46,7 +110,7 @@ def method_option():
              "[project] method, else iso281.")
 
 
-@click.group()
+@click.group(cls=OneLineGroup)
 @click.version_option(package_name="hubload")
 def main():
     """Bearing and shaft life of hydraulic wheel-hub motors from load-case files."""

@@ -30,8 +30,8 @@ FILE = str(YARD_LOADER)
     ("wheel.offset_mm=60:60:4", "START != STOP"),
     ("wheel.offset_mm=60:inf:4", "finite"),
     ("wheel.offset_mm=-1e308:1e308:3", "finite START"),  # each finite, their span is not
-    ("pair.outboard.C_kN=-10:100:5", "expected a value > 0"),
-    ("wheel.loaded_radius_mm=0:300:4", "expected a value > 0"),
+    ("pair.outboard.C_kN=-10:100:5", "expected a value >= 0.1"),
+    ("wheel.loaded_radius_mm=0:300:4", "expected a value >= 50"),
     ("pair.outboard.position_mm=-100:40:3", "outboard bearing"),
     ("case[0].time_percent=10:50:3", "time shares add to"),
     ("wheel.offset_mm=0:1:400000", "at most"),

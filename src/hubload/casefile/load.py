@@ -8,6 +8,7 @@ from pathlib import Path
 
 import numpy as np
 
+from hubload.casefile.finite import check_finite
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import derive_cases, read_motor, read_vehicle
@@ -51,6 +52,13 @@ def read_document(path: str | Path) -> dict:
         document = tomllib.loads(text)
     except tomllib.TOMLDecodeError as error:
         raise InputError(f"TOML syntax error: {error}", file=file) from None
+    except RecursionError:
+        raise InputError("TOML nesting too deep: arrays or inline tables inside each other "
+                         "hundreds of levels deep; a load-case file nests a few levels",
+                         file=file) from None
+    except ValueError as error:  # Python's limit on the digits of an integer literal
+        raise InputError(f"TOML integer out of range ({str(error).split(';')[0]})",
+                         file=file) from None
     return document
 
 
@@ -82,7 +90,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
         verdict_basis=project.get("verdict_basis", "shorter"),
     )
-    return with_method(study, project.get("method", "iso281"))
+    return check_finite(with_method(study, project.get("method", "iso281")))
 
 
 def read_wheel(data: dict) -> Wheel:

@@ -14,6 +14,11 @@ from typing import Any
 from hubload.errors import InputError
 from hubload.schema.spec import Choice, Field, Table
 
+# A name, a title or a code, not a document: long enough for any real label, short enough
+# that no table or terminal line is flooded by one.
+MAX_STRING_CHARS = 200
+# 2**53: every integer up to it is exact as a float; far beyond any limit of the format.
+MAX_EXACT_INTEGER = 2 ** 53
 TYPE_NAMES = {"number": "a number", "integer": "a whole number", "string": "a string",
               "boolean": "true or false", "number-list": "a list of numbers"}
 
@@ -67,8 +72,8 @@ def validate_subtable(data: Any, table: Table, path: str) -> Any:
 def reject_unknown_keys(data: dict, table: Table, path: str) -> None:
     for key in data:
         if key not in table.keys:
-            raise InputError(f"unknown key; {nearest_key_hint(key, table)}",
-                             key_path=join_path(path, key))
+            raise InputError(f"unknown key; {nearest_key_hint(shortened(key), table)}",
+                             key_path=join_path(path, shortened(key)))
 
 
 def nearest_key_hint(key: str, table: Table) -> str:
@@ -90,6 +95,9 @@ def validate_value(value: Any, spec: Field, path: str) -> Any:
     python_type = {"string": str, "boolean": bool}[spec.kind]
     if not isinstance(value, python_type):
         raise InputError(f"expected {expected}, got {describe(value)}", key_path=path)
+    if spec.kind == "string" and len(value) > MAX_STRING_CHARS:
+        raise InputError(f"expected at most {MAX_STRING_CHARS} characters, got "
+                         f"{len(value):,}", key_path=path)
     if spec.choices and value not in spec.choices:
         close = difflib.get_close_matches(str(value), spec.choices, n=1, cutoff=0.5)
         hint = f" (did you mean '{close[0]}'?)" if close else ""
@@ -100,6 +108,10 @@ def validate_value(value: Any, spec: Field, path: str) -> Any:
 def validate_number(value: Any, spec: Field, path: str) -> float:
     if isinstance(value, bool) or not isinstance(value, (int, float)):
         raise InputError(f"expected a number, got {describe(value)}", key_path=path)
+    if isinstance(value, int) and abs(value) > MAX_EXACT_INTEGER:
+        # beyond any limit of the format, and too large for a float (OverflowError)
+        raise InputError(f"expected a value {spec.describe_limits() or 'of a sensible size'}, "
+                         f"got a whole number of {digits(value)} digits", key_path=path)
     if not math.isfinite(value):
         raise InputError(f"expected a finite number, got {value}", key_path=path)
     violated = ((spec.minimum is not None and value < spec.minimum)
@@ -126,6 +138,12 @@ def check_choice(data: dict, choice: Choice, path: str) -> None:
         raise InputError(f"missing {choice.name}. {choice.doc}", key_path=path or None)
 
 
+def digits(value: int) -> int:
+    """The decimal digits of a whole number (str() refuses those over 4,300 digits)."""
+    return len(str(abs(value))) if value.bit_length() < 10_000 else \
+        int(value.bit_length() * math.log10(2)) + 1
+
+
 def describe(value: Any) -> str:
     if isinstance(value, bool):
         return f"a boolean ({str(value).lower()})"
@@ -133,6 +151,13 @@ def describe(value: Any) -> str:
         return "a table"
     if isinstance(value, list):
         return "a list" if value else "an empty list"
+    if isinstance(value, int) and abs(value) > MAX_EXACT_INTEGER:
+        return f"a whole number of {digits(value)} digits"
     if isinstance(value, str):
-        return f"a string ({value!r})"
-    return f"{type(value).__name__} ({value!r})"
+        return f"a string ({shortened(value)!r})"
+    return f"{type(value).__name__} ({shortened(repr(value))})"
+
+
+def shortened(text: str, limit: int = 60) -> str:
+    """``text`` cut to ``limit`` characters for a message (a hostile file may hold megabytes)."""
+    return text if len(text) <= limit else text[:limit] + "..."

@@ -17,11 +17,13 @@ from hubload.errors import InputError
 PLOT_SUFFIXES = (".png", ".svg")
 
 
-def checked(path: str | None, force: bool, suffixes: tuple[str, ...] = ()) -> None:
+def checked(path: str | None, force: bool, suffixes: tuple[str, ...] = (),
+            inputs: tuple[str, ...] = ()) -> None:
+    """Refuse an output before the work: checked again when it is written."""
     if path is not None:
         from hubload.report.files import checked_output
 
-        checked_output(path, force, suffixes)
+        checked_output(path, force, suffixes, inputs)
 
 
 def console(stderr: bool = False):
@@ -33,27 +35,31 @@ def console(stderr: bool = False):
 
 def written(kind: str, path: str, as_json: bool = False) -> None:
     """Name every file written (on stderr with --json: stdout stays one JSON document)."""
-    console(stderr=as_json).print(f"{kind} written to {path}", highlight=False, markup=False)
+    from hubload.report.terminal.tables import plain
+
+    console(stderr=as_json).print(f"{kind} written to {plain(path)}", highlight=False,
+                                  markup=False)
 
 
 def check(file: str, as_json: bool = False, report: str | None = None,
           plot: str | None = None, force: bool = False, method: str | None = None,
           show_all: bool = False) -> api.CheckResult:
-    checked(report, force, (".html", ".htm"))
-    checked(plot, force, PLOT_SUFFIXES)
+    checked(report, force, (".html", ".htm"), (file,))
+    checked(plot, force, PLOT_SUFFIXES, (file,))
     found = api.check(file, method=method)
     if report is not None:
         from hubload.casefile.load import read_document
         from hubload.report.files import write_text
         from hubload.report.html.check import report_html
 
-        write_text(report, report_html(found.value, read_document(file)), force)
+        write_text(report, report_html(found.value, read_document(file)), force,
+                   inputs=(file,))
         written("Report", report, as_json)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import damage_share_figure
 
-        save(damage_share_figure(found.value), plot, force)
+        save(damage_share_figure(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
         click.echo(json.dumps(found.to_dict(), indent=2))
@@ -82,7 +88,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
           force: bool = False, method: str | None = None) -> api.SweepResult:
     from hubload.report.progress import LateProgress
 
-    checked(plot, force, PLOT_SUFFIXES)
+    checked(plot, force, PLOT_SUFFIXES, (file,))
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
     with LateProgress("sweep") as progress:
@@ -92,7 +98,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
         from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
 
         draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
-        save(draw(found.value), plot, force)
+        save(draw(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
         click.echo(json.dumps(found.to_dict(), indent=2))
@@ -105,13 +111,13 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None) -> api.ComparisonResult:
-    checked(plot, force, PLOT_SUFFIXES)
+    checked(plot, force, PLOT_SUFFIXES, files)
     found = api.compare(list(files), method=method)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import compare_figure
 
-        save(compare_figure(found.value), plot, force)
+        save(compare_figure(found.value), plot, force, files)
         written("Plot", plot, as_json)
     if as_json:
         click.echo(json.dumps(found.to_dict(), indent=2))
@@ -124,29 +130,33 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
 def brief(file: str, out: str | None = None, force: bool = False,
           required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
-    checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else ())
+    checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else (),
+            inputs=(file,))
+    from hubload.report.terminal.tables import plain
+
     found = api.brief(file, required_s0=required_s0, method=method)
     html = out is not None and out.lower().endswith((".html", ".htm"))
-    text = found.to_html() if html else found.to_markdown()
+    # no escape sequence from the file reaches a terminal
+    text = found.to_html() if html else plain(found.to_markdown())
     if out is None:
         click.echo(text, nl=False)
     else:
         from hubload.report.files import write_text
 
-        write_text(out, text, force)
+        write_text(out, text, force, inputs=(file,))
         written("Brief", out)
     return found
 
 
 def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
             plot: str | None = None, force: bool = False) -> api.SettingResult:
-    checked(plot, force, PLOT_SUFFIXES)
+    checked(plot, force, PLOT_SUFFIXES, (file,))
     found = api.setting(file, start_um, stop_um, step_um)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.setting import setting_figure
 
-        save(setting_figure(found.value), plot, force)
+        save(setting_figure(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
         click.echo(json.dumps(found.to_dict(), indent=2))

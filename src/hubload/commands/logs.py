@@ -42,16 +42,18 @@ class Request:
 def spectrum(request: Request) -> api.LogsResult:
     folder = Path(request.log).is_dir()
     paths = log_paths(request.log)
-    targets = fleet_targets(request, paths) if folder else {}
+    inputs = (*paths, request.case_file)
+    targets = fleet_targets(request, paths, inputs) if folder else {}
     if request.out and not folder:  # before the log is read: a refusal should not wait
-        checked_output(request.out, request.force)
+        checked_output(request.out, request.force, inputs=inputs)
     with LogProgress(len(paths)) as advance:
         found = api.spectrum(request.log, request.case_file, request.columns, request.classes,
                              request.gaps, request.max_gap_s, request.jobs, request.cluster,
                              request.skip_bad, on_log_done=advance, weights=request.weights,
                              method=request.method)
     run = found.value
-    files = write_fleet_files(targets, run) if folder else write_single(request, run)
+    files = write_fleet_files(targets, run, request.force, inputs) if folder \
+        else write_single(request, run, inputs)
     found = dataclasses.replace(found, files=files)
     if request.as_json:
         click.echo(json.dumps(found.to_dict(), indent=2))
@@ -82,11 +84,12 @@ class LogProgress:
         self.progress.stop()
 
 
-def write_single(request: Request, run: LogRun) -> dict[str, str]:
+def write_single(request: Request, run: LogRun, inputs: tuple[str, ...]) -> dict[str, str]:
     result = run.single
     if not request.out:
         return {}
-    write_text(request.out, spectrum_of(run, result, Path(request.log).name), request.force)
+    write_text(request.out, spectrum_of(run, result, Path(request.log).name), request.force,
+               inputs=inputs)
     return {result.summary.name: request.out}
 
 
@@ -95,7 +98,8 @@ def spectrum_of(run: LogRun, result: SpectrumResult, log_name: str) -> str:
                          classed_temperature_c(result.summary))
 
 
-def fleet_targets(request: Request, paths: list[str]) -> dict[str, Path]:
+def fleet_targets(request: Request, paths: list[str],
+                  inputs: tuple[str, ...]) -> dict[str, Path]:
     """The spectrum file of each log (``<stem>.toml``) and ``combined.toml`` in the --out
     folder, checked before any log is read; empty without --out."""
     if not request.out:
@@ -111,12 +115,14 @@ def fleet_targets(request: Request, paths: list[str]) -> dict[str, Path]:
                          f"log named {COMBINED_NAME!r}); rename one", file=request.log)
     if folder.is_dir():
         for target in targets.values():
-            checked_output(str(target), request.force)
+            checked_output(str(target), request.force, inputs=inputs)
     return targets
 
 
-def write_fleet_files(targets: dict[str, Path], run: LogRun) -> dict[str, str]:
-    """The spectrum of each usable log and the combined one, in the --out folder."""
+def write_fleet_files(targets: dict[str, Path], run: LogRun, force: bool,
+                      inputs: tuple[str, ...]) -> dict[str, str]:
+    """The spectrum of each usable log and the combined one, in the --out folder; each
+    file checked again as it is written (a file that appeared meanwhile is kept)."""
     if not targets:
         return {}
     folder = targets[COMBINED_NAME].parent
@@ -130,5 +136,5 @@ def write_fleet_files(targets: dict[str, Path], run: LogRun) -> dict[str, str]:
         name = result.summary.name
         log_name = Path(name).name if name != COMBINED_NAME else f"{len(run.results)} logs"
         written[name] = str(write_text(str(targets[name]), spectrum_of(run, result, log_name),
-                                       True))
+                                       force, inputs=inputs))
     return written

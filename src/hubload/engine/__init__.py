@@ -18,7 +18,7 @@ import numpy as np
 
 from hubload.domain.batch import picker, stack_studies
 from hubload.domain.study import Study
-from hubload.engine import findings, modified_life, refined_method, shaftcheck, verdict
+from hubload.engine import findings, finite, modified_life, refined_method, shaftcheck, verdict
 from hubload.engine.findings import STATIC_SAFETY_WARNING
 from hubload.engine.friction import Friction, evaluate_friction
 from hubload.engine.governing import GoverningLife, govern
@@ -102,6 +102,8 @@ def evaluate(study: Study, with_findings: bool = True) -> Result:
     lives = method_lives(study, mean_rpm, refined)
     beside = method_lives(study, mean_rpm) if refined is not None else None
     band = band_lives(study, mean_rpm) if refined is not None and setting.band else None
+    for checked in filter(None, (lives, beside, *(band or ()))):
+        finite.check_lives(study, checked)
     a1 = modified_life.per_study(modified_life.reliability_life_factor(study))
     governing = govern(study, lives, (), a1) if refined is None else \
         govern(study, beside, (lives, *(band or ())), a1, ("low", "high") if band else ())

@@ -75,6 +75,9 @@ class ShaftResult:
     permissible: PermissibleResult | None
 
 
+MIN_MOMENT_LEVER_M = 1e-4
+
+
 def notch_factors(shaft: Shaft, section: ShaftSection):
     """(Kf, Kfs): q as given, from the notch radius (Neuber), or 1 (Kf = Kt, conservative)."""
     def sensitivity(torsion: bool):
@@ -167,7 +170,10 @@ def permissible_result(study: Study) -> PermissibleResult | None:
     moment = wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
                              cases.tractive_force_n, wheel.offset_m, wheel.loaded_radius_m)
     lever = np.asarray(wheel.offset_m, dtype=float)
-    equivalent = np.where(lever > 0, moment / np.where(lever > 0, lever, 1.0), np.nan)
+    # Within a tenth of a millimetre of the mounting face the curve is read on the radial
+    # load alone: moment / lever has no meaning there (and would overflow).
+    reads_moment = lever > MIN_MOMENT_LEVER_M
+    equivalent = np.where(reads_moment, moment / np.where(reads_moment, lever, 1.0), np.nan)
     by_radial, by_moment = radial / permissible, equivalent / permissible
     utilisation = np.fmax(by_radial, by_moment)
     shape = utilisation.shape

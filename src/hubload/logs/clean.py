@@ -22,11 +22,14 @@ from dataclasses import dataclass, field
 import numpy as np
 
 from hubload.errors import InputError
-from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, LIMITS
+from hubload.logs.columns import CHANNELS, DISCRETE_CHANNELS, LIMITS, PLAUSIBLE
 from hubload.logs.reader import RawChunk
 
 GAP_FACTOR = 10.0
 MAX_FILL_SAMPLES = 1000
+# Samples made by filling gaps go out in batches of about this many (plus one gap's fill
+# at most), so that memory stays bounded however many gaps a log has.
+FILL_BATCH_SAMPLES = 1 << 16
 HINT = "use --gaps drop or --gaps interpolate to repair"
 
 
@@ -41,6 +44,18 @@ class Samples:
 
     def __len__(self) -> int:
         return self.time_s.size
+
+    def take(self, index) -> "Samples":
+        return Samples(self.rows[index], self.time_s[index], self.hold_s[index],
+                       {key: values[index] for key, values in self.channels.items()})
+
+
+def fill_batches(counts: np.ndarray) -> list[slice]:
+    """Consecutive slices of the samples whose filled counts add to about
+    FILL_BATCH_SAMPLES each (one sample's count at most beyond it)."""
+    batch = np.cumsum(counts) // FILL_BATCH_SAMPLES
+    starts = np.flatnonzero(np.diff(batch, prepend=-1))
+    return [slice(int(a), int(b)) for a, b in zip(starts, [*starts[1:], counts.size])]
 
 
 @dataclass
@@ -90,17 +105,15 @@ class Cleaner:
         for chunk in chunks:
             self.report.rows += len(chunk)
             rows = np.arange(chunk.first_row, chunk.first_row + len(chunk))
-            samples = self.feed(Block(rows, dict(chunk.columns)))
-            if samples is not None:
-                yield samples
+            yield from self.feed(Block(rows, dict(chunk.columns)))
         self.finish()
 
     def fail(self, message: str, row: int, key: str) -> InputError:
         return InputError(message, file=self.file,
                           key_path=f"row {row}, column {self.headers[key]!r}")
 
-    def feed(self, block: Block) -> Samples | None:
-        block = Block.join(self.carry, block)
+    def feed(self, block: Block) -> Iterable[Samples]:
+        block = Block.join(self.carry, self.settle_implausible(block))
         self.observe_interval(block.columns["time_s"])
         block = self.settle_empty(block)
         self.check_order(block)
@@ -108,9 +121,28 @@ class Cleaner:
         last = self.last_complete(block)
         if last is None or last < 1:
             self.carry = block
-            return None
+            return []
         self.carry = block.take(slice(last, None))
         return self.with_holds(block.take(slice(0, last + 1)))
+
+    def settle_implausible(self, block: Block) -> Block:
+        """A sample beyond the plausible magnitude of its channel is a bad cell: an error
+        naming it, or (drop, interpolate) an empty cell that the policy repairs."""
+        columns = dict(block.columns)
+        for key, bound in PLAUSIBLE.items():
+            if key not in columns:
+                continue
+            with np.errstate(invalid="ignore"):
+                bad = np.abs(columns[key]) > bound
+            if not bad.any():
+                continue
+            if self.policy == "error":
+                index = int(np.argmax(bad))
+                raise self.fail(f"implausible sample {columns[key][index]:g} (expected at "
+                                f"most {bound:g} in magnitude: {CHANNELS[key]}); {HINT}",
+                                int(block.rows[index]), key)
+            columns[key] = np.where(bad, np.nan, columns[key])
+        return Block(block.rows, columns)
 
     def settle_empty(self, block: Block) -> Block:
         """Apply the policy to empty samples; rows without a time stamp always go."""
@@ -164,8 +196,9 @@ class Cleaner:
                                     f"{values[outside[0]]:g}; check the channel's units and "
                                     "sign convention", int(block.rows[outside[0]]), key)
 
-    def with_holds(self, block: Block) -> Samples:
-        """Samples of all rows but the last, holding until the next row's stamp."""
+    def with_holds(self, block: Block) -> Iterable[Samples]:
+        """Samples of all rows but the last, holding until the next row's stamp (in
+        batches of bounded size where gaps are filled)."""
         block = self.interpolate_empty(block)
         time_s = block.columns["time_s"]
         hold_s = np.diff(time_s)
@@ -174,10 +207,9 @@ class Cleaner:
         nominal, max_gap = self.gap_limits()
         gaps = np.flatnonzero(hold_s > max_gap)
         samples = Samples(head.rows, time_s[:-1], hold_s, channels)
-        if gaps.size:
-            samples = self.repair_gaps(samples, block, gaps, nominal, max_gap)
         self.report.used_rows += head.rows.size
-        return samples
+        return self.repair_gaps(samples, block, gaps, nominal, max_gap) if gaps.size \
+            else [samples]
 
     def interpolate_empty(self, block: Block) -> Block:
         time_s = block.columns["time_s"]
@@ -209,7 +241,7 @@ class Cleaner:
         return nominal, self.report.max_gap_s
 
     def repair_gaps(self, samples: Samples, block: Block, gaps: np.ndarray,
-                    nominal: float, max_gap: float) -> Samples:
+                    nominal: float, max_gap: float) -> Iterable[Samples]:
         if self.policy == "error":
             index = int(gaps[0])
             raise self.fail(
@@ -221,25 +253,29 @@ class Cleaner:
             hold_s = samples.hold_s.copy()
             self.report.gap_time_s += float(np.sum(hold_s[gaps] - nominal))
             hold_s[gaps] = nominal
-            return Samples(samples.rows, samples.time_s, hold_s, samples.channels)
-        return self.fill_gaps(samples, block, gaps, nominal)
-
-    def fill_gaps(self, samples: Samples, block: Block, gaps: np.ndarray,
-                  nominal: float) -> Samples:
-        """Replace each gap by samples at about the nominal interval, linear in between."""
+            return [Samples(samples.rows, samples.time_s, hold_s, samples.channels)]
         counts = np.ones(len(samples), dtype=np.int64)
         counts[gaps] = np.minimum(np.ceil(samples.hold_s[gaps] / nominal), MAX_FILL_SAMPLES)
+        following = {key: values[1:] for key, values in block.columns.items()}
+        # lazily, one batch at a time: the caller evaluates each before the next is made
+        return (self.fill_gaps(samples.take(part), {k: v[part] for k, v in following.items()},
+                               counts[part]) for part in fill_batches(counts))
+
+    def fill_gaps(self, samples: Samples, following: dict[str, np.ndarray],
+                  counts: np.ndarray) -> Samples:
+        """Replace each sample by ``counts`` samples over its hold time, linear towards
+        the following row (about the nominal interval in a gap, one sample elsewhere)."""
         source = np.repeat(np.arange(len(samples)), counts)
         step = np.arange(source.size) - np.repeat(np.cumsum(counts) - counts, counts)
         fraction = step / counts[source]
         hold_s = samples.hold_s[source] / counts[source]
         channels = {}
         for key, values in samples.channels.items():
-            following = block.columns[key][1:]
             if key in DISCRETE_CHANNELS:
                 channels[key] = values[source]
             else:
-                channels[key] = values[source] + fraction * (following[source] - values[source])
+                after = following[key]
+                channels[key] = values[source] + fraction * (after[source] - values[source])
         self.report.filled_samples += int(source.size - len(samples))
         time_s = samples.time_s[source] + fraction * samples.hold_s[source]
         return Samples(samples.rows[source], time_s, hold_s, channels)

@@ -12,6 +12,7 @@ import difflib
 from dataclasses import dataclass
 
 from hubload.errors import InputError
+from hubload.schema import fileformat as limits
 
 CHANNELS: dict[str, str] = {
     "time_s": "time stamp [s]; each sample holds until the next time stamp",
@@ -28,6 +29,15 @@ CHANNELS: dict[str, str] = {
 }
 DISCRETE_CHANNELS = frozenset({"mode"})
 LIMITS = {"wheel_load_kN": (0.0, None), "temperature_C": (-40.0, 150.0)}
+# The largest magnitude of a sample (the file format's plausibility limits, common
+# practice): beyond it a sample is a bad cell, like an empty one, and the --gaps policy
+# applies. Time stamps: 10^12 s is over 30,000 years (epoch seconds are about 1.7e9).
+PLAUSIBLE = {"time_s": 1e12, "wheel_load_kN": limits.MAX_WHEEL_FORCE_KN,
+             "side_force_kN": limits.MAX_WHEEL_FORCE_KN,
+             "tractive_force_kN": limits.MAX_WHEEL_FORCE_KN,
+             "speed_rpm": limits.MAX_SPEED_RPM, "speed_kmh": limits.MAX_SPEED_KMH,
+             "pressure_bar": limits.MAX_PRESSURE_BAR, "flow_lpm": limits.MAX_FLOW_LPM,
+             "lateral_accel_g": limits.MAX_LATERAL_G}
 SPEED_SOURCES = ("speed_rpm", "speed_kmh", "flow_lpm")
 TRACTIVE_SOURCES = ("tractive_force_kN", "pressure_bar")
 NEEDS_MOTOR = ("pressure_bar", "flow_lpm")
@@ -74,6 +84,11 @@ def plan_columns(available: list[str], mapping: dict[str, str], file: str,
             raise InputError(f"column {header!r} (mapped to {key}) is not in the log; "
                              f"{close_headers(header, available)}", file=file, key_path=OPTION)
     found = {key: mapping.get(key, key) for key in CHANNELS if mapping.get(key, key) in present}
+    repeated = sorted({h for h in found.values() if available.count(h) > 1})
+    if repeated:  # the reader would take one of them without a word
+        raise InputError("repeated column " + ", ".join(
+            f"{h!r} ({available.count(h)} times)" for h in repeated) + " in the header; "
+            "expected each column once (rename or remove the copies)", file=file)
     if "time_s" not in found:
         raise missing(file, "time_s", available)
     if "wheel_load_kN" not in found and not (has_vehicle and "lateral_accel_g" in found):

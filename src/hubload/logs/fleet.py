@@ -31,11 +31,18 @@ class Failure:
 
 
 def summarise(path: str, study: Study, options: LogOptions) -> LogSummary | Failure:
-    """Process one log; bad input comes back as a value (it crosses process borders)."""
+    """Process one log; bad input comes back as a value (it crosses process borders).
+
+    Whatever else stops one log (memory, a bug) comes back as a Failure too, so that one
+    broken log never stops a fleet that skips the bad ones."""
     try:
         return process_log(path, study, options)
     except InputError as error:
         return Failure(path, str(error.located(path)))
+    except MemoryError:
+        return Failure(path, f"{path}: not enough memory for this log")
+    except Exception as error:  # noqa: BLE001 -- reported as this log's failure
+        return Failure(path, f"{path}: internal error ({type(error).__name__}: {error})")
 
 
 def find_logs(folder: Path) -> list[Path]:
@@ -61,9 +68,17 @@ def run_local(paths: list[str], study: Study, options: LogOptions, jobs: int | N
     with ProcessPoolExecutor(max_workers=workers) as pool:
         futures = {pool.submit(summarise, path, study, options): path for path in paths}
         for future in as_completed(futures):
-            found[futures[future]] = future.result()
+            found[futures[future]] = outcome(future, futures[future])
             progress(futures[future])
     return [found[path] for path in paths]
+
+
+def outcome(future, path: str) -> LogSummary | Failure:
+    """The future's result; a worker that died (killed, out of memory) fails its log only."""
+    try:
+        return future.result()
+    except Exception as error:  # noqa: BLE001 -- e.g. BrokenProcessPool
+        return Failure(path, f"{path}: the worker process stopped ({type(error).__name__})")
 
 
 def run_cluster(address: str, paths: list[str], study: Study, options: LogOptions,
@@ -85,6 +100,6 @@ def run_cluster(address: str, paths: list[str], study: Study, options: LogOption
         names = {future.key: path for future, path in zip(futures, paths)}
         found = {}
         for future in completed(futures):
-            found[names[future.key]] = future.result()
+            found[names[future.key]] = outcome(future, names[future.key])
             progress(names[future.key])
     return [found[path] for path in paths]

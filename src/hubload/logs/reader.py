@@ -160,16 +160,28 @@ def locate_csv_error(path: Path, columns: dict[str, str], error: Exception) -> I
     Bytes that are not UTF-8 are read as U+FFFD, so such a cell is named like any other
     that is not a number."""
     numeric_headers = {h for k, h in columns.items() if k not in DISCRETE_CHANNELS}
+    number = 0
     with path.open(encoding="utf-8-sig", errors="replace", newline="") as stream:
         rows = csv.reader(stream, delimiter=delimiter(path))
-        names = next(rows, [])
-        positions = {h: names.index(h) for h in numeric_headers if h in names}
-        for number, row in enumerate(rows, start=1):
-            found = row_error(row, len(names), positions)
-            if found is not None:
-                message, column = found
-                return InputError(message, file=str(path), key_path=f"row {number}{column}")
-    return InputError(f"cannot read the CSV file ({error})", file=str(path))
+        try:
+            names = next(rows, [])
+            positions = {h: names.index(h) for h in numeric_headers if h in names}
+            for number, row in enumerate(rows, start=1):
+                found = row_error(row, len(names), positions)
+                if found is not None:
+                    message, column = found
+                    return InputError(message, file=str(path),
+                                      key_path=f"row {number}{column}")
+        except csv.Error as failure:  # an unclosed quote runs on into a giant field
+            return InputError(f"cannot read the row ({failure}): expected closed quotes "
+                              "and fields of ordinary length", file=str(path),
+                              key_path=f"row {number + 1}")
+    return InputError(f"cannot read the CSV file ({cut(str(error))})", file=str(path))
+
+
+def cut(text: str, limit: int = 200) -> str:
+    """A library's message shortened (pyarrow quotes the offending row, however long)."""
+    return text if len(text) <= limit else text[:limit] + "..."
 
 
 def row_error(row: list[str], fields: int, positions: dict[str, int]) -> tuple[str, str] | None:

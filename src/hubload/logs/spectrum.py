@@ -21,6 +21,7 @@ References
 from __future__ import annotations
 
 import dataclasses
+import math
 from dataclasses import dataclass
 
 import numpy as np
@@ -163,8 +164,14 @@ def system_weights(life_h: dict[str, float]) -> dict[str, float]:
     engine's system damage share) divided by the bearing's damage, so that the
     weighted per-class damages add up to 1.
     """
-    terms = {label: (0.0 if not np.isfinite(life) else life ** -iso281.WEIBULL_SLOPE_ROLLER)
-             for label, life in life_h.items()}
+    zero = [label for label, life in life_h.items() if life <= 0]
+    if zero:  # a bearing without life takes the whole damage (L^-e is infinite)
+        return {label: (1.0 / len(zero) if label in zero else 0.0) for label in life_h}
+    # L^-e in logarithms, scaled by the largest: no overflow for the shortest lives
+    logs = {label: -iso281.WEIBULL_SLOPE_ROLLER * math.log(life)
+            for label, life in life_h.items() if math.isfinite(life)}
+    top = max(logs.values(), default=0.0)
+    terms = {label: math.exp(logs[label] - top) if label in logs else 0.0 for label in life_h}
     total = sum(terms.values())
     return {label: (term / total if total > 0 else 0.0) for label, term in terms.items()}
 

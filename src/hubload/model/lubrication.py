@@ -220,7 +220,7 @@ def life_modification_factor(kappa, contamination_factor_, fatigue_limit_n, equi
     """
     term = kappa_term_roller(kappa)
     load = np.asarray(equivalent_load_n, dtype=float)
-    with np.errstate(divide="ignore"):
+    with np.errstate(divide="ignore", over="ignore"):  # a vanishing P: the cap, as P = 0
         ratio = np.where(load > 0, contamination_factor_ * fatigue_limit_n
                          / np.where(load > 0, load, 1.0), np.inf)
     with np.errstate(invalid="ignore"):

@@ -4,7 +4,9 @@ from __future__ import annotations
 
 import tomli_w
 
+from hubload.casefile.validate import MAX_STRING_CHARS
 from hubload.domain.study import Cases
+from hubload.report.terminal.tables import plain
 from hubload.units import KN
 
 SIGNIFICANT = 10
@@ -34,7 +36,11 @@ def spectrum_text(machine: dict, cases: Cases, log_name: str, title: str,
                   temperature_c=None) -> str:
     """The case file's machine tables with the classed spectrum as its [[case]] blocks."""
     document = {key: value for key, value in machine.items()}
-    document["project"] = {**machine.get("project", {}), "title": f"{title}, spectrum of {log_name}"}
+    title = f"{title}, spectrum of {log_name}"
+    if len(title) > MAX_STRING_CHARS:  # the file must pass the check it is written for
+        title = title[:MAX_STRING_CHARS - 3] + "..."
+    document["project"] = {**machine.get("project", {}), "title": title}
+    log_name = plain(" ".join(log_name.splitlines()))  # one comment line
     document["case"] = case_blocks(cases, temperature_c)
     header = (f"# Duty spectrum classed from the log {log_name} by hubload spectrum:\n"
               "# time-at-level classes; each case holds a class's share of time, its mean\n"

@@ -23,6 +23,41 @@ VERDICT_BASES = ("shorter", "iso281", "refined")
 MATERIAL_NAMES = tuple(MATERIALS)
 TIME_SUM_TOLERANCE_PERCENT = 0.5
 
+# Plausibility limits (common practice): generous bounds beyond anything a wheel driven by a
+# hydraulic hub motor meets, so that no real machine is refused while a unit slip (m for mm,
+# N for kN) or a hostile value is, before it can overflow in a unit conversion.
+# Positions along the shaft and the wheel offset: hub motors carry the wheel within a few
+# hundred mm of their mounting face; 2 m is beyond any of them.
+MAX_POSITION_MM = 2000.0
+# Tyre radii: the smallest wheels on such drives are about 200 mm across, the largest
+# earthmover tyres about 4 m (radius 2 m, from memory).
+MIN_RADIUS_MM, MAX_RADIUS_MM = 50.0, 2500.0
+# Wheel forces: the heaviest off-road tyres carry about 1,000 kN (100 t, from memory); the
+# limit doubles it. Side and tractive forces stay below adhesion x load (adhesion <= 2).
+MAX_WHEEL_FORCE_KN = 2000.0
+# Speeds: low-speed high-torque motors run up to a few hundred r/min; a road wheel at
+# 300 km/h with a 0.3 m radius turns about 2,650 r/min.
+MAX_SPEED_RPM, MAX_SPEED_KMH = 5000.0, 300.0
+# Hydraulics: wheel motors are rated up to about 450-500 bar; 2,000 bar is beyond any pump.
+MAX_PRESSURE_BAR, MAX_FLOW_LPM, MAX_DISPLACEMENT_CC = 2000.0, 10000.0, 100000.0
+# Lateral acceleration: friction-limited by the adhesion coefficient (<= 2).
+MAX_LATERAL_G = 3.0
+# Bearings: catalogue tapered roller bearings span about C = 10 kN (10 mm bore) to tens of MN
+# (metre-size, from memory).
+MIN_RATING_KN, MAX_RATING_KN = 0.1, 100000.0
+MIN_DIAMETER_MM, MAX_DIAMETER_MM = 5.0, 5000.0
+MAX_ROLLER_MM, MAX_ROLLERS, MAX_CROWN_DROP_UM = 500.0, 500, 1000.0
+# Load factors: e = 1.5 tan a and Y = 0.4 cot a for angles of 1 to 60 deg stay below these.
+MAX_E, MAX_Y = 5.0, 50.0
+MIN_CONTACT_ANGLE_DEG = 1.0
+# A life target of a million hours is over a century of continuous running.
+MAX_TARGET_LIFE_H = 1e6
+MAX_VISCOSITY_CST = 100000.0   # ISO VG 3200, the top grade, is 3,200 mm2/s at 40 C
+MAX_AXLE_LOAD_KN, MIN_TRACK_MM, MAX_VEHICLE_MM = 2 * MAX_WHEEL_FORCE_KN, 100.0, 10000.0
+# Shaft steels: from about 300 MPa (mild steel) to about 2,500 MPa (maraging, from memory).
+MIN_STRENGTH_MPA, MAX_STRENGTH_MPA = 100.0, 5000.0
+MAX_KT, MAX_NOTCH_RADIUS_MM, MAX_REQUIRED_SAFETY = 10.0, 100.0, 10.0
+
 PROJECT = Table(
     name="project",
     doc="What the file is about and what it must reach.",
@@ -32,7 +67,7 @@ PROJECT = Table(
               example="Yard loader, front left wheel"),
         Field("target_life_h", "number", "Required life of the drive [h]: the bearing pair's "
               "system life and, with a [shaft] table, the shaft's fatigue life.",
-              exclusive_minimum=0, example=5000),
+              exclusive_minimum=0, maximum=MAX_TARGET_LIFE_H, example=5000),
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
               minimum=RELIABILITY_MIN_PERCENT, maximum=RELIABILITY_MAX_PERCENT, example=90),
@@ -57,11 +92,14 @@ WHEEL = Table(
     fields=(
         Field("offset_mm", "number", "Axial position of the wheel centre plane [mm] "
               "(may be negative: wheel centre inboard of the mounting face).",
-              required=True, example=95, label="wheel offset"),
+              required=True, minimum=-MAX_POSITION_MM, maximum=MAX_POSITION_MM, example=95,
+              label="wheel offset"),
         Field("loaded_radius_mm", "number", "Contact patch to wheel axis under load [mm].",
-              required=True, exclusive_minimum=0, example=330, label="loaded radius"),
+              required=True, minimum=MIN_RADIUS_MM, maximum=MAX_RADIUS_MM, example=330,
+              label="loaded radius"),
         Field("rolling_radius_mm", "number", "Rolling radius [mm], used for km/h <-> r/min and "
-              "for distances (default: loaded_radius_mm).", exclusive_minimum=0),
+              "for distances (default: loaded_radius_mm).", minimum=MIN_RADIUS_MM,
+              maximum=MAX_RADIUS_MM),
         Field("adhesion_mu", "number", "Tyre-ground adhesion coefficient: a tractive or braking "
               "force above adhesion_mu x wheel load is capped there and the case flagged "
               "(0.6: common practice for tyres on dry ground; see docs/operating-points.md).",
@@ -75,7 +113,7 @@ MOTOR = Table(
     required=False,
     fields=(
         Field("displacement_cc", "number", "Displacement per revolution in full mode [cm3].",
-              required=True, exclusive_minimum=0, example=750),
+              required=True, exclusive_minimum=0, maximum=MAX_DISPLACEMENT_CC, example=750),
         Field("half_mode", "boolean", "The motor can switch to half displacement (two-speed "
               "motor): cases may then give mode = \"half\".", default=False),
         Field("efficiency_volumetric", "number", "Volumetric efficiency (speed = flow x "
@@ -85,9 +123,9 @@ MOTOR = Table(
               "pressure x displacement x efficiency / 2 pi; default 1: ideal).", default=1.0,
               exclusive_minimum=0, maximum=1, example=0.92),
         Field("max_pressure_bar", "number", "Rated pressure difference [bar]; cases above it "
-              "are flagged.", exclusive_minimum=0, example=350),
+              "are flagged.", exclusive_minimum=0, maximum=MAX_PRESSURE_BAR, example=350),
         Field("max_speed_rpm", "number", "Rated speed [r/min]; cases above it are flagged.",
-              exclusive_minimum=0, example=200),
+              exclusive_minimum=0, maximum=MAX_SPEED_RPM, example=200),
     ),
 )
 
@@ -98,50 +136,60 @@ VEHICLE = Table(
     required=False,
     fields=(
         Field("axle_load_kN", "number", "Static load on this wheel's axle [kN] (both wheels).",
-              required=True, exclusive_minimum=0, example=30),
+              required=True, exclusive_minimum=0, maximum=MAX_AXLE_LOAD_KN, example=30),
         Field("track_mm", "number", "Track width of the axle, tyre centre to tyre centre [mm].",
-              required=True, exclusive_minimum=0, example=1550),
+              required=True, minimum=MIN_TRACK_MM, maximum=MAX_VEHICLE_MM, example=1550),
         Field("cog_height_mm", "number", "Height of the centre of gravity above the ground [mm].",
-              required=True, minimum=0, example=900),
+              required=True, minimum=0, maximum=MAX_VEHICLE_MM, example=900),
     ),
 )
 
 BEARING_FIELDS = (
     Field("name", "string", "Label of the bearing (optional).", example="tapered roller"),
     Field("position_mm", "number", "Axial position of the bearing's effective load centre [mm].",
-          required=True),
+          required=True, minimum=-MAX_POSITION_MM, maximum=MAX_POSITION_MM),
     Field("C_kN", "number", "Basic dynamic load rating C [kN] (ISO 281).",
-          required=True, exclusive_minimum=0),
+          required=True, minimum=MIN_RATING_KN, maximum=MAX_RATING_KN),
     Field("C0_kN", "number", "Basic static load rating C0 [kN] (ISO 76).",
-          required=True, exclusive_minimum=0),
-    Field("e", "number", "Limit of Fa/Fr for X = 1, Y = 0 (ISO 281).", exclusive_minimum=0),
-    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", exclusive_minimum=0),
-    Field("Y0", "number", "Static axial load factor Y0 (ISO 76).", exclusive_minimum=0),
+          required=True, minimum=MIN_RATING_KN, maximum=MAX_RATING_KN),
+    Field("e", "number", "Limit of Fa/Fr for X = 1, Y = 0 (ISO 281).", exclusive_minimum=0,
+          maximum=MAX_E),
+    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", exclusive_minimum=0,
+          maximum=MAX_Y),
+    Field("Y0", "number", "Static axial load factor Y0 (ISO 76).", exclusive_minimum=0,
+          maximum=MAX_Y),
     Field("contact_angle_deg", "number", "Contact angle of the outer raceway (cup) [deg]. "
           "Gives e = 1.5 tan a, Y = 0.4 cot a, Y0 = 0.22 cot a when e, Y, Y0 are not given; "
           "with them, e, Y, Y0 serve the ISO 281 rule and the angle the internal geometry.",
-          exclusive_minimum=0, exclusive_maximum=60),
+          minimum=MIN_CONTACT_ANGLE_DEG, exclusive_maximum=60),
     Field("mean_diameter_mm", "number", "Mean diameter dm = (d + D) / 2 [mm] (bore d, outside "
-          "diameter D); required with [lubrication].", exclusive_minimum=0),
+          "diameter D); required with [lubrication].", minimum=MIN_DIAMETER_MM,
+          maximum=MAX_DIAMETER_MM),
     Field("Cu_kN", "number", "Fatigue load limit Cu [kN] from the bearing's data (default: "
-          "estimated from C0 by ISO 281 annex B).", exclusive_minimum=0),
+          "estimated from C0 by ISO 281 annex B).", exclusive_minimum=0,
+          maximum=MAX_RATING_KN),
     Field("rollers", "integer", "Internal geometry: number of rollers Z (with roller_diameter_mm, "
           "roller_length_mm, pitch_diameter_mm and contact_angle_deg; needed by the refined "
-          "method, and gives C and C0 from the geometry).", minimum=3),
-    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].", exclusive_minimum=0),
+          "method, and gives C and C0 from the geometry).", minimum=3, maximum=MAX_ROLLERS),
+    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].", exclusive_minimum=0,
+          maximum=MAX_ROLLER_MM),
     Field("roller_length_mm", "number", "Effective roller length Lwe [mm] (contact length with "
-          "the raceway, without the chamfers).", exclusive_minimum=0),
+          "the raceway, without the chamfers).", exclusive_minimum=0, maximum=MAX_ROLLER_MM),
     Field("pitch_diameter_mm", "number", "Pitch diameter Dpw of the roller set [mm] (diameter of "
-          "the circle through the roller centres at mid-length).", exclusive_minimum=0),
+          "the circle through the roller centres at mid-length).", minimum=MIN_DIAMETER_MM,
+          maximum=MAX_DIAMETER_MM),
     Field("roller_profile", "string", "Roller profile along its length: straight, or "
           "logarithmic crowning (then give crown_drop_um).", default="straight",
           choices=("straight", "logarithmic")),
     Field("crown_drop_um", "number", "Drop of the logarithmic profile at the ends of the "
-          "effective length [um] (both contacts together).", exclusive_minimum=0),
+          "effective length [um] (both contacts together).", exclusive_minimum=0,
+          maximum=MAX_CROWN_DROP_UM),
     Field("bore_mm", "number", "Bore d of the cone [mm] (shaft seat); needed by the fits of a "
-          "[pair.setting] on the unmounted basis.", exclusive_minimum=0),
+          "[pair.setting] on the unmounted basis.", exclusive_minimum=0,
+          maximum=MAX_POSITION_MM),
     Field("outside_diameter_mm", "number", "Outside diameter D of the cup [mm] (housing seat); "
-          "needed by the cup fit of a [pair.setting].", exclusive_minimum=0),
+          "needed by the cup fit of a [pair.setting].", exclusive_minimum=0,
+          maximum=MAX_POSITION_MM),
 )
 
 BEARING_FACTORS = Choice(
@@ -215,9 +263,10 @@ PAIR_SETTING = Table(
               "[um] (unmounted basis, or a light-alloy housing; needs outside_diameter_mm).",
               minimum=0, maximum=500),
         Field("shaft_bore_mm", "number", "Bore of a hollow shaft under the cones [mm] (default 0: "
-              "solid).", default=0.0, minimum=0),
+              "solid).", default=0.0, minimum=0, maximum=MAX_POSITION_MM),
         Field("housing_outside_diameter_mm", "number", "Outside diameter of the housing wall "
-              "around the cups [mm] (default: a thick housing).", exclusive_minimum=0),
+              "around the cups [mm] (default: a thick housing).", exclusive_minimum=0,
+              maximum=MAX_POSITION_MM),
     ),
 )
 
@@ -258,24 +307,28 @@ CASE = Table(
               maximum=100 + TIME_SUM_TOLERANCE_PERCENT, example=100),
         Field("wheel_load_kN", "number", "Vertical force of the ground on the tyre [kN]; "
               "required unless a [vehicle] block derives it from lateral_accel_g.",
-              minimum=0, example=25, label="wheel load"),
+              minimum=0, maximum=MAX_WHEEL_FORCE_KN, example=25, label="wheel load"),
         Field("side_force_kN", "number", "Force of the ground on the tyre along the axle [kN], "
               "positive towards the vehicle centreline (inboard); default 0, or wheel load x "
-              "lateral_accel_g.", example=0, label="side force (+ inboard)"),
+              "lateral_accel_g.", minimum=-MAX_WHEEL_FORCE_KN, maximum=MAX_WHEEL_FORCE_KN,
+              example=0, label="side force (+ inboard)"),
         Field("tractive_force_kN", "number", "Longitudinal force at the tyre [kN], "
-              "+ driving, - braking (default 0).", example=5, label="tractive force"),
-        Field("speed_rpm", "number", "Wheel speed [r/min] (0: standstill).", minimum=0),
+              "+ driving, - braking (default 0).", minimum=-MAX_WHEEL_FORCE_KN,
+              maximum=MAX_WHEEL_FORCE_KN, example=5, label="tractive force"),
+        Field("speed_rpm", "number", "Wheel speed [r/min] (0: standstill).", minimum=0,
+              maximum=MAX_SPEED_RPM),
         Field("speed_kmh", "number", "Vehicle speed [km/h], converted with the rolling radius.",
-              minimum=0, example=8),
+              minimum=0, maximum=MAX_SPEED_KMH, example=8),
         Field("pressure_bar", "number", "Pressure difference across the motor [bar]: + drives "
-              "the wheel, - brakes it (the motor pumps). Needs a [motor] block."),
+              "the wheel, - brakes it (the motor pumps). Needs a [motor] block.",
+              minimum=-MAX_PRESSURE_BAR, maximum=MAX_PRESSURE_BAR),
         Field("flow_lpm", "number", "Flow through the motor [l/min]; gives the speed.",
-              minimum=0),
+              minimum=0, maximum=MAX_FLOW_LPM),
         Field("mode", "string", "Motor displacement in use (default full; half needs "
               "[motor] half_mode = true).", choices=("full", "half")),
         Field("lateral_accel_g", "number", "Steady lateral acceleration [g], + when this wheel "
               "is on the outside of the turn; gives the side force (and, with a [vehicle] block, "
-              "the wheel load)."),
+              "the wheel load).", minimum=-MAX_LATERAL_G, maximum=MAX_LATERAL_G),
         Field("temperature_C", "number", "Bearing operating temperature in this case [C] "
               "(default: [lubrication] temperature_C).", minimum=-40, maximum=150),
         Field("shaft_temperature_C", "number", "Temperature of shaft, cones and rollers in this "
@@ -301,9 +354,10 @@ LUBRICATION = Table(
     fields=(
         Field("viscosity_40C_cSt", "number", "Kinematic viscosity at 40 C [mm2/s] from the oil's "
               "data sheet (Walther/ASTM D341 holds down to 2 mm2/s).", required=True, minimum=2,
-              example=46),
+              maximum=MAX_VISCOSITY_CST, example=46),
         Field("viscosity_100C_cSt", "number", "Kinematic viscosity at 100 C [mm2/s] from the data "
-              "sheet; below the 40 C value.", required=True, minimum=2, example=7.8),
+              "sheet; below the 40 C value.", required=True, minimum=2,
+              maximum=MAX_VISCOSITY_CST, example=7.8),
         Field("temperature_C", "number", "Bearing operating temperature [C] (a case may "
               "override it).", required=True, minimum=-40, maximum=150, example=60),
         Field("method", "string", "oil-filtered: oil with on-line filtration; oil-unfiltered: "
@@ -327,18 +381,20 @@ SHAFT_SECTION = Table(
         Field("name", "string", "Name of the section (unique).", required=True,
               example="flange fillet"),
         Field("position_mm", "number", "Axial position of the section [mm], same axis as the "
-              "bearings and the wheel offset.", required=True, example=70),
+              "bearings and the wheel offset.", required=True, minimum=-MAX_POSITION_MM,
+              maximum=MAX_POSITION_MM, example=70),
         Field("diameter_mm", "number", "Diameter of the solid shaft at the section [mm] (the "
               "smaller diameter at a shoulder), 2.79-254 mm.", required=True,
               exclusive_minimum=0, example=60),
         Field("kt_bending", "number", "Stress-concentration factor Kt in bending (1: no notch).",
-              default=1.0, minimum=1, example=1.7),
+              default=1.0, minimum=1, maximum=MAX_KT, example=1.7),
         Field("kt_torsion", "number", "Stress-concentration factor Kts in torsion (1: no notch).",
-              default=1.0, minimum=1, example=1.4),
+              default=1.0, minimum=1, maximum=MAX_KT, example=1.4),
         Field("notch_sensitivity", "number", "Notch sensitivity q (Kf = 1 + q (Kt - 1)); "
               "default 1 (Kf = Kt) unless notch_radius_mm is given.", minimum=0, maximum=1),
         Field("notch_radius_mm", "number", "Notch (fillet) radius [mm]; q is then estimated "
-              "for steel by Neuber's equation.", exclusive_minimum=0, example=3),
+              "for steel by Neuber's equation.", exclusive_minimum=0,
+              maximum=MAX_NOTCH_RADIUS_MM, example=3),
         Field("carries_torque", "boolean", "Whether the drive torque (tractive force x rolling "
               "radius) passes through this section.", default=True, example=True),
     ),
@@ -354,9 +410,11 @@ SHAFT_PERMISSIBLE = Table(
         "the load (same axis as the wheel offset); interpolated linearly, never extrapolated.",
     fields=(
         Field("load_position_mm", "number-list", "Positions of the curve's points [mm], "
-              "strictly increasing.", required=True, example=(0, 50, 100, 150)),
+              "strictly increasing.", required=True, minimum=-MAX_POSITION_MM,
+              maximum=MAX_POSITION_MM, example=(0, 50, 100, 150)),
         Field("radial_load_kN", "number-list", "Permissible radial wheel load at each position "
-              "[kN].", required=True, exclusive_minimum=0, example=(60, 45, 35, 28)),
+              "[kN].", required=True, exclusive_minimum=0, maximum=MAX_RATING_KN,
+              example=(60, 45, 35, 28)),
     ),
 )
 
@@ -367,9 +425,9 @@ SHAFT = Table(
         "Mechanical Engineering Design, 10th ed.",
     fields=(
         Field("ultimate_strength_MPa", "number", "Tensile strength Sut of the shaft steel [MPa].",
-              required=True, exclusive_minimum=0, example=900),
+              required=True, minimum=MIN_STRENGTH_MPA, maximum=MAX_STRENGTH_MPA, example=900),
         Field("yield_strength_MPa", "number", "Yield strength Sy of the shaft steel [MPa].",
-              required=True, exclusive_minimum=0, example=700),
+              required=True, minimum=MIN_STRENGTH_MPA, maximum=MAX_STRENGTH_MPA, example=700),
         Field("surface", "string", "Surface finish at the checked sections (Marin surface "
               "factor).", required=True, choices=SURFACES,
               example="machined"),
@@ -382,7 +440,7 @@ SHAFT = Table(
               default="goodman", choices=CRITERIA),
         Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
               "(default 1.5, common practice for shafts under well-known loads).",
-              default=1.5, exclusive_minimum=0),
+              default=1.5, exclusive_minimum=0, maximum=MAX_REQUIRED_SAFETY),
     ),
     tables=(SHAFT_SECTION, SHAFT_PERMISSIBLE),
 )

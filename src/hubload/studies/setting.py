@@ -84,10 +84,11 @@ def setting_values_um(start_um: float, stop_um: float, step_um: float) -> np.nda
     if start_um < low or stop_um > high:
         raise InputError(f"settings must lie within {low:g} to {high:g} um, "
                          f"got {start_um:g} to {stop_um:g}", key_path="start_um")
-    count = int(np.floor((stop_um - start_um) / step_um + 1e-9)) + 1
-    if count > MAX_POINTS:
-        raise InputError(f"{count} settings requested; at most {MAX_POINTS} (raise the step)",
-                         key_path="step_um")
+    steps = (stop_um - start_um) / step_um
+    if steps >= MAX_POINTS:
+        raise InputError(f"{steps + 1:.3g} settings requested; at most {MAX_POINTS} (raise "
+                         "the step)", key_path="step_um")
+    count = int(np.floor(steps + 1e-9)) + 1
     return start_um + step_um * np.arange(count)
 
 

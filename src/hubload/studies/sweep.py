@@ -18,6 +18,7 @@ from functools import cached_property
 import numpy as np
 
 from hubload.casefile.load import read_document, study_from_document
+from hubload.casefile.validate import validate_number
 from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_studies
 from hubload.domain.batch import StackError, picker, stack_studies
 from hubload.domain.grid import grid_builder, point_study
@@ -192,6 +193,14 @@ def parse_one(spec: str, document: dict, file: str) -> Axis:
     if not math.isfinite(stop - start) or not (one_point or (count >= 2 and start != stop)):
         raise InputError(f"expected finite START != STOP and COUNT >= 2 (or START = STOP with "
                          f"COUNT = 1), got {span!r}", file=file, key_path=key)
+    if count > MAX_POINTS:  # before linspace: it would try to allocate them all
+        raise InputError(f"expected a COUNT of at most {MAX_POINTS:,} (the largest grid), got "
+                         f"{count:,}", file=file, key_path=key)
+    for end in (start, stop):  # the grid's extremes: refused before any point is computed
+        try:
+            validate_number(end, path.field, key)
+        except InputError as error:
+            raise error.located(file) from None
     values = np.linspace(start, stop, count)
     if path.integer:
         if not np.allclose(values, np.round(values), rtol=0, atol=1e-9):

@@ -31,6 +31,7 @@ from hubload.model import statics, tapered_pair
 GOODMAN = "goodman"
 ASME_ELLIPTIC = "asme-elliptic"
 CRITERIA = (GOODMAN, ASME_ELLIPTIC)
+SMALLEST_RECIPROCABLE = 1.0 / np.finfo(float).max   # 1 / x is finite for every x above it
 
 
 @dataclass(frozen=True)
@@ -112,10 +113,14 @@ def von_mises_stresses(loads: SectionLoads, diameter_m, kf_bending, kf_torsion) 
 
 
 def reciprocal(value):
-    """1 / value with 1 / 0 = inf (an unstressed section is infinitely safe)."""
+    """1 / value with 1 / 0 = inf (an unstressed section is infinitely safe).
+
+    Values too small for a finite reciprocal (below 1 / the largest float, subnormal
+    numbers) count as 0, so that no overflow can occur: by construction, not by silencing.
+    """
     value = np.asarray(value, dtype=float)
-    with np.errstate(divide="ignore"):
-        return np.where(value > 0, 1.0 / np.where(value > 0, value, 1.0), np.inf)
+    finite = value >= SMALLEST_RECIPROCABLE
+    return np.where(finite, 1.0 / np.where(finite, value, 1.0), np.inf)
 
 
 def goodman_safety(alternating_pa, mean_pa, endurance_pa, ultimate_pa):

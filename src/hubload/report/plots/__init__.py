@@ -10,15 +10,16 @@ from __future__ import annotations
 import functools
 import io
 import textwrap
+from collections.abc import Iterable
+from pathlib import Path
 
 import matplotlib
 import numpy as np
 from matplotlib.backends.backend_agg import FigureCanvasAgg
 from matplotlib.figure import Figure
 
-from hubload.errors import InputError
 from hubload.report.cautions import CAUTIONS
-from hubload.report.files import checked_output
+from hubload.report.files import write_with
 
 PLOT_SUFFIXES = (".png", ".svg")
 STYLE = {"svg.fonttype": "path", "svg.hashsalt": "hubload", "font.size": 9,
@@ -63,14 +64,16 @@ def add_caution(figure: Figure) -> None:
                 va="bottom")
 
 
-def save(figure: Figure, path: str, force: bool) -> None:
-    """Write ``figure`` as PNG or SVG (by extension); never over a file without ``force``."""
-    target = checked_output(path, force, PLOT_SUFFIXES)
-    try:
+def save(figure: Figure, path: str, force: bool, inputs: Iterable[str] = ()) -> None:
+    """Write ``figure`` as PNG or SVG (by extension), atomically; never over a file without
+    ``force``, never over one of the run's ``inputs``."""
+    kind = Path(path).suffix.lower().lstrip(".")
+
+    def draw(temporary: Path) -> None:
         with matplotlib.rc_context(STYLE):
-            figure.savefig(target, format=target.suffix.lower().lstrip("."))
-    except OSError as error:
-        raise InputError(f"cannot write the file ({error.strerror})", file=str(path)) from None
+            figure.savefig(temporary, format=kind)
+
+    write_with(path, draw, force, PLOT_SUFFIXES, inputs)
 
 
 def svg_text(figure: Figure) -> str:

@@ -119,7 +119,7 @@ def render_check(result: Result, console: Console, show_all: bool = False) -> No
         render(ratings, console)
     render(specs.summary_table(result), console)
     for line in lubrication_notes(result):
-        console.print(Text(f"Note: {line}"))
+        console.print(Text(f"Note: {plain(line)}"))
     if result.friction is not None and not (show_all or result.refined is not None):
         console.print(Text(friction_line(result)))
     console.print(dominant_line(result))

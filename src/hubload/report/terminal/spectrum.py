@@ -6,7 +6,6 @@ from pathlib import Path
 
 import numpy as np
 from rich.console import Console
-from rich.markup import escape
 from rich.table import Table
 from rich.text import Text
 
@@ -78,7 +77,7 @@ def shaft_table(result: SpectrumResult) -> Table | None:
         table.add_column(heading, justify="left" if heading == "section" else "right")
     for i, (section, life) in enumerate(zip(result.classed.shaft.sections,
                                             result.shaft_life_h)):
-        table.add_row(escape(section.name), hours(life), hours(section.fatigue_life_h),
+        table.add_row(Text(plain(section.name)), hours(life), hours(section.fatigue_life_h),
                       safety(extremes['min_safety'][i]), safety(extremes['yield_safety'][i]))
     return table
 
@@ -104,7 +103,7 @@ def top_cases_table(result: SpectrumResult) -> Table:
                              ("damage", "right")):
         table.add_column(heading, justify=justify)
     for i in order:
-        table.add_row(escape(cases.names[i]), share(cases.time_fraction[i]),
+        table.add_row(Text(plain(cases.names[i])), share(cases.time_fraction[i]),
                       f"{cases.wheel_load_n[i] / KN:.2f}", f"{cases.side_force_n[i] / KN:.2f}",
                       f"{cases.tractive_force_n[i] / KN:.2f}", f"{cases.speed_rpm[i]:.1f}",
                       share(shares[i]))
@@ -137,9 +136,9 @@ def error_line(result: SpectrumResult) -> str:
 
 
 def render_log(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:
-    console.print(f"[bold]{escape(result.summary.name)}[/]")
+    console.print(Text(plain(result.summary.name), style="bold"))
     for line in cleaning_lines(result):
-        console.print(f"  {line}")
+        console.print(Text(f"  {plain(line)}"))
     render_spec(lives_table(result), console)
     console.print(error_line(result))
     shaft = shaft_table(result)
@@ -149,11 +148,12 @@ def render_log(result: SpectrumResult, console: Console, spectrum_file: str | No
     console.print(shares_table(result, "speed_rpm", "Direct damage by wheel speed", "r/min"))
     console.print(top_cases_table(result))
     if spectrum_file:
-        console.print(f"Spectrum written to {spectrum_file} (hubload check runs on it).")
+        console.print(Text(f"Spectrum written to {plain(spectrum_file)} (hubload check runs on "
+                           "it)."))
     console.print(Text(f"Governing life (direct): {result.direct_governing.symbol} = "
                        f"{hours(result.governing_life_h)} h ({result.direct_governing.basis})."))
     for warning in warning_texts(result.findings, ()):
-        console.print(Text.assemble(("Warning:", "yellow"), f" {warning}"))
+        console.print(Text.assemble(("Warning:", "yellow"), f" {plain(warning)}"))
 
 
 def render(result: SpectrumResult, console: Console, spectrum_file: str | None) -> None:

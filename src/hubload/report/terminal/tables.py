@@ -19,13 +19,19 @@ from rich.text import Text
 
 from hubload.report.columns import Column, TableSpec
 
+# Terminal escape sequences whole (ECMA-48: CSI ... final byte, OSC ... BEL or ST, and the
+# two-byte ones), so that no remnant like "[31m" stays behind; then any control character.
+ESCAPE_SEQUENCE = re.compile(r"(\x1b\[|\x9b)[0-?]*[ -/]*[@-~]?"
+                             r"|(\x1b[\]PX^_]|[\x90\x98\x9d\x9e\x9f]).*?(\x07|\x1b\\|\x9c|$)"
+                             r"|\x1b[ -/]*[0-~]?", re.DOTALL)
 CONTROL = re.compile(r"[\x00-\x08\x0b-\x1f\x7f-\x9f]")
 NAME_MIN_WIDTH = 12
 
 
 def plain(text: str) -> str:
-    """User text for the terminal: control characters (escape sequences) removed."""
-    return CONTROL.sub("", str(text))
+    """User text for the terminal: escape sequences and control characters removed (line
+    breaks and tabs stay)."""
+    return CONTROL.sub("", ESCAPE_SEQUENCE.sub("", str(text)))
 
 
 def heading(column: Column, width: int = 0) -> Text:
