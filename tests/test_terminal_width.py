@@ -82,3 +82,4 @@ def test_a_classed_spectrum_of_a_thousand_cases_stays_short(tmp_path):
     assert_uncut(text, 80)
     assert len(text.splitlines()) < 150 and "990 more cases" in " ".join(text.split())
     assert len(run(80, "check", big, "--all").splitlines()) > 1000
+
