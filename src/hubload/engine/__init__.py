@@ -13,18 +13,22 @@ from __future__ import annotations
 
 from dataclasses import dataclass, field, replace
 from functools import cached_property
+from typing import TYPE_CHECKING
 
 import numpy as np
 
 from hubload.domain.batch import picker, stack_studies
 from hubload.domain.study import Study
-from hubload.engine import findings, finite, modified_life, refined_method, shaftcheck, verdict
+from hubload.engine import findings, finite, modified_life, verdict
 from hubload.engine.findings import STATIC_SAFETY_WARNING
-from hubload.engine.friction import Friction, evaluate_friction
 from hubload.engine.governing import GoverningLife, govern
 from hubload.engine.pair import BearingResult, MethodLives, mean_speed_rpm, method_lives, \
     per_study_km
 from hubload.engine.setting import OperatingSetting, band_ends, operating_setting
+
+if TYPE_CHECKING:  # the shaft, refined and friction modules load only when a study uses them
+    from hubload.engine import refined_method, shaftcheck
+    from hubload.engine.friction import Friction
 
 __all__ = ["STATIC_SAFETY_WARNING", "BearingResult", "MethodLives", "Result", "evaluate",
            "evaluate_many"]
@@ -97,8 +101,7 @@ def evaluate(study: Study, with_findings: bool = True) -> Result:
     """
     mean_rpm = mean_speed_rpm(study)
     setting = operating_setting(study)
-    refined = refined_method.solve(study, setting.operating_m) \
-        if study.method == "refined" else None
+    refined = solve_refined(study, setting.operating_m) if study.method == "refined" else None
     lives = method_lives(study, mean_rpm, refined)
     beside = method_lives(study, mean_rpm) if refined is not None else None
     band = band_lives(study, mean_rpm) if refined is not None and setting.band else None
@@ -111,21 +114,47 @@ def evaluate(study: Study, with_findings: bool = True) -> Result:
         study=study, bearings=lives.bearings, system_life_h=lives.system_life_h,
         system_life_km=lives.system_life_km, system_damage_share=lives.system_damage_share,
         mean_speed_rpm=mean_rpm, governing=governing, a1=a1, modified=lives.modified,
-        shaft=shaftcheck.evaluate_shaft(study, lambda h: per_study_km(h, mean_rpm, study)),
-        refined=refined, iso281=beside, geometry_ratings=refined_method.geometry_ratings(study),
-        setting=setting, band=band,
-        friction=None if lives.modified is None else evaluate_friction(
-            study, lives.bearings, lives.modified.viscosity_m2_s))
+        shaft=shaft_result(study, mean_rpm), refined=refined, iso281=beside,
+        geometry_ratings=geometry_ratings(study), setting=setting, band=band,
+        friction=None if lives.modified is None else friction_of(study, lives))
     single = np.ndim(result.system_life_h) == 0
     return replace(result, findings=findings.collect(result)) if single and with_findings \
         else result
+
+
+def solve_refined(study: Study, setting_m):
+    from hubload.engine import refined_method
+
+    return refined_method.solve(study, setting_m)
+
+
+def shaft_result(study: Study, mean_rpm):
+    if study.shaft is None:
+        return None
+    from hubload.engine import shaftcheck
+
+    return shaftcheck.evaluate_shaft(study, lambda h: per_study_km(h, mean_rpm, study))
+
+
+def geometry_ratings(study: Study) -> dict:
+    if all(bearing.geometry is None for bearing in study.pair.bearings().values()):
+        return {}
+    from hubload.engine import refined_method
+
+    return refined_method.geometry_ratings(study)
+
+
+def friction_of(study: Study, lives: MethodLives):
+    from hubload.engine.friction import evaluate_friction
+
+    return evaluate_friction(study, lives.bearings, lives.modified.viscosity_m2_s)
 
 
 def band_lives(study: Study, mean_rpm) -> tuple[MethodLives, MethodLives]:
     """The refined lives at the low and the high end of the assembly setting's band."""
     found = []
     for end in band_ends(study):
-        solved = refined_method.solve(end, operating_setting(end).operating_m)
+        solved = solve_refined(end, operating_setting(end).operating_m)
         found.append(method_lives(end, mean_rpm, solved))
     return tuple(found)
 

@@ -7,13 +7,17 @@ carry leading batch axes (parameter studies).
 from __future__ import annotations
 
 from dataclasses import dataclass
+from typing import TYPE_CHECKING
 
 import numpy as np
 
 from hubload.domain.study import Bearing, Study
-from hubload.engine import modified_life, refined_method
+from hubload.engine import modified_life
 from hubload.model import iso281, statics, tapered_pair
 from hubload.model.kinematics import distance_km
+
+if TYPE_CHECKING:
+    from hubload.engine import refined_method
 
 LABELS = ("outboard", "inboard")
 

@@ -25,7 +25,6 @@ from hubload.domain.study import Study
 from hubload.engine.governing import GoverningLife
 from hubload.engine.modified_life import per_study
 from hubload.model.iso281 import LIFE_EXPONENT_ROLLER
-from hubload.model.refined.life import RATING_LIFE_EXPONENT
 
 
 @dataclass(frozen=True)
@@ -91,7 +90,11 @@ class OverallVerdict:
 
 def life_exponent(governing: GoverningLife) -> float:
     """Life-load exponent of the governing life: 10/3 (ISO 281) or 4 (ISO/TS 16281)."""
-    return RATING_LIFE_EXPONENT if governing.method == "refined" else LIFE_EXPONENT_ROLLER
+    if governing.method != "refined":
+        return LIFE_EXPONENT_ROLLER
+    from hubload.model.refined.life import RATING_LIFE_EXPONENT
+
+    return RATING_LIFE_EXPONENT
 
 
 def bearing_verdict(study: Study, governing: GoverningLife) -> Verdict | None:

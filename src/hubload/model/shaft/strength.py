@@ -31,7 +31,6 @@ References
 from __future__ import annotations
 
 from dataclasses import dataclass
-from statistics import NormalDist
 
 import numpy as np
 
@@ -125,6 +124,8 @@ def reliability_factor(reliability_percent):
     za is the standard normal quantile; the standard library's (Wichura's algorithm AS 241)
     keeps scipy.special out of the CLI's start-up.
     """
+    from statistics import NormalDist  # only a reliability factor needs it
+
     quantile = np.vectorize(NormalDist().inv_cdf, otypes=[float])
     return 1.0 - RELIABILITY_SLOPE * quantile(np.asarray(reliability_percent, dtype=float) / 100.0)
 
