@@ -67,8 +67,11 @@ def study_from_document(document: dict, source: str = "<document>") -> Study:
     return study_from_validated(validate_document(document, FORMAT), source)
 
 
-def study_from_validated(data: dict, source: str = "<document>") -> Study:
-    """Convert a document already checked by validate_document (defaults filled in)."""
+def study_from_validated(data: dict, source: str = "<document>", finite: bool = True) -> Study:
+    """Convert a document already checked by validate_document (defaults filled in).
+
+    ``finite=False`` leaves the check after conversion to the caller (a sweep checks its
+    points together, casefile.variation)."""
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})
@@ -90,7 +93,8 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
         shaft=read_shaft(data["shaft"], pair) if "shaft" in data else None,
         verdict_basis=project.get("verdict_basis", "shorter"),
     )
-    return check_finite(with_method(study, project.get("method", "iso281")))
+    study = with_method(study, project.get("method", "iso281"))
+    return check_finite(study) if finite else study
 
 
 def read_wheel(data: dict) -> Wheel:

@@ -13,9 +13,11 @@ import re
 from collections.abc import Mapping
 from dataclasses import dataclass
 
+from hubload.casefile.finite import check_finite
 from hubload.casefile.load import study_from_validated
 from hubload.casefile.validate import (nearest_key_hint, validate_document, validate_number,
                                       validate_value)
+from hubload.domain.batch import stack_studies
 from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
@@ -167,11 +169,41 @@ def variant_studies(document: Mapping, points: list[dict[KeyPath, float]],
     against the format before conversion (whose cross-key rules run per point).
     InputError names the point.
     """
+    studies = unchecked_variants(document, points, source)
+    for study, values in zip(studies, points):
+        finite_at_point(study, values, source)
+    return studies
+
+
+def stacked_variants(document: Mapping, points: list[dict[KeyPath, float]],
+                     source: str) -> tuple[list[Study], Study]:
+    """The studies of :func:`variant_studies` and their stack (domain.batch), checked finite
+    after conversion all at once: point by point only when a number is not, to name it."""
+    studies = unchecked_variants(document, points, source)
+    batched = stack_studies(studies)
+    try:
+        check_finite(batched)
+    except InputError:
+        for study, values in zip(studies, points):
+            finite_at_point(study, values, source)
+        raise
+    return studies, batched
+
+
+def unchecked_variants(document: Mapping, points: list[dict[KeyPath, float]],
+                       source: str) -> list[Study]:
     try:
         data = validate_document(with_values(document, points[0]), FORMAT)
     except InputError as error:
         raise at_point(error, points[0], source) from None
     return [variant_from_validated(data, values, source) for values in points]
+
+
+def finite_at_point(study: Study, values: dict[KeyPath, float], source: str) -> None:
+    try:
+        check_finite(study)
+    except InputError as error:
+        raise at_point(error, values, source) from None
 
 
 def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str) -> Study:
@@ -182,7 +214,7 @@ def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str
             else:
                 validate_value(int(value) if path.integer else float(value), path.field,
                                path.text)
-        return study_from_validated(with_values(data, values), source=source)
+        return study_from_validated(with_values(data, values), source=source, finite=False)
     except InputError as error:
         raise at_point(error, values, source) from None
 

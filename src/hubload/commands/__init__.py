@@ -7,12 +7,12 @@ the result, so a command works from a notebook too.
 
 from __future__ import annotations
 
-import json
 
 import click
 
 from hubload import api
 from hubload.errors import InputError
+from hubload.report.json.text import document_text
 
 PLOT_SUFFIXES = (".png", ".svg")
 
@@ -62,7 +62,7 @@ def check(file: str, as_json: bool = False, report: str | None = None,
         save(damage_share_figure(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document_text(found.to_dict()))
     else:
         from hubload.report.terminal.check import render_check
 
@@ -74,7 +74,7 @@ def schema() -> None:
     from hubload.schema import FORMAT
     from hubload.schema.export import json_schema
 
-    click.echo(json.dumps(json_schema(FORMAT), indent=2))
+    click.echo(document_text(json_schema(FORMAT)))
 
 
 def template() -> None:
@@ -101,7 +101,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
         save(draw(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document_text(found.to_dict()))
     else:
         from hubload.report.terminal.sweep import render
 
@@ -120,7 +120,7 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
         save(compare_figure(found.value), plot, force, files)
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document_text(found.to_dict()))
     else:
         from hubload.report.terminal.compare import render
 
@@ -159,7 +159,7 @@ def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json:
         save(setting_figure(found.value), plot, force, (file,))
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document_text(found.to_dict()))
     else:
         from hubload.report.terminal.setting import render_setting
 

@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import dataclasses
-import json
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -13,6 +12,7 @@ from rich.progress import Progress
 
 from hubload import api
 from hubload.errors import InputError
+from hubload.report.json.text import document_text
 from hubload.logs.analysis import COMBINED_NAME, LogRun, log_paths
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.files import checked_output, write_text
@@ -56,7 +56,7 @@ def spectrum(request: Request) -> api.LogsResult:
         else write_single(request, run, inputs)
     found = dataclasses.replace(found, files=files)
     if request.as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document_text(found.to_dict()))
     else:
         from hubload.report.terminal.spectrum import render, render_fleet
 

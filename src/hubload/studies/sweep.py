@@ -19,8 +19,9 @@ import numpy as np
 
 from hubload.casefile.load import read_document, study_from_document
 from hubload.casefile.validate import validate_number
-from hubload.casefile.variation import KeyPath, current_value, parse_key_path, variant_studies
-from hubload.domain.batch import StackError, picker, stack_studies
+from hubload.casefile.variation import KeyPath, current_value, parse_key_path, \
+    stacked_variants, variant_studies
+from hubload.domain.batch import StackError, picker
 from hubload.domain.grid import grid_builder, point_study
 from hubload.domain.study import Study
 from hubload.engine import Result, evaluate, with_findings
@@ -242,8 +243,8 @@ def run_sweep(file: str, specs: Sequence[str],
         chunk = [{path: value for axis, i in zip(axes, point) for path, value in axis.at(i).items()}
                  for point in grid[start:stop]]
         if build is None:
-            studies = tuple(variant_studies(document, chunk, file))
-            batched = stack_studies(studies)
+            studies, batched = stacked_variants(document, chunk, file)
+            studies = tuple(studies)
         else:
             batched = build([np.array(column) for column in zip(*grid[start:stop])])
             studies = PointStudies(base, batched, stop - start)

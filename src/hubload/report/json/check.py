@@ -6,7 +6,6 @@ Infinite lives (and undefined values) are written as null.
 
 from __future__ import annotations
 
-import json
 
 import numpy as np
 
@@ -16,6 +15,7 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.json import assembly, modified, refined, shaft
 from hubload.report.json.operating import case_entries as operating_entries
 from hubload.report.messages import warning_texts
+from hubload.report.json.text import document_text
 from hubload.report.numbers import json_number, json_numbers, json_rows
 from hubload.units import KN
 
@@ -145,4 +145,4 @@ def result_document(result: Result, per_case: bool = True) -> dict:
 
 
 def to_json(result: Result) -> str:
-    return json.dumps(result_document(result), indent=2)
+    return document_text(result_document(result))

@@ -2,11 +2,11 @@
 
 from __future__ import annotations
 
-import json
 
 from hubload.engine import Result
 from hubload.report.cautions import CAUTIONS
 from hubload.report.json.check import result_document
+from hubload.report.json.text import document_text
 from hubload.report.numbers import json_number
 from hubload.report.quantities import ratios_to_first, shared_life_quantities
 from hubload.studies.compare import Comparison
@@ -40,4 +40,4 @@ def compare_document(comparison: Comparison) -> dict:
 
 
 def to_json(comparison: Comparison) -> str:
-    return json.dumps(compare_document(comparison), indent=2)
+    return document_text(compare_document(comparison))

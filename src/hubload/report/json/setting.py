@@ -2,12 +2,12 @@
 
 from __future__ import annotations
 
-import json
 
 import numpy as np
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.messages import setting_warnings
+from hubload.report.json.text import document_text
 from hubload.report.numbers import json_number
 from hubload.studies.setting import BEST_RANGE_SHARE, SettingSweep
 from hubload.units import MPA, UM
@@ -83,4 +83,4 @@ def sweep_document(sweep: SettingSweep) -> dict:
 
 
 def to_json(sweep: SettingSweep) -> str:
-    return json.dumps(sweep_document(sweep), indent=2)
+    return document_text(sweep_document(sweep))

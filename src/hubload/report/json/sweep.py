@@ -2,10 +2,10 @@
 
 from __future__ import annotations
 
-import json
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.json.check import result_document
+from hubload.report.json.text import document_text
 from hubload.report.numbers import json_number
 from hubload.studies.sweep import Sweep
 
@@ -49,4 +49,4 @@ def sweep_document(sweep: Sweep) -> dict:
 
 
 def to_json(sweep: Sweep) -> str:
-    return json.dumps(sweep_document(sweep), indent=2)
+    return document_text(sweep_document(sweep))
