@@ -199,6 +199,19 @@ def brief(file, out, force, required_s0, method):
 
 @main.command()
 @click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--to", "to", required=True, type=click.Path(dir_okay=False),
+              help="The table to write: an .xlsx workbook or a .csv file; a load-case file "
+                   "reads it back with [cases] table = \"...\".")
+@click.option("--force", is_flag=True, help="Overwrite an existing --to file.")
+@reports_input_errors
+def cases(file, to, force):
+    """Write the load cases of FILE as a spreadsheet table (one row per case)."""
+    from hubload import commands
+    commands.cases(file, to, force=force)
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
 @click.option("--from", "start_um", type=float, default=-60.0, show_default=True,
               help="First axial setting [um] (< 0 preload, > 0 end play).")
 @click.option("--to", "stop_um", type=float, default=120.0, show_default=True,

@@ -140,3 +140,23 @@ def text_of(cell) -> str:
     if isinstance(cell, float) and cell.is_integer():
         return str(int(cell))
     return str(cell)
+
+
+@dataclass(frozen=True)
+class WrittenCases:
+    """A file's cases as written (validated), with the files they were read from."""
+
+    title: str
+    blocks: tuple[dict, ...]
+    inputs: tuple[str, ...]       # the load-case file and its table, if any
+
+
+def written_cases(path: str | Path) -> WrittenCases:
+    """The validated cases of the file at ``path``, after the whole file has been checked."""
+    from hubload.casefile.load import load_study, read_toml
+
+    file = str(path)
+    study = load_study(path)     # the whole file checked: its blocks below are valid
+    document, origin = expand_case_table(read_toml(path), file)
+    inputs = (file,) if origin is None else (file, origin.file)
+    return WrittenCases(study.title, tuple(document["case"]), inputs)

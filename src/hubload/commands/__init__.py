@@ -148,6 +148,18 @@ def brief(file: str, out: str | None = None, force: bool = False,
     return found
 
 
+def cases(file: str, to: str, force: bool = False):
+    """Write the file's cases as a table that a [cases] table reads back."""
+    from hubload.report.spreadsheet.cases import cases_sheet
+    from hubload.report.spreadsheet.workbook import check_outputs, write_sheets
+
+    check_outputs(to, ["cases"], force, (file,))
+    found = api.cases(file)
+    write_sheets(to, [cases_sheet(found)], force, found.inputs)
+    written("Cases", to)
+    return found
+
+
 def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
             plot: str | None = None, force: bool = False) -> api.SettingResult:
     checked(plot, force, PLOT_SUFFIXES, (file,))
