@@ -160,3 +160,14 @@ def written_cases(path: str | Path) -> WrittenCases:
     document, origin = expand_case_table(read_toml(path), file)
     inputs = (file,) if origin is None else (file, origin.file)
     return WrittenCases(study.title, tuple(document["case"]), inputs)
+
+
+def input_files(path: str | Path) -> tuple[str, ...]:
+    """The load-case file at ``path`` and the table its ``[cases]`` names, if any: the files
+    that no output of a run on it may replace."""
+    from hubload.casefile.load import read_toml
+
+    file = str(path)
+    cases = read_toml(path).get("cases")
+    table = cases.get("table") if isinstance(cases, dict) else None
+    return (file,) if not isinstance(table, str) else (file, str(Path(file).parent / table))
