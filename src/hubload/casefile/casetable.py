@@ -13,11 +13,14 @@ from __future__ import annotations
 import re
 from dataclasses import dataclass
 from pathlib import Path
+from typing import TYPE_CHECKING
 
-from hubload.casefile.sheets import Grid, column_letter, read_grid
 from hubload.casefile.validate import nearest_key_hint, shortened, validate_table
 from hubload.errors import InputError
 from hubload.schema.fileformat import CASE, CASE_TABLE_SUFFIXES, CASES
+
+if TYPE_CHECKING:
+    from hubload.casefile.sheets import Grid
 
 CASE_PATH = re.compile(r"^case\[(?P<index>\d*)\](?:\.(?P<key>.+))?$")
 TEXT_KINDS = ("string",)
@@ -57,6 +60,8 @@ def expand_case_table(document: dict, source: str) -> tuple[dict, CaseTable | No
     if path.suffix.lower() not in CASE_TABLE_SUFFIXES:
         raise InputError(f"expected a table file ending in {' or '.join(CASE_TABLE_SUFFIXES)}, "
                          f"got {shortened(given['table'])!r}", key_path="cases.table")
+    from hubload.casefile.sheets import read_grid   # only a file with a table pays for it
+
     grid = read_grid(path, file, given.get("sheet"))
     blocks = case_blocks(grid, file)
     origin = CaseTable(file, tuple(number for number, _ in grid.rows))
@@ -72,6 +77,7 @@ def expand_case_table(document: dict, source: str) -> tuple[dict, CaseTable | No
 
 def header_keys(grid: Grid, file: str) -> list[str | None]:
     """The [[case]] key of each column (None: an empty column without a header)."""
+    from hubload.casefile.sheets import column_letter
     keys: list[str | None] = []
     for column, cell in enumerate(grid.header):
         place = f"row {grid.header_row}, column {column_letter(column)}"
@@ -94,6 +100,8 @@ def header_keys(grid: Grid, file: str) -> list[str | None]:
 
 
 def case_blocks(grid: Grid, file: str) -> list[dict]:
+    from hubload.casefile.sheets import column_letter
+
     keys = header_keys(grid, file)
     if not grid.rows:
         raise InputError("expected at least 1 row of cases below the header", file=file)

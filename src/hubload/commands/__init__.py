@@ -41,9 +41,11 @@ def written(kind: str, path: str, as_json: bool = False) -> None:
                                   markup=False)
 
 
-def inputs_of(*files: str) -> tuple[str, ...]:
+def inputs_of(files: tuple[str, ...], *outputs: str | None) -> tuple[str, ...]:
     """The load-case files and the tables they read their cases from (no output replaces
-    them)."""
+    them); read only when an output is asked for, so that a plain run reads each file once."""
+    if all(output is None for output in outputs):
+        return files
     from hubload.casefile.casetable import input_files
 
     return tuple(name for file in files for name in input_files(file))
@@ -70,7 +72,7 @@ def write_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...],
 def check(file: str, as_json: bool = False, report: str | None = None,
           plot: str | None = None, force: bool = False, method: str | None = None,
           show_all: bool = False, table: str | None = None) -> api.CheckResult:
-    inputs = inputs_of(file)
+    inputs = inputs_of((file,), report, plot, table)
     checked(report, force, (".html", ".htm"), inputs)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if table is not None:
@@ -124,7 +126,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
           table: str | None = None) -> api.SweepResult:
     from hubload.report.progress import LateProgress
 
-    inputs = inputs_of(file)
+    inputs = inputs_of((file,), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
@@ -157,7 +159,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None,
             table: str | None = None) -> api.ComparisonResult:
-    inputs = inputs_of(*files)
+    inputs = inputs_of(tuple(files), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if table is not None:
         from hubload.report.spreadsheet.studies import COMPARE_SHEETS
