@@ -249,3 +249,26 @@ def test_a_file_that_is_no_workbook_is_one_line(tmp_path, document, write_case_f
     result = CliRunner().invoke(main, ["check", path])
     assert result.exit_code == 2
     assert "cannot read the workbook" in result.output and result.output.count("\n") == 1
+
+
+@pytest.mark.parametrize("content", [b"\x89PNG\r\n\x1a\n\x00\x00", b"name,time_percent\nx\x00,100\n",
+                                     b'name,time_percent\n"unclosed,100\n'])
+def test_a_table_that_is_no_csv_is_one_line(tmp_path, document, write_case_file, content):
+    (tmp_path / "duty.csv").write_bytes(content)
+    document.pop("case")
+    path = write_case_file({**document, "cases": {"table": "duty.csv"}})
+    result = CliRunner().invoke(main, ["check", path])
+    assert result.exit_code == 2 and result.output.count("\n") == 1, result.output
+    assert result.output.startswith(f"error: {tmp_path / 'duty.csv'}: ")
+
+
+def test_a_logs_case_file_ignores_its_case_table(tmp_path, document, write_case_file):
+    # a log brings its own operating points: the table is not read (here: not even there)
+    from logsupport import spectrum_log, write_log
+
+    document.pop("case")
+    path = write_case_file({**document, "cases": {"table": "nowhere.csv"}})
+    log = write_log(tmp_path / "log.csv", spectrum_log(
+        [{"time_percent": 100, "wheel_load_kN": 15, "speed_rpm": 30}]))
+    result = CliRunner().invoke(main, ["spectrum", log, "--case-file", path, "--json"])
+    assert result.exit_code == 0, result.output

@@ -202,3 +202,15 @@ def test_spectrum_table_of_a_folder_starts_with_the_fleet(tmp_path):
     records = list(csv.reader(line for line in lines if not line.startswith("#")))
     assert [row[0] for row in records[1:]] == ["log1.csv", "log0.csv"]   # harshest first
     assert (tmp_path / "fleet-lives.csv").exists() and (tmp_path / "fleet-classed.csv").exists()
+
+
+def test_refined_check_table_has_both_methods_lives(tmp_path):
+    out = tmp_path / "refined.xlsx"
+    result = invoke("check", YARD_LOADER, "--method", "refined", "--table", str(out))
+    assert result.exit_code == 0, result.output
+    document = json.loads(invoke("check", YARD_LOADER, "--method", "refined", "--json").output)
+    _, header, rows = sheet_rows(out, "bearings")
+    pair = rows[column(header, rows, "bearing").index("pair (system)")]
+    assert pair[header.index("L10 [h]")] == pytest.approx(document["iso281"]["system"]["l10_h"])
+    _, header, rows = sheet_rows(out, "cases")
+    assert "Qmax out [kN]" in header and len(rows) == 7
