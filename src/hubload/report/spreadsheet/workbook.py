@@ -29,6 +29,7 @@ INFINITE = "inf"
 NOTE = "# "
 MAX_SHEET_NAME = 31      # Excel's limit on a sheet's name
 EXACT = 2.0 ** 53        # every whole number below it is exact as a float
+MIN_WIDTH, MAX_WIDTH = 10, 60   # characters: a number of 8 digits; a long case name
 
 
 @dataclass(frozen=True)
@@ -117,6 +118,7 @@ def write_sheets(path: str, sheets: Sequence[Sheet], force: bool,
 def save_workbook(target: Path, sheets: Sequence[Sheet]) -> None:
     from openpyxl import Workbook    # only a run that writes a workbook pays for it
     from openpyxl.styles import Font
+    from openpyxl.utils import get_column_letter
 
     workbook = Workbook()
     workbook.remove(workbook.active)
@@ -125,8 +127,13 @@ def save_workbook(target: Path, sheets: Sequence[Sheet]) -> None:
         for note in sheet.note_rows():
             worksheet.append([note])
         worksheet.append(list(sheet.header))
-        for column in range(1, len(sheet.header) + 1):
-            worksheet.cell(row=worksheet.max_row, column=column).font = Font(bold=True)
+        header_row = worksheet.max_row
+        for column, heading in enumerate(sheet.header, start=1):
+            worksheet.cell(row=header_row, column=column).font = Font(bold=True)
+            texts = [row[column - 1] for row in sheet.rows if isinstance(row[column - 1], str)]
+            worksheet.column_dimensions[get_column_letter(column)].width = \
+                min(MAX_WIDTH, max([MIN_WIDTH, len(heading) + 2, *(len(t) + 1 for t in texts)]))
+        worksheet.freeze_panes = f"A{header_row + 1}"   # the header stays in view
         for row in sheet.rows:
             worksheet.append([cell(value) for value in row])
     with target.open("wb") as stream:   # openpyxl would pick the format from the suffix
