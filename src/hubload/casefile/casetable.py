@@ -131,7 +131,9 @@ def cell_value(cell, kind: str, decimal_comma: bool):
     (a spreadsheet stores a name typed as 3 as a number). Anything else is left for the
     validator to refuse, in its words."""
     if kind in TEXT_KINDS:
-        return text_of(cell).strip() if isinstance(cell, (int, float)) and \
+        if isinstance(cell, str):
+            return cell.strip()       # as a CSV cell: spaces around a name are no part of it
+        return text_of(cell) if isinstance(cell, (int, float)) and \
             not isinstance(cell, bool) else cell
     if isinstance(cell, str):
         text = cell.strip()
