@@ -169,6 +169,14 @@ def brief(path: str | Path, required_s0: float | None = None,
     return BriefResult(requirements_of(load(path, method), required_s0), read_document(path))
 
 
+def cases(path: str | Path):
+    """The file's cases as written (validated), with its input files: what ``hubload cases``
+    writes as a table (a :class:`hubload.casefile.casetable.WrittenCases`)."""
+    from hubload.casefile.casetable import written_cases
+
+    return written_cases(path)
+
+
 @dataclass(frozen=True)
 class LogsResult(Wrapped):
     value: object      # hubload.logs.analysis.LogRun

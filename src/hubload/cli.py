@@ -110,6 +110,14 @@ def method_option():
              "[project] method, else iso281.")
 
 
+def table_option():
+    """--table of every command whose results go into a spreadsheet."""
+    return click.option(
+        "--table", type=click.Path(dir_okay=False),
+        help="Also write the results as a spreadsheet: an .xlsx workbook with one sheet per "
+             "table, or for .csv one CSV file per sheet (out.csv: out-cases.csv, ...).")
+
+
 @click.group(cls=OneLineGroup)
 @click.version_option(package_name="hubload")
 def main():
@@ -123,16 +131,17 @@ def main():
               help="Also write a self-contained HTML report (inputs, results, charts, cautions).")
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Also write the damage-share chart (.png or .svg).")
-@click.option("--force", is_flag=True, help="Overwrite existing --report/--plot files.")
+@table_option()
+@click.option("--force", is_flag=True, help="Overwrite existing --report/--plot/--table files.")
 @method_option()
 @click.option("--all", "show_all", is_flag=True,
               help="List every case and every warning (default: the 25 most damaging cases).")
 @reports_input_errors
-def check(file, as_json, report, plot, force, method, show_all):
+def check(file, as_json, report, plot, table, force, method, show_all):
     """Loads, lives, damage shares and static safety for FILE."""
     from hubload import commands
     commands.check(file, as_json=as_json, report=report, plot=plot, force=force, method=method,
-                   show_all=show_all)
+                   show_all=show_all, table=table)
 
 
 @main.command()
@@ -158,12 +167,14 @@ def template():
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart (.png or .svg): lines for one key, a life map for two.")
 @method_option()
-@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@table_option()
+@click.option("--force", is_flag=True, help="Overwrite an existing plot or table file.")
 @reports_input_errors
-def sweep(file, specs, as_json, plot, force, method):
+def sweep(file, specs, as_json, plot, force, method, table):
     """Lives and safeties of FILE over a range (or grid) of values of its numeric keys."""
     from hubload import commands
-    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force, method=method)
+    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force, method=method,
+                   table=table)
 
 
 @main.command()
@@ -172,12 +183,14 @@ def sweep(file, specs, as_json, plot, force, method):
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write a chart of lives and damage shares (.png or .svg).")
 @method_option()
-@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@table_option()
+@click.option("--force", is_flag=True, help="Overwrite an existing plot or table file.")
 @reports_input_errors
-def compare(files, as_json, plot, force, method):
+def compare(files, as_json, plot, force, method, table):
     """Several load-case FILES side by side: lives, ratios to the first, dominant cases."""
     from hubload import commands
-    commands.compare(files, as_json=as_json, plot=plot, force=force, method=method)
+    commands.compare(files, as_json=as_json, plot=plot, force=force, method=method,
+                     table=table)
 
 
 @main.command()
@@ -195,6 +208,19 @@ def brief(file, out, force, required_s0, method):
     """A supplier brief for FILE: cases, demands, required ratings, shaft, open questions."""
     from hubload import commands
     commands.brief(file, out=out, force=force, required_s0=required_s0, method=method)
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@click.option("--to", "to", required=True, type=click.Path(dir_okay=False),
+              help="The table to write: an .xlsx workbook or a .csv file; a load-case file "
+                   "reads it back with [cases] table = \"...\".")
+@click.option("--force", is_flag=True, help="Overwrite an existing --to file.")
+@reports_input_errors
+def cases(file, to, force):
+    """Write the load cases of FILE as a spreadsheet table (one row per case)."""
+    from hubload import commands
+    commands.cases(file, to, force=force)
 
 
 @main.command()
@@ -222,6 +248,7 @@ def setting(file, start_um, stop_um, step_um, as_json, plot, force):
               help="Load-case file describing the wheel and pair (its [[case]] blocks are ignored).")
 @click.option("--out", type=click.Path(), help="Write the classed spectrum as a load-case file "
               "(for a folder of logs: a folder with one file per log and combined.toml).")
+@table_option()
 @click.option("--force", is_flag=True, help="Overwrite existing output files.")
 @json_option
 @click.option("--column", "columns", multiple=True, metavar="KEY=HEADER",

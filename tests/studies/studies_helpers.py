@@ -18,7 +18,13 @@ YARD_LOADER = LOAD_CASES / "yard_loader.toml"
 
 
 def read_toml(path: Path) -> dict:
-    return tomllib.loads(path.read_text(encoding="utf-8"))
+    """The parsed file; a [cases] table named by its absolute path, so that a variant
+    written elsewhere reads the same table."""
+    document = tomllib.loads(path.read_text(encoding="utf-8"))
+    if "cases" in document:
+        document["cases"] = {**document["cases"],
+                             "table": str(path.parent / document["cases"]["table"])}
+    return document
 
 
 def set_key(document: dict, segments, value) -> None:

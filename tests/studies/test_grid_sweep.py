@@ -8,6 +8,7 @@ import json
 
 import pytest
 
+from hubload.casefile.load import read_document
 from hubload.report.json.sweep import sweep_document
 from hubload.studies import sweep as sweep_module
 from studies_helpers import LOAD_CASES, YARD_LOADER
@@ -34,7 +35,7 @@ def test_batched_grid_equals_the_point_by_point_grid(monkeypatch, file, first, s
 def test_keys_of_one_table_are_built_point_by_point():
     # Cross-key rules of one table hold only point by point (the bearings' order, the time
     # shares): such a grid is not assembled from the axes.
-    document = sweep_module.read_document(YARD_LOADER)
+    document = read_document(YARD_LOADER)
     axes = tuple(sweep_module.parse_vary(spec, document, str(YARD_LOADER)) for spec in
                  ("pair.outboard.position_mm=20:40:3", "pair.inboard.position_mm=-60:-40:3"))
     base = sweep_module.study_from_document(document, str(YARD_LOADER))

@@ -8,6 +8,7 @@ from pathlib import Path
 
 import numpy as np
 
+from hubload.casefile.casetable import expand_case_table
 from hubload.casefile.finite import check_finite
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
@@ -29,7 +30,7 @@ BYTE_ORDER_MARK = "\ufeff"
 def load_study(path: str | Path) -> Study:
     """Parse, validate and convert the file at ``path``; raise InputError naming it."""
     file = str(path)
-    document = read_document(path)
+    document = read_toml(path)
     try:
         return study_from_document(document, source=file)
     except InputError as error:
@@ -37,7 +38,16 @@ def load_study(path: str | Path) -> Study:
 
 
 def read_document(path: str | Path) -> dict:
-    """The parsed TOML of the file at ``path`` (not yet validated); InputError naming it."""
+    """The parsed TOML of the file at ``path`` with the rows of a ``[cases] table`` as its
+    ``case`` blocks (not yet validated as a whole); InputError naming the file."""
+    try:
+        return expand_case_table(read_toml(path), str(path))[0]
+    except InputError as error:
+        raise error.located(str(path)) from None
+
+
+def read_toml(path: str | Path) -> dict:
+    """The parsed TOML of the file at ``path`` as written; InputError naming it."""
     file = str(path)
     try:
         text = Path(path).read_text(encoding="utf-8")
@@ -63,8 +73,13 @@ def read_document(path: str | Path) -> dict:
 
 
 def study_from_document(document: dict, source: str = "<document>") -> Study:
-    """Validate a parsed TOML document and convert it to a Study."""
-    return study_from_validated(validate_document(document, FORMAT), source)
+    """Validate a parsed TOML document and convert it to a Study (a ``[cases] table`` is
+    read relative to ``source``; errors in its cases name its rows and columns)."""
+    document, table = expand_case_table(document, source)
+    try:
+        return study_from_validated(validate_document(document, FORMAT), source)
+    except InputError as error:
+        raise (error if table is None else table.relocated(error)) from None
 
 
 def study_from_validated(data: dict, source: str = "<document>", finite: bool = True) -> Study:

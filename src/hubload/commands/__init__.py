@@ -41,25 +41,62 @@ def written(kind: str, path: str, as_json: bool = False) -> None:
                                   markup=False)
 
 
+def inputs_of(files: tuple[str, ...], *outputs: str | None) -> tuple[str, ...]:
+    """The load-case files and the tables they read their cases from (no output replaces
+    them); read only when an output is asked for, so that a plain run reads each file once."""
+    if all(output is None for output in outputs):
+        return files
+    from hubload.casefile.casetable import input_files
+
+    return tuple(name for file in files for name in input_files(file))
+
+
+def checked_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...]) -> None:
+    if path is not None:
+        from hubload.report.spreadsheet.workbook import check_outputs
+
+        check_outputs(path, sheets, force, inputs)
+
+
+def write_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...],
+                as_json: bool) -> None:
+    """Write the --table sheets and name the files written."""
+    if path is None:
+        return
+    from hubload.report.spreadsheet.workbook import write_sheets
+
+    for written_file in write_sheets(path, sheets, force, inputs):
+        written("Table", written_file, as_json)
+
+
 def check(file: str, as_json: bool = False, report: str | None = None,
           plot: str | None = None, force: bool = False, method: str | None = None,
-          show_all: bool = False) -> api.CheckResult:
-    checked(report, force, (".html", ".htm"), (file,))
-    checked(plot, force, PLOT_SUFFIXES, (file,))
+          show_all: bool = False, table: str | None = None) -> api.CheckResult:
+    inputs = inputs_of((file,), report, plot, table)
+    checked(report, force, (".html", ".htm"), inputs)
+    checked(plot, force, PLOT_SUFFIXES, inputs)
+    if table is not None:
+        from hubload.report.spreadsheet.check import SHEETS
+
+        checked_table(table, SHEETS, force, inputs)
     found = api.check(file, method=method)
+    if table is not None:
+        from hubload.report.spreadsheet.check import check_sheets
+
+        write_table(table, check_sheets(found.value), force, inputs, as_json)
     if report is not None:
         from hubload.casefile.load import read_document
         from hubload.report.files import write_text
         from hubload.report.html.check import report_html
 
         write_text(report, report_html(found.value, read_document(file)), force,
-                   inputs=(file,))
+                   inputs=inputs)
         written("Report", report, as_json)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import damage_share_figure
 
-        save(damage_share_figure(found.value), plot, force, (file,))
+        save(damage_share_figure(found.value), plot, force, inputs)
         written("Plot", plot, as_json)
     if as_json:
         click.echo(document_text(found.to_dict()))
@@ -85,20 +122,30 @@ def template() -> None:
 
 
 def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-          force: bool = False, method: str | None = None) -> api.SweepResult:
+          force: bool = False, method: str | None = None,
+          table: str | None = None) -> api.SweepResult:
     from hubload.report.progress import LateProgress
 
-    checked(plot, force, PLOT_SUFFIXES, (file,))
+    inputs = inputs_of((file,), plot, table)
+    checked(plot, force, PLOT_SUFFIXES, inputs)
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import SWEEP_SHEETS
+
+        checked_table(table, SWEEP_SHEETS, force, inputs)
     with LateProgress("sweep") as progress:
         found = api.sweep(file, specs, method=method, on_progress=progress)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import sweep_sheets
+
+        write_table(table, sweep_sheets(found.value), force, inputs, as_json)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
 
         draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
-        save(draw(found.value), plot, force, (file,))
+        save(draw(found.value), plot, force, inputs)
         written("Plot", plot, as_json)
     if as_json:
         click.echo(document_text(found.to_dict()))
@@ -110,14 +157,24 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 
 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
-            force: bool = False, method: str | None = None) -> api.ComparisonResult:
-    checked(plot, force, PLOT_SUFFIXES, files)
+            force: bool = False, method: str | None = None,
+            table: str | None = None) -> api.ComparisonResult:
+    inputs = inputs_of(tuple(files), plot, table)
+    checked(plot, force, PLOT_SUFFIXES, inputs)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import COMPARE_SHEETS
+
+        checked_table(table, COMPARE_SHEETS, force, inputs)
     found = api.compare(list(files), method=method)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import compare_sheets
+
+        write_table(table, compare_sheets(found.value), force, inputs, as_json)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import compare_figure
 
-        save(compare_figure(found.value), plot, force, files)
+        save(compare_figure(found.value), plot, force, inputs)
         written("Plot", plot, as_json)
     if as_json:
         click.echo(document_text(found.to_dict()))
@@ -145,6 +202,18 @@ def brief(file: str, out: str | None = None, force: bool = False,
 
         write_text(out, text, force, inputs=(file,))
         written("Brief", out)
+    return found
+
+
+def cases(file: str, to: str, force: bool = False):
+    """Write the file's cases as a table that a [cases] table reads back."""
+    from hubload.report.spreadsheet.cases import cases_sheet
+    from hubload.report.spreadsheet.workbook import check_outputs, write_sheets
+
+    check_outputs(to, ["cases"], force, (file,))
+    found = api.cases(file)
+    write_sheets(to, [cases_sheet(found)], force, found.inputs)
+    written("Cases", to)
     return found
 
 

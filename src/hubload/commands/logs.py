@@ -37,6 +37,7 @@ class Request:
     skip_bad: bool = False
     weights: str | None = None
     method: str | None = None
+    table: str | None = None
 
 
 def spectrum(request: Request) -> api.LogsResult:
@@ -46,6 +47,12 @@ def spectrum(request: Request) -> api.LogsResult:
     targets = fleet_targets(request, paths, inputs) if folder else {}
     if request.out and not folder:  # before the log is read: a refusal should not wait
         checked_output(request.out, request.force, inputs=inputs)
+    if request.table:
+        from hubload.commands import checked_table
+        from hubload.report.spreadsheet.spectrum import FOLDER_SHEETS, LOG_SHEETS
+
+        checked_table(request.table, FOLDER_SHEETS if folder else LOG_SHEETS, request.force,
+                      inputs)
     with LogProgress(len(paths)) as advance:
         found = api.spectrum(request.log, request.case_file, request.columns, request.classes,
                              request.gaps, request.max_gap_s, request.jobs, request.cluster,
@@ -55,6 +62,12 @@ def spectrum(request: Request) -> api.LogsResult:
     files = write_fleet_files(targets, run, request.force, inputs) if folder \
         else write_single(request, run, inputs)
     found = dataclasses.replace(found, files=files)
+    if request.table:
+        from hubload.commands import write_table
+        from hubload.report.spreadsheet.spectrum import spectrum_sheets
+
+        write_table(request.table, spectrum_sheets(run), request.force, inputs,
+                    request.as_json)
     if request.as_json:
         click.echo(document_text(found.to_dict()))
     else:

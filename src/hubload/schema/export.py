@@ -99,7 +99,7 @@ def template_lines(table: Table, path: str) -> list[str]:
 def alternative_tables(table: Table) -> set[str]:
     """Sub-tables that a choice of ``table`` offers instead of its keys: the template writes
     them commented out, so that it stays a valid file."""
-    return {group[0] for choice in table.choices for group in choice.groups
+    return {group[0] for choice in table.choices for group in choice.groups[1:]
             if len(group) == 1 and table.table_named(group[0]) is not None}
 
 
@@ -107,7 +107,10 @@ def template_text(table: Table) -> str:
     """A commented starting file with every key of the format."""
     body = []
     for sub in table.tables:
-        body += template_lines(sub, sub.name)
+        sub_lines = template_lines(sub, sub.name)
+        if sub.name in alternative_tables(table):
+            sub_lines = [f"# {line}" if line else line for line in sub_lines]
+        body += sub_lines
     return "# hubload load-case file. Units are part of every key name.\n\n" + "\n".join(body)
 
 

@@ -299,7 +299,9 @@ PAIR = Table(
 CASE = Table(
     name="case",
     array=True,
-    doc="One load case of the duty spectrum (repeat the block for each case).",
+    required=False,   # or a [cases] table: the root's choice "cases" asks for one of them
+    doc="One load case of the duty spectrum (repeat the block for each case), or a [cases] "
+        "table naming a spreadsheet with one row per case.",
     fields=(
         Field("name", "string", "Name of the case.", required=True, example="straight travel"),
         Field("time_percent", "number", "Share of operating time [%]; all cases add to 100 "
@@ -345,6 +347,22 @@ CASE = Table(
                     required=False,
                     doc="A hydraulic case derives its tractive force from pressure_bar; "
                         "do not give tractive_force_kN too.")),
+)
+
+CASE_TABLE_SUFFIXES = (".csv", ".xlsx")
+
+CASES = Table(
+    name="cases",
+    required=False,
+    doc="The load cases from a spreadsheet instead of [[case]] blocks: one row per case, one "
+        "column per [[case]] key, headed by the key exactly as written in a block "
+        "(wheel_load_kN, speed_kmh, ...); an empty cell is a key not given. Every cell is "
+        "checked by the rules of a [[case]] block. See docs/spreadsheets.md.",
+    fields=(
+        Field("table", "string", "The table file [.csv or .xlsx], relative to this file "
+              "(e.g. \"duty.xlsx\").", required=True, example="duty.csv"),
+        Field("sheet", "string", "The sheet of an .xlsx workbook (default: its first sheet)."),
+    ),
 )
 
 LUBRICATION = Table(
@@ -448,5 +466,9 @@ SHAFT = Table(
 FORMAT = Table(
     name="",
     doc="A hubload load-case file.",
-    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, LUBRICATION, CASE, SHAFT),
+    tables=(PROJECT, WHEEL, MOTOR, VEHICLE, PAIR, LUBRICATION, CASE, CASES, SHAFT),
+    # named so that the message of a file without cases reads "missing required table [[case]]"
+    choices=(Choice("required table [[case]]", groups=(("case",), ("cases",)),
+                    doc="Give the load cases as [[case]] blocks or as a [cases] table "
+                        "(a spreadsheet), not both."),),
 )

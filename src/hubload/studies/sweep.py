@@ -17,7 +17,8 @@ from functools import cached_property
 
 import numpy as np
 
-from hubload.casefile.load import read_document, study_from_document
+from hubload.casefile.casetable import expand_case_table
+from hubload.casefile.load import read_toml, study_from_document
 from hubload.casefile.validate import validate_number
 from hubload.casefile.variation import KeyPath, current_value, parse_key_path, \
     stacked_variants, variant_studies
@@ -219,11 +220,12 @@ def run_sweep(file: str, specs: Sequence[str],
 
     ``method`` overrides the file's ``[project] method`` (as ``check --method`` does).
     """
-    document = read_document(file)
+    written = read_toml(file)
     if method is not None:
-        document = {**document, "project": {**document.get("project", {}), "method": method}}
+        written = {**written, "project": {**written.get("project", {}), "method": method}}
     try:
-        base = study_from_document(document, source=file)
+        base = study_from_document(written, source=file)   # errors in a table name its rows
+        document = expand_case_table(written, file)[0]
     except InputError as error:
         raise error.located(file) from None
     if not specs:

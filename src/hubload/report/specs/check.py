@@ -41,10 +41,12 @@ def spectrum_table(result: Result, limit: int | None) -> TableSpec:
                Column("speed_rpm", "n", list(cases.speed_rpm), "r/min", fixed(1),
                       legend="wheel speed")]
     if result.modified is not None:
-        columns += [Column("temperature_C", "T", list(result.study.lubrication.temperature_k
-                                                      - CELSIUS_ZERO_K), "C", fixed(0),
+        def per_case(values):   # a classed log's study may hold one value for every case
+            return list(np.broadcast_to(values, (len(cases),)))
+        columns += [Column("temperature_C", "T", per_case(result.study.lubrication.temperature_k
+                                                          - CELSIUS_ZERO_K), "C", fixed(0),
                            legend="bearing temperature"),
-                    Column("viscosity_cSt", "nu", list(result.modified.viscosity_m2_s / CST),
+                    Column("viscosity_cSt", "nu", per_case(result.modified.viscosity_m2_s / CST),
                            "cSt", fixed(1), legend="oil viscosity")]
     columns.append(Column("governing_damage_share", "damage", list(governing.system_damage_share),
                           "%", percent,

@@ -24,8 +24,8 @@ def sections_table(result: Result) -> TableSpec:
     required = float(shaft.required_safety)
     sections = shaft.sections
 
-    def case_index(value, index) -> str:
-        return str(int(index)) if np.isfinite(value) else "-"
+    def case_index(value, index) -> int | None:
+        return int(index) if np.isfinite(value) else None
 
     columns = (
         Column("name", "section", [s.name for s in sections], name=True),
@@ -41,7 +41,8 @@ def sections_table(result: Result) -> TableSpec:
                legend=f"lowest {CRITERION_NAMES[shaft.criterion]} fatigue safety",
                alert=below(required)),
         Column("min_safety_case", "#", [case_index(s.min_safety, s.min_safety_case)
-                                        for s in sections], legend="its case"),
+                                        for s in sections],
+               text=lambda index: "-" if index is None else str(index), legend="its case"),
         Column("yield_safety", "n yield", [float(s.yield_safety) for s in sections], "",
                safety, legend="first-cycle yield safety", alert=below(required)),
         Column("fatigue_life_h", "life", [float(s.fatigue_life_h) for s in sections], "h",
@@ -120,3 +121,30 @@ def margin_text(item: CheckItem) -> str:
     """The load margin; an item not assessed has none."""
     margin = float(item.margin)
     return "-" if math.isnan(margin) else safety(margin)
+
+
+def item_number(item: CheckItem) -> tuple[float, float, str]:
+    """Value, limit and unit of an item as numbers: a utilisation in %."""
+    scale, unit = (100.0, "%") if item.at_most else (1.0, item.unit)
+    return scale * float(item.value), scale * float(item.limit), unit
+
+
+def check_items_table(result: Result) -> TableSpec | None:
+    """The items of :func:`checks_table` with numbers as numbers (for spreadsheets)."""
+    found = result.overall
+    if found is None:
+        return None
+    items = found.items
+    numbers = [item_number(item) for item in items]
+    return TableSpec("check_items", "Checks: every item with a limit", (
+        Column("item", "item", [item.name for item in items], name=True),
+        Column("kind", "kind", [item.kind for item in items], name=True),
+        Column("value", "value", [value for value, _, _ in numbers], text=safety),
+        Column("relation", "must be", ["<=" if item.at_most else ">=" for item in items]),
+        Column("limit", "limit", [limit for _, limit, _ in numbers], text=safety),
+        Column("unit", "unit", [unit for _, _, unit in numbers]),
+        Column("load_margin", "margin", [float(item.margin) for item in items], text=safety,
+               legend="factor on the loads until the limit is reached"),
+        Column("result", "result", ["pass" if item.passed else "FAIL" for item in items])),
+        notes=(f"Overall: {'PASS' if found.passed else 'FAIL'}; worst item: {found.worst.name}.",
+               "A value or margin left empty: not assessed."))

@@ -1,0 +1,1 @@
+"""Spreadsheets written from typed results (and the case table of ``hubload cases``)."""
