@@ -199,3 +199,53 @@ def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = ()
     return LogsResult(analyse(log, case_file, options, jobs=jobs, cluster=cluster,
                                   skip_bad=skip_bad, on_log_done=on_log_done,
                                   weights=weights, method=method), {})
+
+
+@dataclass(frozen=True)
+class ForecastResult(Wrapped):
+    value: object      # hubload.studies.forecast.Forecast
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload forecast --json``."""
+        from hubload.report.json.forecast import forecast_document
+
+        return forecast_document(self.value)
+
+
+FLEET_OPTIONS = ("machines", "wheel_ends_per_machine", "hours_per_year_median",
+                 "hours_per_year_spread", "years", "warranty_years", "warranty_hours",
+                 "calibration_factor")
+
+
+def forecast(path: str | Path, method: str | None = None, distribution: str | None = None,
+             weibull_slope: float | None = None, **fleet_options) -> ForecastResult:
+    """Life distributions (B1, B10, B50) of the wheel end of ``path`` and, with a fleet, its
+    expected failures per year and in the warranty. ``distribution``, ``weibull_slope`` and
+    the keys of [fleet] (``machines=400``, ``warranty_years=2``, ...) override the file's."""
+    from hubload.engine import evaluate
+    from hubload.studies.forecast import run_forecast
+
+    unknown = sorted(set(fleet_options) - set(FLEET_OPTIONS))
+    if unknown:
+        raise TypeError(f"forecast() got unknown fleet options {', '.join(unknown)}; "
+                        f"expected some of {', '.join(FLEET_OPTIONS)}")
+    model, fleet = forecast_inputs(path, {"distribution": distribution,
+                                          "weibull_slope": weibull_slope}, fleet_options)
+    return ForecastResult(run_forecast(evaluate(load(path, method)), model, fleet))
+
+
+def forecast_inputs(path: str | Path, model_options: dict, fleet_options: dict):
+    """The life model and the fleet of a file's [reliability] and [fleet], with overrides."""
+    from hubload.casefile.fleet import read_fleet, read_life_model
+    from hubload.casefile.load import read_document
+    from hubload.casefile.validate import validate_document
+    from hubload.schema import FORMAT
+
+    try:
+        data = validate_document(read_document(path), FORMAT)
+        return (read_life_model(data.get("reliability"), model_options),
+                read_fleet(data.get("fleet"), fleet_options))
+    except InputError as error:
+        if (error.key_path or "").startswith("--"):   # an option's error names the option
+            raise
+        raise error.located(str(path)) from None

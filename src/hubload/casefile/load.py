@@ -9,6 +9,7 @@ from pathlib import Path
 import numpy as np
 
 from hubload.casefile.finite import check_finite
+from hubload.casefile.fleet import read_life_model
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import derive_cases, read_motor, read_vehicle
@@ -72,6 +73,7 @@ def study_from_validated(data: dict, source: str = "<document>") -> Study:
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})
+    read_life_model(data.get("reliability"))   # its cross-key rule holds for every command
     motor, vehicle = read_motor(data.get("motor")), read_vehicle(data.get("vehicle"))
     lubrication = read_lubrication(data.get("lubrication"), data["case"], pair)
     pair = read_setting(data["pair"], pair, data["case"],

@@ -167,6 +167,27 @@ def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json:
     return found
 
 
+def forecast(file: str, as_json: bool = False, plot: str | None = None, force: bool = False,
+             method: str | None = None, distribution: str | None = None,
+             weibull_slope: float | None = None, **fleet_options) -> api.ForecastResult:
+    checked(plot, force, PLOT_SUFFIXES, (file,))
+    found = api.forecast(file, method=method, distribution=distribution,
+                         weibull_slope=weibull_slope, **fleet_options)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.forecast import forecast_figure
+
+        save(forecast_figure(found.value), plot, force, (file,))
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.forecast import render_forecast
+
+        render_forecast(found.value, console())
+    return found
+
+
 def spectrum(**options):
     from hubload.commands.logs import Request, spectrum as run_spectrum
 
