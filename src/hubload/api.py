@@ -249,3 +249,46 @@ def forecast_inputs(path: str | Path, model_options: dict, fleet_options: dict):
         if (error.key_path or "").startswith("--"):   # an option's error names the option
             raise
         raise error.located(str(path)) from None
+
+
+@dataclass(frozen=True)
+class FieldResult(Wrapped):
+    value: object      # hubload.studies.field.FieldStudy
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload field --json``."""
+        from hubload.report.json.field import field_document
+
+        return field_document(self.value)
+
+
+def field(data: str | Path, against: str | Path | None = None,
+          weibayes_slope: float | None = None, method: str | None = None) -> FieldResult:
+    """Weibull fits of the field data file ``data`` (CSV or XLSX); with ``against`` (a
+    load-case file) its predicted wheel end and the ratio of the field B10 to it. With fewer
+    than two failures only a Weibayes estimate exists: give ``weibayes_slope``."""
+    import math
+
+    from hubload.casefile.field_data import read_field_data
+    from hubload.studies.field import FieldStudy, fit_field, prediction_of
+
+    if weibayes_slope is not None and not (0.3 <= weibayes_slope <= 10.0
+                                           and math.isfinite(weibayes_slope)):
+        raise InputError(f"expected a Weibull slope from 0.3 to 10, got {weibayes_slope:g}",
+                         key_path="--weibayes-slope")
+    found = read_field_data(data)
+    model, checked = (None, None) if against is None else (
+        forecast_inputs(against, {}, {})[0], check(against, method).value)
+    try:
+        fit, regression, band = fit_field(found, weibayes_slope,
+                                          1.5 if model is None else model.slope)
+    except InputError as error:
+        raise error.located(str(data)) from None
+    prediction = None
+    if checked is not None:
+        from hubload.studies.forecast import life_basis, predicted_wheel_end
+
+        prediction = prediction_of(fit, predicted_wheel_end(checked, model), str(against),
+                                   checked.study.title, model, life_basis(checked))
+    return FieldResult(FieldStudy(data=found, fit=fit, rank_regression=regression, band=band,
+                                  prediction=prediction))

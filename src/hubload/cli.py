@@ -287,3 +287,23 @@ def forecast(file, as_json, plot, force, method, **options):
     """Failure probability of FILE's wheel end over time and failures of its [fleet]."""
     from hubload import commands
     commands.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
+
+
+@main.command()
+@click.argument("data", type=click.Path(dir_okay=False))
+@click.option("--against", type=click.Path(dir_okay=False),
+              help="Load-case FILE whose predicted wheel end is compared with the data.")
+@json_option
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write the Weibull probability plot (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@click.option("--weibayes-slope", type=float, default=None,
+              help="With fewer than two failures: the Weibull slope assumed for a Weibayes "
+                   "estimate (e.g. 1.5).")
+@method_option()
+@reports_input_errors
+def field(data, against, as_json, plot, force, weibayes_slope, method):
+    """Weibull fits of field DATA (CSV or XLSX: hours, status failed/suspended per unit)."""
+    from hubload import commands
+    commands.field(data, against=against, as_json=as_json, plot=plot, force=force,
+                   weibayes_slope=weibayes_slope, method=method)

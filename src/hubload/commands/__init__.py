@@ -188,6 +188,27 @@ def forecast(file: str, as_json: bool = False, plot: str | None = None, force: b
     return found
 
 
+def field(data: str, against: str | None = None, as_json: bool = False,
+          plot: str | None = None, force: bool = False, weibayes_slope: float | None = None,
+          method: str | None = None) -> api.FieldResult:
+    inputs = (data,) + ((against,) if against else ())
+    checked(plot, force, PLOT_SUFFIXES, inputs)
+    found = api.field(data, against=against, weibayes_slope=weibayes_slope, method=method)
+    if plot is not None:
+        from hubload.report.plots import save
+        from hubload.report.plots.field import field_figure
+
+        save(field_figure(found.value), plot, force, inputs)
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(json.dumps(found.to_dict(), indent=2))
+    else:
+        from hubload.report.terminal.field import render_field
+
+        render_field(found.value, console())
+    return found
+
+
 def spectrum(**options):
     from hubload.commands.logs import Request, spectrum as run_spectrum
 

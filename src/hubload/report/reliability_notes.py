@@ -42,3 +42,30 @@ def forecast_notes(forecast: Forecast) -> list[str]:
                   "(renewals); in the warranty: first failures, with the 90 % band of their "
                   "count (Poisson-binomial, 5 % and 95 % quantiles)."]
     return notes
+
+
+def field_notes(study) -> list[str]:
+    """What a field fit stands on (``study``: studies.field.FieldStudy)."""
+    fit = study.fit
+    level = f"{100 * fit.confidence:g} %"
+    if not study.is_fit:
+        notes = [f"Fewer than two failures: no Weibull fit. Weibayes with the assumed slope "
+                 f"{fit.beta:g}; B10 >= {fit.b10_low_h:,.0f} h is a one-sided {level} lower "
+                 f"bound (chi-square on 2 r + 2 degrees of freedom)."]
+    else:
+        notes = [f"Maximum likelihood with right censoring (suspensions count as units still "
+                 f"running); {level} two-sided bounds by the likelihood ratio (profile "
+                 f"likelihood). Rank regression: Johnson's adjusted ranks, Benard's median "
+                 f"ranks, least squares of Y on X; no bounds."]
+        if fit.failures < 10:
+            notes.append(f"{fit.failures} failures: the maximum-likelihood slope is biased "
+                         "high with few failures; read the bounds, not only the estimates.")
+    notes.append("Each row is taken as one wheel end: hours to its first bearing failure, or "
+                 "run so far (suspended).")
+    found = study.prediction
+    if found is not None:
+        notes.append(f"Predicted: the wheel end of {found.source} ({found.basis.symbol} of "
+                     f"each bearing, {distribution_text(found.model.kind, found.model.slope)}; "
+                     f"uncalibrated). The ratio field B10 / predicted B10 may be carried into "
+                     f"`hubload forecast` as [fleet] calibration_factor.")
+    return notes
