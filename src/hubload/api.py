@@ -267,14 +267,13 @@ def field(data: str | Path, against: str | Path | None = None,
     """Weibull fits of the field data file ``data`` (CSV or XLSX); with ``against`` (a
     load-case file) its predicted wheel end and the ratio of the field B10 to it. With fewer
     than two failures only a Weibayes estimate exists: give ``weibayes_slope``."""
-    import math
-
     from hubload.casefile.field_data import read_field_data
+    from hubload.schema.fileformat import MAX_WEIBULL_SLOPE, MIN_WEIBULL_SLOPE
     from hubload.studies.field import FieldStudy, fit_field, prediction_of
 
-    if weibayes_slope is not None and not (0.3 <= weibayes_slope <= 10.0
-                                           and math.isfinite(weibayes_slope)):
-        raise InputError(f"expected a Weibull slope from 0.3 to 10, got {weibayes_slope:g}",
+    if weibayes_slope is not None and not MIN_WEIBULL_SLOPE <= weibayes_slope <= MAX_WEIBULL_SLOPE:
+        raise InputError(f"expected a Weibull slope from {MIN_WEIBULL_SLOPE:g} to "
+                         f"{MAX_WEIBULL_SLOPE:g}, got {weibayes_slope:g}",
                          key_path="--weibayes-slope")
     found = read_field_data(data)
     model, checked = (None, None) if against is None else (

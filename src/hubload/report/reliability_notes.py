@@ -26,7 +26,8 @@ def forecast_notes(forecast: Forecast) -> list[str]:
              f"{distribution_text(forecast.model.kind, forecast.model.slope)}.",
              "A wheel end is its two bearings in series (R = R_outboard x R_inboard) on that "
              "distribution; the check's system life of the pair stands on the "
-             "Lundberg-Palmgren slope 9/8 and differs from its B10."]
+             "Lundberg-Palmgren slope 9/8 and differs from the wheel end's B10 (the check's "
+             "verdict stays on the standard's system life)."]
     if forecast.calibration != 1.0:
         notes.append(f"Every life is multiplied by the calibration factor "
                      f"{forecast.calibration:g} (field B10 / predicted B10).")
