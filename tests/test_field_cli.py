@@ -160,3 +160,27 @@ def test_bad_input_is_one_line_naming_file_row_and_column(tmp_path, rows, header
 def test_missing_or_unknown_files_are_one_line(tmp_path, name):
     result = run("field", tmp_path / name)
     assert result.exit_code == 2 and len(result.output.strip().splitlines()) == 1
+
+
+@pytest.mark.parametrize("content,where", [
+    ('hours,status\n"100,failed\n', "row 2"),
+    ("hours,status,hours\n100,failed\n", "row 1, column 3"),
+    ("hours,status\n100,failed\n100,failed\n300,suspended\n", "column hours"),
+    ("hours,status\n1e300,failed\n200,failed\n", "row 2, column hours"),
+    ("", "empty file"),
+    ("hours,status\n", "no data rows"),
+])
+def test_hostile_csv_is_one_line(tmp_path, content, where):
+    data = tmp_path / "hostile.csv"
+    data.write_text(content)
+    result = run("field", data)
+    assert result.exit_code == 2, result.output
+    lines = result.output.strip().splitlines()
+    assert len(lines) == 1 and str(data) in lines[0] and where in lines[0]
+
+
+def test_a_damaged_workbook_is_one_line(tmp_path):
+    data = tmp_path / "returns.xlsx"
+    data.write_bytes(bytes(range(256)) * 8)
+    result = run("field", data)
+    assert result.exit_code == 2 and len(result.output.strip().splitlines()) == 1

@@ -201,3 +201,16 @@ def test_missing_fleet_key_with_options_names_it(document, write_case_file):
 def test_a_sweep_refuses_forecast_keys():
     result = run("sweep", SITE_DUMPER, "--vary", "fleet.machines=1:3:3")
     assert result.exit_code == 2 and "fleet.machines" in result.output
+
+
+def test_reading_a_file_does_not_load_the_forecasts_libraries():
+    # Start-up stays lean (project rule): the [fleet] and [reliability] readers come with every
+    # file, scipy only with a forecast or a fit.
+    import subprocess
+    import sys
+
+    code = ("import sys, hubload.casefile.load; "
+            "print(any(name.split('.')[0] == 'scipy' for name in sys.modules))")
+    found = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True,
+                           check=True)
+    assert found.stdout.strip() == "False"

@@ -263,10 +263,12 @@ class FieldResult(Wrapped):
 
 
 def field(data: str | Path, against: str | Path | None = None,
-          weibayes_slope: float | None = None, method: str | None = None) -> FieldResult:
+          weibayes_slope: float | None = None, method: str | None = None,
+          band: bool = False) -> FieldResult:
     """Weibull fits of the field data file ``data`` (CSV or XLSX); with ``against`` (a
     load-case file) its predicted wheel end and the ratio of the field B10 to it. With fewer
-    than two failures only a Weibayes estimate exists: give ``weibayes_slope``."""
+    than two failures only a Weibayes estimate exists: give ``weibayes_slope``. ``band``
+    adds the likelihood-ratio band of the B-lives that the probability plot draws."""
     from hubload.casefile.field_data import read_field_data
     from hubload.schema.fileformat import MAX_WEIBULL_SLOPE, MIN_WEIBULL_SLOPE
     from hubload.studies.field import FieldStudy, fit_field, prediction_of
@@ -279,8 +281,8 @@ def field(data: str | Path, against: str | Path | None = None,
     model, checked = (None, None) if against is None else (
         forecast_inputs(against, {}, {})[0], check(against, method).value)
     try:
-        fit, regression, band = fit_field(found, weibayes_slope,
-                                          1.5 if model is None else model.slope)
+        fit, regression, bounds = fit_field(found, weibayes_slope,
+                                            1.5 if model is None else model.slope, band)
     except InputError as error:
         raise error.located(str(data)) from None
     prediction = None
@@ -289,5 +291,5 @@ def field(data: str | Path, against: str | Path | None = None,
 
         prediction = prediction_of(fit, predicted_wheel_end(checked, model), str(against),
                                    checked.study.title, model, life_basis(checked))
-    return FieldResult(FieldStudy(data=found, fit=fit, rank_regression=regression, band=band,
+    return FieldResult(FieldStudy(data=found, fit=fit, rank_regression=regression, band=bounds,
                                   prediction=prediction))

@@ -55,12 +55,13 @@ def csv_rows(path):
     lines = ["" if line.lstrip().startswith("#") else line for line in text.splitlines()]
     header = next((line for line in lines if line.strip()), "")
     delimiter = ";" if header.count(";") > header.count(",") else ","
+    reader = csv.reader(lines, delimiter=delimiter, strict=True)
     try:
-        for number, cells in enumerate(csv.reader(lines, delimiter=delimiter, strict=True),
-                                       start=1):
-            yield number, cells
+        for cells in reader:
+            yield reader.line_num, cells
     except csv.Error as error:
-        raise InputError(f"CSV syntax error ({error})", file=str(path)) from None
+        raise InputError(f"CSV syntax error ({error})", file=str(path),
+                         key_path=f"row {reader.line_num}") from None
 
 
 def xlsx_rows(path):

@@ -193,7 +193,8 @@ def field(data: str, against: str | None = None, as_json: bool = False,
           method: str | None = None) -> api.FieldResult:
     inputs = (data,) + ((against,) if against else ())
     checked(plot, force, PLOT_SUFFIXES, inputs)
-    found = api.field(data, against=against, weibayes_slope=weibayes_slope, method=method)
+    found = api.field(data, against=against, weibayes_slope=weibayes_slope, method=method,
+                      band=plot is not None)
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.field import field_figure

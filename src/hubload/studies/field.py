@@ -46,7 +46,7 @@ class FieldStudy:
     data: FieldData
     fit: wf.WeibullFit                       # maximum likelihood, or Weibayes (< 2 failures)
     rank_regression: wf.WeibullFit | None
-    band: tuple[np.ndarray, np.ndarray, np.ndarray] | None   # p, low [h], high [h]
+    band: tuple[np.ndarray, np.ndarray, np.ndarray] | None   # p, low [h], high [h]; plots only
     prediction: Prediction | None
 
     @property
@@ -64,9 +64,10 @@ def too_few_failures(data: FieldData, assumed_slope: float) -> InputError:
         f"give --weibayes-slope BETA to report that estimate", key_path="column status")
 
 
-def fit_field(data: FieldData, weibayes_slope: float | None = None,
-              default_slope: float = 1.5) -> tuple[wf.WeibullFit, wf.WeibullFit | None, tuple | None]:
-    """ML fit, rank regression and band; with < 2 failures Weibayes if a slope is given."""
+def fit_field(data: FieldData, weibayes_slope: float | None = None, default_slope: float = 1.5,
+              band: bool = False) -> tuple[wf.WeibullFit, wf.WeibullFit | None, tuple | None]:
+    """ML fit, rank regression and (``band``: for a plot) the likelihood-ratio band of the
+    B-lives, which costs a profile per B-life; with < 2 failures Weibayes if a slope is given."""
     if data.failures < wf.MINIMUM_FAILURES:
         if weibayes_slope is None:
             raise too_few_failures(data, default_slope)
@@ -76,6 +77,8 @@ def fit_field(data: FieldData, weibayes_slope: float | None = None,
         regression = wf.fit_rank_regression(data.hours, data.failed)
     except wf.WeibullFitError as error:
         raise InputError(str(error), key_path="column hours") from None
+    if not band:
+        return fit, regression, None
     low, high = wf.likelihood_ratio_quantile_bounds(data.hours, data.failed, BAND_PROBABILITIES,
                                                     CONFIDENCE)
     return fit, regression, (BAND_PROBABILITIES, low, high)
