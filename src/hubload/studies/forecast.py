@@ -7,7 +7,8 @@ basic L10 (the refined method's reference lives likewise). A life model
 F(t) (model/reliability.py). The units of a machine are a list of named
 :class:`Unit` s, each a series system of its bearings (R = product of R): a wheel
 end's file builds one unit per wheel end (:func:`wheel_end_units`); a machine file
-builds its wheel ends the same way from its own results. The fleet forecast
+builds its wheel ends the same way from its own results, and every builder hands its
+units to :func:`forecast_of_units`. The fleet forecast
 (model/fleet_forecast.py) counts bearing failures: a failed bearing is a claim.
 """
 
@@ -147,7 +148,7 @@ def items_of(units: tuple[Unit, ...], target_life_h: float | None) -> tuple[Item
     return tuple(items)
 
 
-def forecast_of_units(units: tuple[Unit, ...], fleet: Fleet | None) -> FleetForecast | None:
+def fleet_outcome(units: tuple[Unit, ...], fleet: Fleet | None) -> FleetForecast | None:
     """The fleet's expected failures of the units' bearings (each a unit of the model)."""
     if fleet is None:
         return None
@@ -162,17 +163,25 @@ def forecast_of_units(units: tuple[Unit, ...], fleet: Fleet | None) -> FleetFore
                           warranty_cap_h=fleet.warranty_cap_h)
 
 
+def forecast_of_units(units: tuple[Unit, ...], *, title: str, source: str, model: LifeModel,
+                      basis: LifeBasis, target_life_h: float | None, calibration: float,
+                      fleet: Fleet | None) -> Forecast:
+    """The forecast of one machine's units (already calibrated): every builder ends here."""
+    return Forecast(title=title, source=source, model=model, basis=basis,
+                    target_life_h=target_life_h, calibration=calibration, units=units,
+                    items=items_of(units, target_life_h), fleet=fleet,
+                    outcome=fleet_outcome(units, fleet))
+
+
 def run_forecast(result: Result, model: LifeModel, fleet: Fleet | None) -> Forecast:
-    """Distributions and fleet forecast of a checked wheel end (one file)."""
+    """Distributions and fleet forecast of a checked wheel end (one load-case file)."""
     calibration = 1.0 if fleet is None else fleet.calibration
     count = 1 if fleet is None else fleet.wheel_ends_per_machine
-    units = wheel_end_units(result, model, count, calibration)
     study = result.study
-    return Forecast(title=study.title, source=study.source, model=model,
-                    basis=life_basis(result), target_life_h=study.target_life_h,
-                    calibration=calibration, units=units,
-                    items=items_of(units, study.target_life_h), fleet=fleet,
-                    outcome=forecast_of_units(units, fleet))
+    return forecast_of_units(wheel_end_units(result, model, count, calibration),
+                             title=study.title, source=study.source, model=model,
+                             basis=life_basis(result), target_life_h=study.target_life_h,
+                             calibration=calibration, fleet=fleet)
 
 
 def predicted_wheel_end(result: Result, model: LifeModel) -> ItemLives:
