@@ -21,8 +21,11 @@ def distribution_text(kind: str, slope: float) -> str:
 def forecast_notes(forecast: Forecast) -> list[str]:
     """What the numbers of a forecast stand on, each note one sentence or two."""
     basis = forecast.basis
-    notes = [f"Each bearing's L10 is its {basis.symbol}, the basis of the governing life "
-             f"{basis.governing_symbol} ({basis.governing_basis}); spread by "
+    source = f"its governing life {basis.symbol} ({basis.governing_basis})" \
+        if basis.symbol == basis.governing_symbol else \
+        (f"its {basis.symbol}: the governing life {basis.governing_symbol} "
+         f"({basis.governing_basis}) taken back to 90 % (divided by a1)")
+    notes = [f"Each bearing's L10 is {source}; spread by "
              f"{distribution_text(forecast.model.kind, forecast.model.slope)}.",
              "A wheel end is its two bearings in series (R = R_outboard x R_inboard) on that "
              "distribution; the check's system life of the pair stands on the "

@@ -31,6 +31,8 @@ def warranty_lines(forecast: Forecast) -> list[str]:
 
 def render_forecast(forecast: Forecast, console: Console) -> None:
     console.print(Text.assemble((plain(forecast.title), "bold"), f"  ({plain(forecast.source)})"))
+    basis, *notes = forecast_notes(forecast)
+    console.print(Text(plain(basis)))
     render(units_table(forecast), console)
     if forecast.outcome is None:
         console.print(Text("No [fleet] given (nor --machines ...): no fleet forecast."))
@@ -40,6 +42,6 @@ def render_forecast(forecast: Forecast, console: Console) -> None:
             console.print(Text(line))
     if forecast.target_life_h is not None:
         console.print(Text(f"Target life: {hours_with_unit(forecast.target_life_h)}."))
-    for note in forecast_notes(forecast):
+    for note in notes:
         console.print(Text(f"Note: {plain(note)}", style="dim"))
     console.print(Text(f"Caution: {CAUTIONS}", style="dim"))
