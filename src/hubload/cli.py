@@ -273,3 +273,64 @@ def spectrum(**options):
     """Duty spectrum and direct damage of a measured LOG (CSV/Parquet file or folder)."""
     from hubload import commands
     commands.spectrum(**options)
+
+
+def fleet_options(command):
+    """The keys of [fleet] and [reliability] as options of the same names (they override)."""
+    options = (
+        click.option("--distribution", type=click.Choice(["iso281", "weibull"]), default=None,
+                     help="Life distribution (default: the file's [reliability], else iso281)."),
+        click.option("--weibull-slope", type=float, default=None,
+                     help="Slope of the two-parameter Weibull (implies --distribution weibull)."),
+        click.option("--machines", type=int, default=None, help="Machines in the fleet."),
+        click.option("--wheel-ends-per-machine", type=int, default=None,
+                     help="Wheel ends like FILE's on each machine."),
+        click.option("--hours-per-year-median", type=float, default=None,
+                     help="Median operating hours per machine and year [h]."),
+        click.option("--hours-per-year-spread", type=float, default=None,
+                     help="Lognormal sigma of the hours per year over the fleet (>= 0)."),
+        click.option("--years", type=int, default=None, help="Years of the forecast."),
+        click.option("--warranty-years", type=float, default=None, help="Warranty [years]."),
+        click.option("--warranty-hours", type=float, default=None,
+                     help="Operating hours that end the warranty earlier [h]."),
+        click.option("--calibration-factor", type=float, default=None,
+                     help="Multiplies every predicted life (from 'hubload field --against')."),
+    )
+    for option in reversed(options):
+        command = option(command)
+    return command
+
+
+@main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@json_option
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write F(t) of the units and the failures per year (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@method_option()
+@fleet_options
+@reports_input_errors
+def forecast(file, as_json, plot, force, method, **options):
+    """Failure probability of FILE's wheel end over time and failures of its [fleet]."""
+    from hubload import commands
+    commands.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
+
+
+@main.command()
+@click.argument("data", type=click.Path(dir_okay=False))
+@click.option("--against", type=click.Path(dir_okay=False),
+              help="Load-case FILE whose predicted wheel end is compared with the data.")
+@json_option
+@click.option("--plot", type=click.Path(dir_okay=False),
+              help="Write the Weibull probability plot (.png or .svg).")
+@click.option("--force", is_flag=True, help="Overwrite an existing plot file.")
+@click.option("--weibayes-slope", type=float, default=None,
+              help="With fewer than two failures: the Weibull slope assumed for a Weibayes "
+                   "estimate (e.g. 1.5).")
+@method_option()
+@reports_input_errors
+def field(data, against, as_json, plot, force, weibayes_slope, method):
+    """Weibull fits of field DATA (CSV or XLSX: hours, status failed/suspended per unit)."""
+    from hubload import commands
+    commands.field(data, against=against, as_json=as_json, plot=plot, force=force,
+                   weibayes_slope=weibayes_slope, method=method)

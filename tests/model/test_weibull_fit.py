@@ -84,14 +84,15 @@ def scipy_log_likelihood(time, failed, eta, beta):
     return unit.logpdf(time[failed]).sum() + unit.logsf(time[~failed]).sum()
 
 
-def scipy_profile(time, failed, fixed):
-    """Maximum of the scipy log-likelihood over the free parameter, for beta, eta or B10 fixed."""
+def scipy_profile(time, failed, fixed, hazard=None):
+    """Maximum of the scipy log-likelihood over the free parameter, for beta, eta or B10 fixed
+    (or the quantile at cumulative hazard ``hazard``)."""
     name, value = fixed
     if name == "beta":
         return -optimize.minimize_scalar(lambda a: -scipy_log_likelihood(time, failed, math.exp(a), value),
                                          bounds=(0.0, 10.0), method="bounded",
                                          options={"xatol": 1e-10}).fun
-    hazard = 1.0 if name == "eta" else LN_090
+    hazard = hazard if hazard is not None else 1.0 if name == "eta" else LN_090
 
     def negative(log_beta):
         beta = math.exp(log_beta)
@@ -116,6 +117,20 @@ def test_likelihood_ratio_bounds_sit_where_scipys_profile_deviance_is_chi2(name,
             assert deviance == pytest.approx(critical, abs=1e-5), (name, parameter, bound)
     assert fit.beta_low < fit.beta < fit.beta_high
     assert fit.b10_low_h < fit.b10_h < fit.b10_high_h
+
+
+@pytest.mark.parametrize("name, time, failed", censored_sets()[:2])
+def test_quantile_bounds_sit_where_scipys_profile_deviance_is_chi2(name, time, failed):
+    # Meeker & Escobar (1998), 8.2, for B-lives from B1 to B90 (the band of a probability plot).
+    fit = wf.fit_maximum_likelihood(time, failed)
+    best = scipy_log_likelihood(time, failed, fit.eta_h, fit.beta)
+    critical = stats.chi2.ppf(0.90, 1)
+    probabilities = np.array([0.01, 0.1, 0.5, 0.9])
+    low, high = wf.likelihood_ratio_quantile_bounds(time, failed, probabilities)
+    for p, bounds in zip(probabilities, zip(low, high)):
+        for bound in bounds:
+            profile = scipy_profile(time, failed, ("quantile", bound), -math.log1p(-p))
+            assert 2 * (best - profile) == pytest.approx(critical, abs=1e-5), (name, p, bound)
 
 
 @settings(max_examples=25)

@@ -10,6 +10,7 @@ import numpy as np
 
 from hubload.casefile.casetable import expand_case_table
 from hubload.casefile.finite import check_finite
+from hubload.casefile.fleet import read_life_model
 from hubload.casefile.geometry import read_geometry, with_method
 from hubload.casefile.lubrication import read_lubrication
 from hubload.casefile.operating_points import derive_cases, read_motor, read_vehicle
@@ -90,6 +91,7 @@ def study_from_validated(data: dict, source: str = "<document>", finite: bool = 
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})
+    read_life_model(data.get("reliability"))   # its cross-key rule holds for every command
     motor, vehicle = read_motor(data.get("motor")), read_vehicle(data.get("vehicle"))
     lubrication = read_lubrication(data.get("lubrication"), data["case"], pair)
     pair = read_setting(data["pair"], pair, data["case"],

@@ -21,6 +21,7 @@ from hubload.domain.batch import stack_studies
 from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
+from hubload.schema.fileformat import FORECAST_TABLES
 from hubload.schema.spec import Field, Table
 
 SEGMENT = re.compile(r"^(?P<name>[A-Za-z_][A-Za-z0-9_]*)(?:\[(?P<index>\d+)\])?$")
@@ -55,6 +56,10 @@ def parse_key_path(text: str, document: Mapping, table: Table = FORMAT) -> KeyPa
 
 
 def resolve(segments: list, document: Mapping, table: Table, text: str) -> Field:
+    if table is FORMAT and segments[0][0] in FORECAST_TABLES:
+        raise InputError(f"[{segments[0][0]}] enters only `hubload forecast`; a sweep varies "
+                         "the check's inputs (give the forecast's options instead)",
+                         key_path=text)
     node: object = document
     for position, (name, index) in enumerate(segments):
         last = position == len(segments) - 1

@@ -41,7 +41,6 @@ import math
 from dataclasses import dataclass, replace
 
 import numpy as np
-from scipy.interpolate import CubicSpline
 
 # F(L10) = 0.1 by the definition of the basic rating life L10 [1]: the cumulative hazard at L10.
 HAZARD_AT_L10 = math.log(1.0 / 0.9)
@@ -216,6 +215,8 @@ def expected_renewals(distribution: LifeDistribution, time_h):
     small probabilities keep their precision. Beyond the grid M(t) follows its
     asymptote t/mu + (CV^2 - 1)/2 [5].
     """
+    from scipy.interpolate import CubicSpline   # here: the file format's reader imports this module
+
     time = np.asarray(time_h, dtype=float)
     mean = distribution.mean_h
     end = min(float(np.max(time, initial=0.0)), RENEWAL_GRID_MEANS * mean)

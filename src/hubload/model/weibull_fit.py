@@ -182,17 +182,39 @@ def _likelihood_ratio_bounds(sample: _Sample, estimate, confidence: float):
         b = math.exp(log_beta)
         return best - sample.log_likelihood(sample.log_eta_given_beta(b), b, HAZARD_ETA) - critical
 
-    def quantile_drop(hazard):
-        def drop(log_quantile):
-            b = sample.best_beta_at_quantile(log_quantile, hazard)
-            return best - sample.log_likelihood(log_quantile, b, hazard) - critical
-        return drop
+    return (_bounds_of_drop(beta_drop, math.log(beta)),
+            _quantile_bounds(sample, estimate, HAZARD_ETA, confidence),
+            _quantile_bounds(sample, estimate, HAZARD_B10, confidence))
 
-    log_b10 = log_eta + math.log(HAZARD_B10) / beta
-    return tuple(_bounds_of_drop(drop, centre) for drop, centre in (
-        (beta_drop, math.log(beta)),
-        (quantile_drop(HAZARD_ETA), log_eta),
-        (quantile_drop(HAZARD_B10), log_b10)))
+
+def _quantile_bounds(sample: _Sample, estimate, hazard: float, confidence: float):
+    """ln-scale bounds of the quantile at cumulative hazard ``hazard`` by its profile [2, 8.2]."""
+    log_eta, beta = estimate
+    best = sample.log_likelihood(log_eta, beta, HAZARD_ETA)
+    critical = 0.5 * stats.chi2.ppf(confidence, 1)
+
+    def drop(log_quantile):
+        b = sample.best_beta_at_quantile(log_quantile, hazard)
+        return best - sample.log_likelihood(log_quantile, b, hazard) - critical
+
+    return _bounds_of_drop(drop, log_eta + math.log(hazard) / beta)
+
+
+def likelihood_ratio_quantile_bounds(time_h, failed, failure_probability, confidence: float = 0.90):
+    """Two-sided likelihood-ratio bounds [h] of the B-lives at failure probabilities p [-] [2, 8.2].
+
+    The same profile-likelihood bounds as the B10 bounds of ``fit_maximum_likelihood``, at
+    each p (0 < p < 1) of ``failure_probability``: arrays (low, high), inf where unbounded.
+    """
+    sample = _Sample(time_h, failed)
+    _require_failures(sample)
+    beta = math.exp(_decreasing_root(lambda log_beta: sample.beta_score(math.exp(log_beta)), 0.0))
+    estimate = (sample.log_eta_given_beta(beta), beta)
+    with np.errstate(over="ignore"):
+        limits = np.array([_quantile_bounds(sample, estimate, -math.log1p(-p), confidence)
+                           for p in np.atleast_1d(np.asarray(failure_probability, dtype=float))])
+    times = np.exp(limits + sample.log_ref)
+    return times[:, 0], times[:, 1]
 
 
 def _bounds_of_drop(drop, centre: float):
