@@ -278,7 +278,7 @@ def field(data: str | Path, against: str | Path | None = None,
     than two failures only a Weibayes estimate exists: give ``weibayes_slope``. ``band``
     adds the likelihood-ratio band of the B-lives that the probability plot draws."""
     from hubload.casefile.field_data import read_field_data
-    from hubload.schema.fileformat import MAX_WEIBULL_SLOPE, MIN_WEIBULL_SLOPE
+    from hubload.schema.fleetformat import MAX_WEIBULL_SLOPE, MIN_WEIBULL_SLOPE
     from hubload.studies.field import FieldStudy, fit_field, prediction_of
 
     if weibayes_slope is not None and not MIN_WEIBULL_SLOPE <= weibayes_slope <= MAX_WEIBULL_SLOPE:

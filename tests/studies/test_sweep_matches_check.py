@@ -14,7 +14,7 @@ from click.testing import CliRunner
 from hubload.casefile.variation import parse_key_path
 from hubload.cli import main
 from hubload.schema import FORMAT
-from hubload.schema.fileformat import FORECAST_TABLES
+from hubload.schema.fleetformat import FORECAST_TABLES
 from studies_helpers import SCENARIOS, assert_close, read_toml, set_key, write_toml
 
 # Keys of the check's point documents that a sweep point repeats.

@@ -19,7 +19,7 @@ import numpy as np
 
 from hubload.domain.field import FieldData
 from hubload.errors import InputError
-from hubload.schema.fileformat import MAX_TARGET_LIFE_H
+from hubload.schema.limits import MAX_TARGET_LIFE_H
 
 REQUIRED_COLUMNS = ("hours", "status")
 OPTIONAL_COLUMNS = ("unit", "position")

@@ -16,7 +16,7 @@ from hubload.casefile.validate import validate_value
 from hubload.domain.fleet import Fleet, LifeModel
 from hubload.errors import InputError
 from hubload.model.reliability import ISO281_SLOPE
-from hubload.schema.fileformat import FLEET, RELIABILITY
+from hubload.schema.fleetformat import FLEET, RELIABILITY
 
 
 def option_name(key: str) -> str:

@@ -21,7 +21,7 @@ from hubload.domain.batch import stack_studies
 from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.schema import FORMAT
-from hubload.schema.fileformat import FORECAST_TABLES
+from hubload.schema.fleetformat import FORECAST_TABLES
 from hubload.schema.spec import Field, Table
 
 SEGMENT = re.compile(r"^(?P<name>[A-Za-z_][A-Za-z0-9_]*)(?:\[(?P<index>\d+)\])?$")

@@ -8,12 +8,17 @@ from __future__ import annotations
 
 from hubload.model.lubrication import (CONTAMINATION_LEVELS, GREASE_CLEANLINESS,
                                        RELIABILITY_MAX_PERCENT, RELIABILITY_MIN_PERCENT)
-from hubload.model.shaft.strength import SURFACES
-from hubload.model.shaft.stress import CRITERIA
 from hubload.model.materials import MATERIALS
 from hubload.model.operating import DEFAULT_ADHESION_MU
 from hubload.model.setting import SETTING_BASES
 from hubload.model.tapered_pair import ARRANGEMENTS
+from hubload.schema.fleetformat import FLEET, RELIABILITY
+from hubload.schema.limits import (MAX_AXLE_LOAD_KN, MIN_TRACK_MM, MAX_VEHICLE_MM, MAX_E, MAX_Y,
+    MAX_LATERAL_G, MAX_POSITION_MM, MAX_PRESSURE_BAR, MAX_FLOW_LPM, MAX_DISPLACEMENT_CC,
+    MAX_ROLLER_MM, MAX_ROLLERS, MAX_CROWN_DROP_UM, MAX_SPEED_RPM, MAX_SPEED_KMH,
+    MAX_TARGET_LIFE_H, MAX_VISCOSITY_CST, MAX_WHEEL_FORCE_KN, MIN_CONTACT_ANGLE_DEG,
+    MIN_DIAMETER_MM, MAX_DIAMETER_MM, MIN_RADIUS_MM, MAX_RADIUS_MM, MIN_RATING_KN, MAX_RATING_KN)
+from hubload.schema.shaftformat import SHAFT
 from hubload.schema.spec import Choice, Field, Table
 
 # Choices and limits the model's tables define are taken from them, so that the validator
@@ -22,41 +27,6 @@ from hubload.schema.spec import Choice, Field, Table
 VERDICT_BASES = ("shorter", "iso281", "refined")
 MATERIAL_NAMES = tuple(MATERIALS)
 TIME_SUM_TOLERANCE_PERCENT = 0.5
-
-# Plausibility limits (common practice): generous bounds beyond anything a wheel driven by a
-# hydraulic hub motor meets, so that no real machine is refused while a unit slip (m for mm,
-# N for kN) or a hostile value is, before it can overflow in a unit conversion.
-# Positions along the shaft and the wheel offset: hub motors carry the wheel within a few
-# hundred mm of their mounting face; 2 m is beyond any of them.
-MAX_POSITION_MM = 2000.0
-# Tyre radii: the smallest wheels on such drives are about 200 mm across, the largest
-# earthmover tyres about 4 m (radius 2 m, from memory).
-MIN_RADIUS_MM, MAX_RADIUS_MM = 50.0, 2500.0
-# Wheel forces: the heaviest off-road tyres carry about 1,000 kN (100 t, from memory); the
-# limit doubles it. Side and tractive forces stay below adhesion x load (adhesion <= 2).
-MAX_WHEEL_FORCE_KN = 2000.0
-# Speeds: low-speed high-torque motors run up to a few hundred r/min; a road wheel at
-# 300 km/h with a 0.3 m radius turns about 2,650 r/min.
-MAX_SPEED_RPM, MAX_SPEED_KMH = 5000.0, 300.0
-# Hydraulics: wheel motors are rated up to about 450-500 bar; 2,000 bar is beyond any pump.
-MAX_PRESSURE_BAR, MAX_FLOW_LPM, MAX_DISPLACEMENT_CC = 2000.0, 10000.0, 100000.0
-# Lateral acceleration: friction-limited by the adhesion coefficient (<= 2).
-MAX_LATERAL_G = 3.0
-# Bearings: catalogue tapered roller bearings span about C = 10 kN (10 mm bore) to tens of MN
-# (metre-size, from memory).
-MIN_RATING_KN, MAX_RATING_KN = 0.1, 100000.0
-MIN_DIAMETER_MM, MAX_DIAMETER_MM = 5.0, 5000.0
-MAX_ROLLER_MM, MAX_ROLLERS, MAX_CROWN_DROP_UM = 500.0, 500, 1000.0
-# Load factors: e = 1.5 tan a and Y = 0.4 cot a for angles of 1 to 60 deg stay below these.
-MAX_E, MAX_Y = 5.0, 50.0
-MIN_CONTACT_ANGLE_DEG = 1.0
-# A life target of a million hours is over a century of continuous running.
-MAX_TARGET_LIFE_H = 1e6
-MAX_VISCOSITY_CST = 100000.0   # ISO VG 3200, the top grade, is 3,200 mm2/s at 40 C
-MAX_AXLE_LOAD_KN, MIN_TRACK_MM, MAX_VEHICLE_MM = 2 * MAX_WHEEL_FORCE_KN, 100.0, 10000.0
-# Shaft steels: from about 300 MPa (mild steel) to about 2,500 MPa (maraging, from memory).
-MIN_STRENGTH_MPA, MAX_STRENGTH_MPA = 100.0, 5000.0
-MAX_KT, MAX_NOTCH_RADIUS_MM, MAX_REQUIRED_SAFETY = 10.0, 100.0, 10.0
 
 PROJECT = Table(
     name="project",
@@ -390,140 +360,6 @@ LUBRICATION = Table(
                     doc="Give iso4406 for the oil methods or grease_cleanliness for grease."),),
 )
 
-SHAFT_SECTION = Table(
-    name="section",
-    array=True,
-    doc="A section of the wheel shaft to check: a shoulder fillet, a groove, a bearing seat "
-        "(repeat the block for each section).",
-    fields=(
-        Field("name", "string", "Name of the section (unique).", required=True,
-              example="flange fillet"),
-        Field("position_mm", "number", "Axial position of the section [mm], same axis as the "
-              "bearings and the wheel offset.", required=True, minimum=-MAX_POSITION_MM,
-              maximum=MAX_POSITION_MM, example=70),
-        Field("diameter_mm", "number", "Diameter of the solid shaft at the section [mm] (the "
-              "smaller diameter at a shoulder), 2.79-254 mm.", required=True,
-              exclusive_minimum=0, example=60),
-        Field("kt_bending", "number", "Stress-concentration factor Kt in bending (1: no notch).",
-              default=1.0, minimum=1, maximum=MAX_KT, example=1.7),
-        Field("kt_torsion", "number", "Stress-concentration factor Kts in torsion (1: no notch).",
-              default=1.0, minimum=1, maximum=MAX_KT, example=1.4),
-        Field("notch_sensitivity", "number", "Notch sensitivity q (Kf = 1 + q (Kt - 1)); "
-              "default 1 (Kf = Kt) unless notch_radius_mm is given.", minimum=0, maximum=1),
-        Field("notch_radius_mm", "number", "Notch (fillet) radius [mm]; q is then estimated "
-              "for steel by Neuber's equation.", exclusive_minimum=0,
-              maximum=MAX_NOTCH_RADIUS_MM, example=3),
-        Field("carries_torque", "boolean", "Whether the drive torque (tractive force x rolling "
-              "radius) passes through this section.", default=True, example=True),
-    ),
-    choices=(Choice("notch sensitivity", groups=(("notch_sensitivity",), ("notch_radius_mm",)),
-                    required=False,
-                    doc="Give notch_sensitivity or notch_radius_mm, not both."),),
-)
-
-SHAFT_PERMISSIBLE = Table(
-    name="permissible",
-    required=False,
-    doc="The motor supplier's curve of permissible radial wheel load against the position of "
-        "the load (same axis as the wheel offset); interpolated linearly, never extrapolated.",
-    fields=(
-        Field("load_position_mm", "number-list", "Positions of the curve's points [mm], "
-              "strictly increasing.", required=True, minimum=-MAX_POSITION_MM,
-              maximum=MAX_POSITION_MM, example=(0, 50, 100, 150)),
-        Field("radial_load_kN", "number-list", "Permissible radial wheel load at each position "
-              "[kN].", required=True, exclusive_minimum=0, maximum=MAX_RATING_KN,
-              example=(60, 45, 35, 28)),
-    ),
-)
-
-SHAFT = Table(
-    name="shaft",
-    required=False,
-    doc="Fatigue and yield check of the wheel (motor) shaft, steel, by the method of Shigley's "
-        "Mechanical Engineering Design, 10th ed.",
-    fields=(
-        Field("ultimate_strength_MPa", "number", "Tensile strength Sut of the shaft steel [MPa].",
-              required=True, minimum=MIN_STRENGTH_MPA, maximum=MAX_STRENGTH_MPA, example=900),
-        Field("yield_strength_MPa", "number", "Yield strength Sy of the shaft steel [MPa].",
-              required=True, minimum=MIN_STRENGTH_MPA, maximum=MAX_STRENGTH_MPA, example=700),
-        Field("surface", "string", "Surface finish at the checked sections (Marin surface "
-              "factor).", required=True, choices=SURFACES,
-              example="machined"),
-        Field("temperature_C", "number", "Operating temperature of the shaft [deg C] (Marin "
-              "temperature factor; 1 up to 21 C).", minimum=-60, maximum=538),
-        Field("reliability_percent", "number", "Reliability of the endurance limit [%] (Marin "
-              "reliability factor; 50 = the mean endurance limit).", default=50.0, minimum=50,
-              exclusive_maximum=100, example=99),
-        Field("criterion", "string", "Fatigue criterion of the safety factor.",
-              default="goodman", choices=CRITERIA),
-        Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
-              "(default 1.5, common practice for shafts under well-known loads).",
-              default=1.5, exclusive_minimum=0, maximum=MAX_REQUIRED_SAFETY),
-    ),
-    tables=(SHAFT_SECTION, SHAFT_PERMISSIBLE),
-)
-
-# Fleet forecasts (hubload forecast): a fleet of up to 100,000 machines with up to 16 wheel ends
-# keeps the exact count distribution (support machines x bearings + 1) within a few MB; no
-# machine runs more than the 8,784 hours of a leap year; a lognormal usage spread sigma of 1.2
-# (one standard deviation a factor 3.3) is wider than any fleet's (common practice), and the
-# forecast's quadrature is converged to it (model/fleet_forecast.py); 50 years outlast any
-# machine.
-MAX_MACHINES, MAX_WHEEL_ENDS, HOURS_PER_YEAR = 100_000, 16, 8784.0
-MAX_USAGE_SIGMA, MAX_FORECAST_YEARS = 1.2, 50
-# Weibull slopes of rolling-bearing fatigue lie near 1.1 to 1.5 (ISO 281's distribution: 1.5);
-# 0.3 to 10 covers early failures to wear-out (common practice). A calibration factor from
-# field data beyond 100 either way points to a wrong model, not a correction.
-MIN_WEIBULL_SLOPE, MAX_WEIBULL_SLOPE, MAX_CALIBRATION = 0.3, 10.0, 100.0
-
-FLEET = Table(
-    name="fleet",
-    required=False,
-    doc="A fleet of machines that carry this wheel end, for `hubload forecast`: expected "
-        "failures per year and within the warranty (docs/reliability.md). The check does not "
-        "use it. Options of the same names override the keys.",
-    fields=(
-        Field("machines", "integer", "Machines in the fleet, all put into service together.",
-              required=True, minimum=1, maximum=MAX_MACHINES, example=400),
-        Field("wheel_ends_per_machine", "integer", "Wheel ends like this file's on each machine "
-              "(all on the same duty).", default=1, minimum=1, maximum=MAX_WHEEL_ENDS,
-              example=4),
-        Field("hours_per_year_median", "number", "Median operating hours per machine and year "
-              "[h] (half the fleet runs less, half more).", required=True, exclusive_minimum=0,
-              maximum=HOURS_PER_YEAR, example=1200),
-        Field("hours_per_year_spread", "number", "Spread of the yearly hours over the fleet: "
-              "the standard deviation sigma of ln(hours per year), lognormal (0: every machine "
-              "runs the median; 0.5: a sixth of the fleet runs more than 1.65 x the median).",
-              default=0.0, minimum=0, maximum=MAX_USAGE_SIGMA, example=0.5),
-        Field("years", "integer", "Years of the forecast (default: the warranty's, rounded up).",
-              minimum=1, maximum=MAX_FORECAST_YEARS, example=5),
-        Field("warranty_years", "number", "Warranty period from delivery [years].",
-              required=True, exclusive_minimum=0, maximum=MAX_FORECAST_YEARS, example=2),
-        Field("warranty_hours", "number", "Operating hours that end the warranty earlier "
-              "[h] (optional).", exclusive_minimum=0, maximum=MAX_TARGET_LIFE_H, example=3000),
-        Field("calibration_factor", "number", "Multiplies every predicted life (field B10 / "
-              "predicted B10, from `hubload field --against`; default 1).", default=1.0,
-              exclusive_minimum=0, maximum=MAX_CALIBRATION, example=1.0),
-    ),
-)
-
-RELIABILITY = Table(
-    name="reliability",
-    required=False,
-    doc="The life distribution behind `hubload forecast` and `hubload field --against` "
-        "(docs/reliability.md). The check does not use it.",
-    fields=(
-        Field("distribution", "string", "iso281: the distribution behind ISO 281's a1 "
-              "(three-parameter Weibull, slope 1.5, minimum life 0.05 L10); weibull: "
-              "two-parameter Weibull with weibull_slope.", default="iso281",
-              choices=("iso281", "weibull")),
-        Field("weibull_slope", "number", "Weibull slope beta of the two-parameter distribution "
-              "(needed by distribution = \"weibull\", e.g. 1.1 to 1.5 for rolling-bearing "
-              "fatigue; not with iso281, whose slope is 1.5).", minimum=MIN_WEIBULL_SLOPE,
-              maximum=MAX_WEIBULL_SLOPE),
-    ),
-)
-
 FORMAT = Table(
     name="",
     doc="A hubload load-case file.",
@@ -534,6 +370,3 @@ FORMAT = Table(
                     doc="Give the load cases as [[case]] blocks or as a [cases] table "
                         "(a spreadsheet), not both."),),
 )
-
-# Tables that only `hubload forecast` reads: a sweep of their keys would change nothing.
-FORECAST_TABLES = (FLEET.name, RELIABILITY.name)
