@@ -44,30 +44,48 @@ def written(kind: str, path: str, as_json: bool = False) -> None:
 def check(file: str, as_json: bool = False, report: str | None = None,
           plot: str | None = None, force: bool = False, method: str | None = None,
           show_all: bool = False) -> api.CheckResult:
+    from hubload.report.progress import LateProgress
+
     checked(report, force, (".html", ".htm"), (file,))
     checked(plot, force, PLOT_SUFFIXES, (file,))
-    found = api.check(file, method=method)
-    if report is not None:
-        from hubload.casefile.load import read_document
-        from hubload.report.files import write_text
-        from hubload.report.html.check import report_html
+    with LateProgress("reading the file") as progress:  # ends before anything is printed
+        study = api.load(file, method)
+        found = api.check(study, on_progress=progress.phase(computing(study)))
+        if report is not None:
+            write_report(found, file, report, force, progress.phase("writing the report"))
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.spectrum import damage_share_figure
 
-        write_text(report, report_html(found.value, read_document(file)), force,
-                   inputs=(file,))
-        written("Report", report, as_json)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.spectrum import damage_share_figure
-
-        save(damage_share_figure(found.value), plot, force, (file,))
-        written("Plot", plot, as_json)
+            progress.phase("drawing the plot")
+            save(damage_share_figure(found.value), plot, force, (file,))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in (("Report", report), ("Plot", plot)):
+        if path is not None:
+            written(kind, path, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document)
     else:
         from hubload.report.terminal.check import render_check
 
         render_check(found.value, console(), show_all=show_all)
     return found
+
+
+def computing(study) -> str:
+    """The words of the bar while a study's cases are computed."""
+    count = len(study.cases.names)
+    return f"computing {count:,} case{'s' if count != 1 else ''} ({study.method})"
+
+
+def write_report(found: api.CheckResult, file: str, report: str, force: bool,
+                 on_progress) -> None:
+    from hubload.casefile.load import read_document
+    from hubload.report.files import write_text
+    from hubload.report.html.check import report_html
+
+    write_text(report, report_html(found.value, read_document(file), on_progress), force,
+               inputs=(file,))
 
 
 def schema() -> None:
@@ -91,17 +109,20 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     checked(plot, force, PLOT_SUFFIXES, (file,))
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
-    with LateProgress("sweep") as progress:
+    with LateProgress("sweeping") as progress:
         found = api.sweep(file, specs, method=method, on_progress=progress)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
 
-        draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
-        save(draw(found.value), plot, force, (file,))
+            progress.phase("drawing the plot")
+            draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
+            save(draw(found.value), plot, force, (file,))
+        document = json_text(found, progress) if as_json else None
+    if plot is not None:
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document)
     else:
         from hubload.report.terminal.sweep import render
 
@@ -109,18 +130,30 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     return found
 
 
+def json_text(found, progress) -> str:
+    """The --json document of a result, built under the bar (a large one takes seconds)."""
+    progress.phase("writing JSON")
+    return json.dumps(found.to_dict(), indent=2)
+
+
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None) -> api.ComparisonResult:
-    checked(plot, force, PLOT_SUFFIXES, files)
-    found = api.compare(list(files), method=method)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.spectrum import compare_figure
+    from hubload.report.progress import LateProgress
 
-        save(compare_figure(found.value), plot, force, files)
+    checked(plot, force, PLOT_SUFFIXES, files)
+    with LateProgress(f"comparing {len(files)} files") as progress:
+        found = api.compare(list(files), method=method, on_progress=progress)
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.spectrum import compare_figure
+
+            progress.phase("drawing the plot")
+            save(compare_figure(found.value), plot, force, files)
+        document = json_text(found, progress) if as_json else None
+    if plot is not None:
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document)
     else:
         from hubload.report.terminal.compare import render
 
@@ -130,14 +163,18 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
 def brief(file: str, out: str | None = None, force: bool = False,
           required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
+    from hubload.report.progress import LateProgress
+
     checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else (),
             inputs=(file,))
     from hubload.report.terminal.tables import plain
 
-    found = api.brief(file, required_s0=required_s0, method=method)
     html = out is not None and out.lower().endswith((".html", ".htm"))
-    # no escape sequence from the file reaches a terminal
-    text = found.to_html() if html else plain(found.to_markdown())
+    with LateProgress("searching the required ratings") as progress:
+        found = api.brief(file, required_s0=required_s0, method=method, on_progress=progress)
+        progress.phase("writing the brief")
+        # no escape sequence from the file reaches a terminal
+        text = found.to_html() if html else plain(found.to_markdown())
     if out is None:
         click.echo(text, nl=False)
     else:
@@ -150,16 +187,22 @@ def brief(file: str, out: str | None = None, force: bool = False,
 
 def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
             plot: str | None = None, force: bool = False) -> api.SettingResult:
-    checked(plot, force, PLOT_SUFFIXES, (file,))
-    found = api.setting(file, start_um, stop_um, step_um)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.setting import setting_figure
+    from hubload.report.progress import LateProgress
 
-        save(setting_figure(found.value), plot, force, (file,))
+    checked(plot, force, PLOT_SUFFIXES, (file,))
+    with LateProgress("solving the cases at each setting") as progress:
+        found = api.setting(file, start_um, stop_um, step_um, on_progress=progress)
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.setting import setting_figure
+
+            progress.phase("drawing the plot")
+            save(setting_figure(found.value), plot, force, (file,))
+        document = json_text(found, progress) if as_json else None
+    if plot is not None:
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(json.dumps(found.to_dict(), indent=2))
+        click.echo(document)
     else:
         from hubload.report.terminal.setting import render_setting
 
