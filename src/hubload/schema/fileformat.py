@@ -40,6 +40,10 @@ MAX_WHEEL_FORCE_KN = 2000.0
 MAX_SPEED_RPM, MAX_SPEED_KMH = 5000.0, 300.0
 # Hydraulics: wheel motors are rated up to about 450-500 bar; 2,000 bar is beyond any pump.
 MAX_PRESSURE_BAR, MAX_FLOW_LPM, MAX_DISPLACEMENT_CC = 2000.0, 10000.0, 100000.0
+# The smallest hydraulic motors displace a few cm3 per revolution; their efficiencies lie
+# between about 0.8 and 0.98: below 10 % no motor drives a wheel (and a tiny one overflowed
+# the braking speed, flow / efficiency).
+MIN_DISPLACEMENT_CC, MIN_EFFICIENCY = 1.0, 0.1
 # Lateral acceleration: friction-limited by the adhesion coefficient (<= 2).
 MAX_LATERAL_G = 3.0
 # Bearings: catalogue tapered roller bearings span about C = 10 kN (10 mm bore) to tens of MN
@@ -49,9 +53,18 @@ MIN_DIAMETER_MM, MAX_DIAMETER_MM = 5.0, 5000.0
 MAX_ROLLER_MM, MAX_ROLLERS, MAX_CROWN_DROP_UM = 500.0, 500, 1000.0
 # Load factors: e = 1.5 tan a and Y = 0.4 cot a for angles of 1 to 60 deg stay below these.
 MAX_E, MAX_Y = 5.0, 50.0
+# Y = 0.4 cot a is 0.23 at 60 deg, the steepest angle allowed; 0.1 is below any bearing (a
+# tiny Y overflowed the induced axial force 0.5 Fr / Y).
+MIN_Y = 0.1
+# Rollers: under a millimetre no tapered roller is made; notch radii under 10 um are cracks
+# (Neuber's sqrt(a / r) overflowed at a radius of 5e-324 mm).
+MIN_ROLLER_MM, MIN_NOTCH_RADIUS_MM = 0.5, 0.01
+# A required safety factor below 1 would accept a computed failure.
+MIN_REQUIRED_SAFETY = 1.0
 MIN_CONTACT_ANGLE_DEG = 1.0
-# A life target of a million hours is over a century of continuous running.
-MAX_TARGET_LIFE_H = 1e6
+# A life target of a million hours is over a century of continuous running; below an hour
+# no drive is designed (and a target of 1e-308 h overflowed the load margin, life / target).
+MIN_TARGET_LIFE_H, MAX_TARGET_LIFE_H = 1.0, 1e6
 MAX_VISCOSITY_CST = 100000.0   # ISO VG 3200, the top grade, is 3,200 mm2/s at 40 C
 MAX_AXLE_LOAD_KN, MIN_TRACK_MM, MAX_VEHICLE_MM = 2 * MAX_WHEEL_FORCE_KN, 100.0, 10000.0
 # Shaft steels: from about 300 MPa (mild steel) to about 2,500 MPa (maraging, from memory).
@@ -67,7 +80,7 @@ PROJECT = Table(
               example="Yard loader, front left wheel"),
         Field("target_life_h", "number", "Required life of the drive [h]: the bearing pair's "
               "system life and, with a [shaft] table, the shaft's fatigue life.",
-              exclusive_minimum=0, maximum=MAX_TARGET_LIFE_H, example=5000),
+              minimum=MIN_TARGET_LIFE_H, maximum=MAX_TARGET_LIFE_H, example=5000),
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
               minimum=RELIABILITY_MIN_PERCENT, maximum=RELIABILITY_MAX_PERCENT, example=90),
@@ -113,15 +126,16 @@ MOTOR = Table(
     required=False,
     fields=(
         Field("displacement_cc", "number", "Displacement per revolution in full mode [cm3].",
-              required=True, exclusive_minimum=0, maximum=MAX_DISPLACEMENT_CC, example=750),
+              required=True, minimum=MIN_DISPLACEMENT_CC, maximum=MAX_DISPLACEMENT_CC,
+              example=750),
         Field("half_mode", "boolean", "The motor can switch to half displacement (two-speed "
               "motor): cases may then give mode = \"half\".", default=False),
         Field("efficiency_volumetric", "number", "Volumetric efficiency (speed = flow x "
               "efficiency / displacement; default 1: ideal).", default=1.0,
-              exclusive_minimum=0, maximum=1, example=0.96),
+              minimum=MIN_EFFICIENCY, maximum=1, example=0.96),
         Field("efficiency_mechanical", "number", "Hydraulic-mechanical efficiency (torque = "
               "pressure x displacement x efficiency / 2 pi; default 1: ideal).", default=1.0,
-              exclusive_minimum=0, maximum=1, example=0.92),
+              minimum=MIN_EFFICIENCY, maximum=1, example=0.92),
         Field("max_pressure_bar", "number", "Rated pressure difference [bar]; cases above it "
               "are flagged.", exclusive_minimum=0, maximum=MAX_PRESSURE_BAR, example=350),
         Field("max_speed_rpm", "number", "Rated speed [r/min]; cases above it are flagged.",
@@ -154,7 +168,7 @@ BEARING_FIELDS = (
           required=True, minimum=MIN_RATING_KN, maximum=MAX_RATING_KN),
     Field("e", "number", "Limit of Fa/Fr for X = 1, Y = 0 (ISO 281).", exclusive_minimum=0,
           maximum=MAX_E),
-    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", exclusive_minimum=0,
+    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", minimum=MIN_Y,
           maximum=MAX_Y),
     Field("Y0", "number", "Static axial load factor Y0 (ISO 76).", exclusive_minimum=0,
           maximum=MAX_Y),
@@ -171,10 +185,10 @@ BEARING_FIELDS = (
     Field("rollers", "integer", "Internal geometry: number of rollers Z (with roller_diameter_mm, "
           "roller_length_mm, pitch_diameter_mm and contact_angle_deg; needed by the refined "
           "method, and gives C and C0 from the geometry).", minimum=3, maximum=MAX_ROLLERS),
-    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].", exclusive_minimum=0,
-          maximum=MAX_ROLLER_MM),
+    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].",
+          minimum=MIN_ROLLER_MM, maximum=MAX_ROLLER_MM),
     Field("roller_length_mm", "number", "Effective roller length Lwe [mm] (contact length with "
-          "the raceway, without the chamfers).", exclusive_minimum=0, maximum=MAX_ROLLER_MM),
+          "the raceway, without the chamfers).", minimum=MIN_ROLLER_MM, maximum=MAX_ROLLER_MM),
     Field("pitch_diameter_mm", "number", "Pitch diameter Dpw of the roller set [mm] (diameter of "
           "the circle through the roller centres at mid-length).", minimum=MIN_DIAMETER_MM,
           maximum=MAX_DIAMETER_MM),
@@ -393,7 +407,7 @@ SHAFT_SECTION = Table(
         Field("notch_sensitivity", "number", "Notch sensitivity q (Kf = 1 + q (Kt - 1)); "
               "default 1 (Kf = Kt) unless notch_radius_mm is given.", minimum=0, maximum=1),
         Field("notch_radius_mm", "number", "Notch (fillet) radius [mm]; q is then estimated "
-              "for steel by Neuber's equation.", exclusive_minimum=0,
+              "for steel by Neuber's equation.", minimum=MIN_NOTCH_RADIUS_MM,
               maximum=MAX_NOTCH_RADIUS_MM, example=3),
         Field("carries_torque", "boolean", "Whether the drive torque (tractive force x rolling "
               "radius) passes through this section.", default=True, example=True),
@@ -440,7 +454,7 @@ SHAFT = Table(
               default="goodman", choices=CRITERIA),
         Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
               "(default 1.5, common practice for shafts under well-known loads).",
-              default=1.5, exclusive_minimum=0, maximum=MAX_REQUIRED_SAFETY),
+              default=1.5, minimum=MIN_REQUIRED_SAFETY, maximum=MAX_REQUIRED_SAFETY),
     ),
     tables=(SHAFT_SECTION, SHAFT_PERMISSIBLE),
 )
