@@ -97,10 +97,10 @@ def test_one_log_that_breaks_its_worker_does_not_stop_a_skipping_fleet(tmp_path,
         write_csv_text(tmp_path / name, HEADER + "\n" + "\n".join(ROWS) + "\n")
     real = fleet.process_log
 
-    def exhausted(path, study, options):
+    def exhausted(path, study, options, on_progress=None):
         if str(path).endswith("a.csv"):
             raise MemoryError
-        return real(path, study, options)
+        return real(path, study, options, on_progress)
 
     monkeypatch.setattr(fleet, "process_log", exhausted)
     result = run(tmp_path, "--jobs", "1", "--skip-bad", "--json")

@@ -69,11 +69,14 @@ class CheckResult(Wrapped):
         return result_document(self.value)
 
 
-def check(study_or_path: Study | str | Path, method: str | None = None) -> CheckResult:
-    """Loads, lives, governing life, damage shares, static safety, shaft and verdict."""
+def check(study_or_path: Study | str | Path, method: str | None = None,
+          on_progress=None) -> CheckResult:
+    """Loads, lives, governing life, damage shares, static safety, shaft and verdict.
+
+    ``on_progress(done, total)`` is called as the work advances (hubload.progress)."""
     from hubload.engine import evaluate
 
-    return CheckResult(evaluate(as_study(study_or_path, method)))
+    return CheckResult(evaluate(as_study(study_or_path, method), on_progress=on_progress))
 
 
 @dataclass(frozen=True)
@@ -108,11 +111,19 @@ class ComparisonResult(Wrapped):
 
 
 def compare(studies_or_paths: Sequence[Study | str | Path],
-            method: str | None = None) -> ComparisonResult:
-    """Several files (or studies) side by side, the first as the reference."""
+            method: str | None = None, on_progress=None) -> ComparisonResult:
+    """Several files (or studies) side by side, the first as the reference.
+
+    ``on_progress(done, total)``: files read, then the studies evaluated."""
+    from hubload.progress import in_parts
     from hubload.studies.compare import run_compare
 
-    return ComparisonResult(run_compare([as_study(s, method) for s in studies_or_paths]))
+    reading, evaluating = in_parts(on_progress, 2)
+    studies = []
+    for item in studies_or_paths:
+        studies.append(as_study(item, method))
+        reading(len(studies), len(studies_or_paths))
+    return ComparisonResult(run_compare(studies, evaluating))
 
 
 @dataclass(frozen=True)
@@ -127,12 +138,14 @@ class SettingResult(Wrapped):
 
 
 def setting(study_or_path: Study | str | Path, start_um: float = -60.0,
-            stop_um: float = 120.0, step_um: float = 5.0) -> SettingResult:
-    """Lives against the axial setting from ``start_um`` to ``stop_um`` (refined method)."""
+            stop_um: float = 120.0, step_um: float = 5.0, on_progress=None) -> SettingResult:
+    """Lives against the axial setting from ``start_um`` to ``stop_um`` (refined method);
+    ``on_progress(done, total)`` as the settings' blocks of cases are solved."""
     from hubload.studies.setting import run_setting_sweep, setting_values_um
 
     settings = setting_values_um(start_um, stop_um, step_um)
-    return SettingResult(run_setting_sweep(as_study(study_or_path, "refined"), settings))
+    return SettingResult(run_setting_sweep(as_study(study_or_path, "refined"), settings,
+                                           on_progress))
 
 
 @dataclass(frozen=True)
@@ -154,8 +167,9 @@ class BriefResult(Wrapped):
 
 
 def brief(path: str | Path, required_s0: float | None = None,
-          method: str | None = None) -> BriefResult:
-    """The numbers of a supplier brief: required ratings, loads, open questions."""
+          method: str | None = None, on_progress=None) -> BriefResult:
+    """The numbers of a supplier brief: required ratings, loads, open questions;
+    ``on_progress(done, total)`` after each root search for a required rating."""
     import math
 
     from hubload.casefile.load import read_document
@@ -166,7 +180,8 @@ def brief(path: str | Path, required_s0: float | None = None,
     if not (0 < required_s0 <= MAX_REQUIRED_S0 and math.isfinite(required_s0)):
         raise InputError(f"expected a positive required static safety s0 up to "
                          f"{MAX_REQUIRED_S0:g}, got {required_s0:g}", key_path="required_s0")
-    return BriefResult(requirements_of(load(path, method), required_s0), read_document(path))
+    return BriefResult(requirements_of(load(path, method), required_s0, on_progress),
+                       read_document(path))
 
 
 def cases(path: str | Path):
@@ -197,16 +212,18 @@ def spectrum(log: str | Path, case_file: str | Path, columns: Sequence[str] = ()
              classes: Sequence[str] = (), gaps: str = "error", max_gap_s: float | None = None,
              jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
              on_log_done=None, weights: str | Path | None = None,
-             method: str | None = None) -> LogsResult:
+             method: str | None = None, on_progress=None) -> LogsResult:
     """The direct lives and the classed spectrum of a measured log, or of a folder of logs
     (each log, the fleet combined -- by logged hours, or by the fleet mix of a ``weights``
-    CSV file -- and the ranking); ``case_file`` describes the wheel end."""
+    CSV file -- and the ranking); ``case_file`` describes the wheel end. ``on_log_done(path)``
+    after each log of a folder; ``on_progress(rows done, total or None)`` as a single log is
+    read (hubload.progress)."""
     from hubload.logs.analysis import analyse, log_options
 
     options = log_options(columns, classes, gaps, max_gap_s)
     return LogsResult(analyse(log, case_file, options, jobs=jobs, cluster=cluster,
                                   skip_bad=skip_bad, on_log_done=on_log_done,
-                                  weights=weights, method=method), {})
+                                  weights=weights, method=method, on_rows=on_progress), {})
 
 
 @dataclass(frozen=True)

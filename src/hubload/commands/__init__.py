@@ -58,20 +58,18 @@ def checked_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...]
         check_outputs(path, sheets, force, inputs)
 
 
-def write_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...],
-                as_json: bool) -> None:
-    """Write the --table sheets and name the files written."""
-    if path is None:
-        return
+def write_table(path: str, sheets, force: bool, inputs: tuple[str, ...]) -> list[str]:
+    """Write the --table sheets; the files written, to be named once the work is done."""
     from hubload.report.spreadsheet.workbook import write_sheets
 
-    for written_file in write_sheets(path, sheets, force, inputs):
-        written("Table", written_file, as_json)
+    return list(write_sheets(path, sheets, force, inputs))
 
 
 def check(file: str, as_json: bool = False, report: str | None = None,
           plot: str | None = None, force: bool = False, method: str | None = None,
           show_all: bool = False, table: str | None = None) -> api.CheckResult:
+    from hubload.report.progress import LateProgress
+
     inputs = inputs_of((file,), report, plot, table)
     checked(report, force, (".html", ".htm"), inputs)
     checked(plot, force, PLOT_SUFFIXES, inputs)
@@ -79,32 +77,53 @@ def check(file: str, as_json: bool = False, report: str | None = None,
         from hubload.report.spreadsheet.check import SHEETS
 
         checked_table(table, SHEETS, force, inputs)
-    found = api.check(file, method=method)
-    if table is not None:
-        from hubload.report.spreadsheet.check import check_sheets
+    files = []
+    with LateProgress("reading the file") as progress:  # ends before anything is printed
+        study = api.load(file, method)
+        found = api.check(study, on_progress=progress.phase(computing(study)))
+        if table is not None:
+            from hubload.report.spreadsheet.check import check_sheets
 
-        write_table(table, check_sheets(found.value), force, inputs, as_json)
-    if report is not None:
-        from hubload.casefile.load import read_document
-        from hubload.report.files import write_text
-        from hubload.report.html.check import report_html
+            progress.phase("writing the tables")
+            files += [("Table", name) for name in
+                      write_table(table, check_sheets(found.value), force, inputs)]
+        if report is not None:
+            write_report(found, file, report, force, inputs,
+                         progress.phase("writing the report"))
+            files.append(("Report", report))
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.spectrum import damage_share_figure
 
-        write_text(report, report_html(found.value, read_document(file)), force,
-                   inputs=inputs)
-        written("Report", report, as_json)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.spectrum import damage_share_figure
-
-        save(damage_share_figure(found.value), plot, force, inputs)
-        written("Plot", plot, as_json)
+            progress.phase("drawing the plot")
+            save(damage_share_figure(found.value), plot, force, inputs)
+            files.append(("Plot", plot))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in files:
+        written(kind, path, as_json)
     if as_json:
-        click.echo(document_text(found.to_dict()))
+        click.echo(document)
     else:
         from hubload.report.terminal.check import render_check
 
         render_check(found.value, console(), show_all=show_all)
     return found
+
+
+def computing(study) -> str:
+    """The words of the bar while a study's cases are computed."""
+    count = len(study.cases.names)
+    return f"computing {count:,} case{'s' if count != 1 else ''} ({study.method})"
+
+
+def write_report(found: api.CheckResult, file: str, report: str, force: bool,
+                 inputs: tuple[str, ...], on_progress) -> None:
+    from hubload.casefile.load import read_document
+    from hubload.report.files import write_text
+    from hubload.report.html.check import report_html
+
+    write_text(report, report_html(found.value, read_document(file), on_progress), force,
+               inputs=inputs)
 
 
 def schema() -> None:
@@ -134,21 +153,28 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
         from hubload.report.spreadsheet.studies import SWEEP_SHEETS
 
         checked_table(table, SWEEP_SHEETS, force, inputs)
-    with LateProgress("sweep") as progress:
+    files = []
+    with LateProgress("sweeping") as progress:
         found = api.sweep(file, specs, method=method, on_progress=progress)
-    if table is not None:
-        from hubload.report.spreadsheet.studies import sweep_sheets
+        if table is not None:
+            from hubload.report.spreadsheet.studies import sweep_sheets
 
-        write_table(table, sweep_sheets(found.value), force, inputs, as_json)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+            progress.phase("writing the tables")
+            files += [("Table", name) for name in
+                      write_table(table, sweep_sheets(found.value), force, inputs)]
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
 
-        draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
-        save(draw(found.value), plot, force, inputs)
-        written("Plot", plot, as_json)
+            progress.phase("drawing the plot")
+            draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
+            save(draw(found.value), plot, force, inputs)
+            files.append(("Plot", plot))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in files:
+        written(kind, path, as_json)
     if as_json:
-        click.echo(document_text(found.to_dict()))
+        click.echo(document)
     else:
         from hubload.report.terminal.sweep import render
 
@@ -156,28 +182,44 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     return found
 
 
+def json_text(found, progress) -> str:
+    """The --json document of a result, built under the bar (a large one takes seconds)."""
+    progress.phase("writing JSON")
+    return document_text(found.to_dict())
+
+
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None,
             table: str | None = None) -> api.ComparisonResult:
+    from hubload.report.progress import LateProgress
+
     inputs = inputs_of(tuple(files), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if table is not None:
         from hubload.report.spreadsheet.studies import COMPARE_SHEETS
 
         checked_table(table, COMPARE_SHEETS, force, inputs)
-    found = api.compare(list(files), method=method)
-    if table is not None:
-        from hubload.report.spreadsheet.studies import compare_sheets
+    outputs = []
+    with LateProgress(f"comparing {len(files)} files") as progress:
+        found = api.compare(list(files), method=method, on_progress=progress)
+        if table is not None:
+            from hubload.report.spreadsheet.studies import compare_sheets
 
-        write_table(table, compare_sheets(found.value), force, inputs, as_json)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.spectrum import compare_figure
+            progress.phase("writing the tables")
+            outputs += [("Table", name) for name in
+                        write_table(table, compare_sheets(found.value), force, inputs)]
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.spectrum import compare_figure
 
-        save(compare_figure(found.value), plot, force, inputs)
-        written("Plot", plot, as_json)
+            progress.phase("drawing the plot")
+            save(compare_figure(found.value), plot, force, inputs)
+            outputs.append(("Plot", plot))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in outputs:
+        written(kind, path, as_json)
     if as_json:
-        click.echo(document_text(found.to_dict()))
+        click.echo(document)
     else:
         from hubload.report.terminal.compare import render
 
@@ -187,14 +229,18 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
 
 def brief(file: str, out: str | None = None, force: bool = False,
           required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
+    from hubload.report.progress import LateProgress
+
     checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else (),
             inputs=(file,))
     from hubload.report.terminal.tables import plain
 
-    found = api.brief(file, required_s0=required_s0, method=method)
     html = out is not None and out.lower().endswith((".html", ".htm"))
-    # no escape sequence from the file reaches a terminal
-    text = found.to_html() if html else plain(found.to_markdown())
+    with LateProgress("searching the required ratings") as progress:
+        found = api.brief(file, required_s0=required_s0, method=method, on_progress=progress)
+        progress.phase("writing the brief")
+        # no escape sequence from the file reaches a terminal
+        text = found.to_html() if html else plain(found.to_markdown())
     if out is None:
         click.echo(text, nl=False)
     else:
@@ -219,16 +265,22 @@ def cases(file: str, to: str, force: bool = False):
 
 def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
             plot: str | None = None, force: bool = False) -> api.SettingResult:
-    checked(plot, force, PLOT_SUFFIXES, (file,))
-    found = api.setting(file, start_um, stop_um, step_um)
-    if plot is not None:
-        from hubload.report.plots import save
-        from hubload.report.plots.setting import setting_figure
+    from hubload.report.progress import LateProgress
 
-        save(setting_figure(found.value), plot, force, (file,))
+    checked(plot, force, PLOT_SUFFIXES, (file,))
+    with LateProgress("solving the cases at each setting") as progress:
+        found = api.setting(file, start_um, stop_um, step_um, on_progress=progress)
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.setting import setting_figure
+
+            progress.phase("drawing the plot")
+            save(setting_figure(found.value), plot, force, (file,))
+        document = json_text(found, progress) if as_json else None
+    if plot is not None:
         written("Plot", plot, as_json)
     if as_json:
-        click.echo(document_text(found.to_dict()))
+        click.echo(document)
     else:
         from hubload.report.terminal.setting import render_setting
 

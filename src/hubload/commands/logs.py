@@ -8,7 +8,6 @@ from pathlib import Path
 
 import click
 from rich.console import Console
-from rich.progress import Progress
 
 from hubload import api
 from hubload.errors import InputError
@@ -16,6 +15,7 @@ from hubload.report.json.text import document_text
 from hubload.logs.analysis import COMBINED_NAME, LogRun, log_paths
 from hubload.logs.spectrum import SpectrumResult, classed_temperature_c
 from hubload.report.files import checked_output, write_text
+from hubload.report.progress import LateProgress
 from hubload.report.spectrumfile import spectrum_text
 
 
@@ -53,21 +53,24 @@ def spectrum(request: Request) -> api.LogsResult:
 
         checked_table(request.table, FOLDER_SHEETS if folder else LOG_SHEETS, request.force,
                       inputs)
-    with LogProgress(len(paths)) as advance:
+    description = f"reading {len(paths)} logs" if folder else "reading the log"
+    with LateProgress(description) as progress:
+        finished = iter(range(1, len(paths) + 1))
         found = api.spectrum(request.log, request.case_file, request.columns, request.classes,
                              request.gaps, request.max_gap_s, request.jobs, request.cluster,
-                             request.skip_bad, on_log_done=advance, weights=request.weights,
-                             method=request.method)
+                             request.skip_bad, weights=request.weights, method=request.method,
+                             on_log_done=lambda _path: progress(next(finished), len(paths)),
+                             on_progress=None if folder else progress)
     run = found.value
     files = write_fleet_files(targets, run, request.force, inputs) if folder \
         else write_single(request, run, inputs)
     found = dataclasses.replace(found, files=files)
     if request.table:
-        from hubload.commands import write_table
+        from hubload.commands import write_table, written
         from hubload.report.spreadsheet.spectrum import spectrum_sheets
 
-        write_table(request.table, spectrum_sheets(run), request.force, inputs,
-                    request.as_json)
+        for name in write_table(request.table, spectrum_sheets(run), request.force, inputs):
+            written("Table", name, request.as_json)
     if request.as_json:
         click.echo(document_text(found.to_dict()))
     else:
@@ -78,23 +81,6 @@ def spectrum(request: Request) -> api.LogsResult:
         else:
             render(run.single, Console(), files.get(run.single.summary.name))
     return found
-
-
-class LogProgress:
-    """A progress bar over the logs of a folder, on a terminal only (stderr)."""
-
-    def __init__(self, count: int):
-        console = Console(stderr=True)
-        self.progress = Progress(console=console, transient=True,
-                                 disable=not console.is_terminal or count == 1)
-        self.task = self.progress.add_task("logs", total=count)
-
-    def __enter__(self):
-        self.progress.start()
-        return lambda _path: self.progress.advance(self.task)
-
-    def __exit__(self, *_exc) -> None:
-        self.progress.stop()
 
 
 def write_single(request: Request, run: LogRun, inputs: tuple[str, ...]) -> dict[str, str]:

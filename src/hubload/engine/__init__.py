@@ -25,6 +25,7 @@ from hubload.engine.governing import GoverningLife, govern
 from hubload.engine.pair import BearingResult, MethodLives, mean_speed_rpm, method_lives, \
     per_study_km
 from hubload.engine.setting import OperatingSetting, band_ends, operating_setting
+from hubload.progress import in_parts
 
 if TYPE_CHECKING:  # the shaft, refined and friction modules load only when a study uses them
     from hubload.engine import refined_method, shaftcheck
@@ -93,18 +94,23 @@ class Result:
         return np.min(np.stack(sections), axis=0)
 
 
-def evaluate(study: Study, with_findings: bool = True) -> Result:
+def evaluate(study: Study, with_findings: bool = True, on_progress=None) -> Result:
     """Loads, lives, governing life, damage shares, static safety and shaft of a study.
 
     ``with_findings=False`` skips the warning records (batched studies, and measured
     logs that evaluate millions of samples as cases and report their flags as shares).
+    ``on_progress(done, total)`` is called as the refined method's blocks of cases are
+    solved (hubload.progress); the ISO 281 rule takes milliseconds per 10,000 cases.
     """
     mean_rpm = mean_speed_rpm(study)
     setting = operating_setting(study)
-    refined = solve_refined(study, setting.operating_m) if study.method == "refined" else None
+    solves = in_parts(on_progress, 3 if setting.band else 1)
+    refined = solve_refined(study, setting.operating_m, solves[0]) \
+        if study.method == "refined" else None
     lives = method_lives(study, mean_rpm, refined)
     beside = method_lives(study, mean_rpm) if refined is not None else None
-    band = band_lives(study, mean_rpm) if refined is not None and setting.band else None
+    band = band_lives(study, mean_rpm, solves[1:]) if refined is not None and setting.band \
+        else None
     for checked in filter(None, (lives, beside, *(band or ()))):
         finite.check_lives(study, checked)
     a1 = modified_life.per_study(modified_life.reliability_life_factor(study))
@@ -122,10 +128,10 @@ def evaluate(study: Study, with_findings: bool = True) -> Result:
         else result
 
 
-def solve_refined(study: Study, setting_m):
+def solve_refined(study: Study, setting_m, on_progress=None):
     from hubload.engine import refined_method
 
-    return refined_method.solve(study, setting_m)
+    return refined_method.solve(study, setting_m, on_progress)
 
 
 def shaft_result(study: Study, mean_rpm):
@@ -150,11 +156,13 @@ def friction_of(study: Study, lives: MethodLives):
     return evaluate_friction(study, lives.bearings, lives.modified.viscosity_m2_s)
 
 
-def band_lives(study: Study, mean_rpm) -> tuple[MethodLives, MethodLives]:
-    """The refined lives at the low and the high end of the assembly setting's band."""
+def band_lives(study: Study, mean_rpm,
+               on_progress=(None, None)) -> tuple[MethodLives, MethodLives]:
+    """The refined lives at the low and the high end of the assembly setting's band
+    (``on_progress``: one callback per end)."""
     found = []
-    for end in band_ends(study):
-        solved = solve_refined(end, operating_setting(end).operating_m)
+    for end, report in zip(band_ends(study), on_progress):
+        solved = solve_refined(end, operating_setting(end).operating_m, report)
         found.append(method_lives(end, mean_rpm, solved))
     return tuple(found)
 

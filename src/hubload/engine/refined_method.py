@@ -10,6 +10,7 @@ equivalent load Pref of ISO/TS 16281).
 from __future__ import annotations
 
 import dataclasses
+import math
 from dataclasses import dataclass
 
 import numpy as np
@@ -19,6 +20,7 @@ from hubload.engine.modified_life import per_study
 from hubload.model import iso281
 from hubload.model.refined import ratings
 from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
+from hubload.progress import in_parts
 
 LABELS = ("outboard", "inboard")
 
@@ -108,17 +110,17 @@ def mounted_pair(study: Study, at=lambda value: value):
                          scalar(at(pair.inboard.position_m)))
 
 
-def respond(study: Study, bearings, setting_m, at=lambda value: value):
+def respond(study: Study, bearings, setting_m, at=lambda value: value, on_progress=None):
     from hubload.model.refined.pair import pair_response
 
     cases, wheel = study.cases, study.wheel
     return pair_response(bearings, at(cases.wheel_load_n), at(cases.side_force_n),
                          at(cases.tractive_force_n), at(wheel.offset_m),
                          at(wheel.loaded_radius_m), at(setting_m),
-                         rotating_ring=study.pair.rotating_ring)
+                         rotating_ring=study.pair.rotating_ring, on_progress=on_progress)
 
 
-def pair_responses(study: Study, setting_m):
+def pair_responses(study: Study, setting_m, on_progress=None):
     """The model's response for every point and case; one solve when the geometry is shared.
 
     A batched study whose bearing geometry or positions differ between points is
@@ -126,14 +128,14 @@ def pair_responses(study: Study, setting_m):
     """
     parameters = point_parameters(study)
     if all(uniform(value) for value in parameters):
-        return respond(study, mounted_pair(study), setting_m)
+        return respond(study, mounted_pair(study), setting_m, on_progress=on_progress)
     lead = np.broadcast_shapes(*(np.shape(v)[:-1] for v in parameters if np.ndim(v) > 1))
     points = []
-    for index in np.ndindex(lead):
+    for index, report in zip(np.ndindex(lead), in_parts(on_progress, math.prod(lead))):
         def at(value, index=index):
             array = np.asarray(value)
             return array[index] if array.ndim > 1 else array
-        points.append(respond(study, mounted_pair(study, at), setting_m, at))
+        points.append(respond(study, mounted_pair(study, at), setting_m, at, report))
     return stack_points(points, lead)
 
 
@@ -148,10 +150,11 @@ def stack_points(points: list, lead: tuple[int, ...]):
     return stacked.reshape(lead + stacked.shape[1:])
 
 
-def solve(study: Study, setting_m) -> RefinedPair:
+def solve(study: Study, setting_m, on_progress=None) -> RefinedPair:
     """Refined loads, lives [h] and shaft displacements of the pair, per case, at the axial
-    setting ``setting_m`` [m] of each case (engine.setting)."""
-    response = pair_responses(study, setting_m)
+    setting ``setting_m`` [m] of each case (engine.setting); ``on_progress(done, total)``
+    after each block of cases solved (hubload.progress)."""
+    response = pair_responses(study, setting_m, on_progress)
     geometry = geometry_ratings(study)
     converged = np.asarray(response.converged)
     bearings = {}

@@ -15,7 +15,7 @@ from hubload.casefile.machine import load_machine
 from hubload.domain.study import Study
 from hubload.errors import InputError
 from hubload.logs.columns import parse_column_options
-from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local
+from hubload.logs.fleet import Failure, find_logs, run_cluster, run_local, summarise
 from hubload.logs.pipeline import LogOptions, merge_summaries, parse_classes
 from hubload.logs.spectrum import SpectrumResult, spectrum_result
 from hubload.logs.weights import mixed, read_weights
@@ -90,11 +90,13 @@ def log_paths(log: str | Path) -> list[str]:
 def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
             jobs: int | None = None, cluster: str | None = None, skip_bad: bool = False,
             on_log_done: Callable[[str], None] | None = None,
-            weights: str | Path | None = None, method: str | None = None) -> LogRun:
+            weights: str | Path | None = None, method: str | None = None,
+            on_rows=None) -> LogRun:
     """Read, clean, integrate and class every log; a folder's logs combined as a fleet, by
     their logged hours or, with ``weights`` (a CSV file), by the fleet mix it gives.
     ``method`` ("iso281", "refined") overrides the case file's for the classed spectrum; the
-    samples themselves always go through the ISO 281 rule (logs.pipeline)."""
+    samples themselves always go through the ISO 281 rule (logs.pipeline). ``on_rows(rows
+    done, total or None)`` follows a single log's reading (hubload.progress)."""
     study, machine = load_machine(case_file)
     try:
         study = with_method(study, method)
@@ -104,8 +106,13 @@ def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
     folder = Path(log).is_dir()
     mix = read_weights(weights, paths) if folder and weights is not None else None
     done = on_log_done or (lambda _path: None)
-    found = run_cluster(cluster, paths, study, options, done) if cluster \
-        else run_local(paths, study, options, jobs, done)
+    if cluster:
+        found = run_cluster(cluster, paths, study, options, done)
+    elif folder:
+        found = run_local(paths, study, options, jobs, done)
+    else:
+        found = [summarise(paths[0], study, options, on_rows)]
+        done(paths[0])
     failures = tuple(f for f in found if isinstance(f, Failure))
     if failures and (not folder or not skip_bad):
         if not folder:

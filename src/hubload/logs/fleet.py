@@ -30,13 +30,15 @@ class Failure:
     message: str
 
 
-def summarise(path: str, study: Study, options: LogOptions) -> LogSummary | Failure:
+def summarise(path: str, study: Study, options: LogOptions,
+              on_progress=None) -> LogSummary | Failure:
     """Process one log; bad input comes back as a value (it crosses process borders).
 
     Whatever else stops one log (memory, a bug) comes back as a Failure too, so that one
-    broken log never stops a fleet that skips the bad ones."""
+    broken log never stops a fleet that skips the bad ones. ``on_progress`` (rows done,
+    total) in this process only."""
     try:
-        return process_log(path, study, options)
+        return process_log(path, study, options, on_progress)
     except InputError as error:
         return Failure(path, str(error.located(path)))
     except MemoryError:

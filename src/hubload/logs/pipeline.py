@@ -21,7 +21,7 @@ from hubload.errors import InputError
 from hubload.logs.clean import Cleaner, CleaningReport
 from hubload.logs import shaft
 from hubload.logs.columns import ColumnPlan, plan_columns
-from hubload.logs.reader import headers, read_chunks
+from hubload.logs.reader import counted, headers, read_chunks, row_count
 from hubload.logs.samples import (FLAGS, flag_time_s, operating_points, sample_cases,
                                   sample_temperature_c, with_cases)
 from hubload.model import dwell, iso281
@@ -99,8 +99,10 @@ def parse_classes(options: tuple[str, ...] | list[str]) -> tuple[int, ...]:
     return tuple(classes[key] for key in CLASS_CHANNELS)
 
 
-def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSummary:
-    """Read, clean, integrate and class one log.
+def process_log(path: str | Path, study: Study, options: LogOptions,
+                on_progress=None) -> LogSummary:
+    """Read, clean, integrate and class one log; ``on_progress(rows, total rows or None)``
+    after each chunk (hubload.progress).
 
     Every sample is evaluated by the ISO 281 rule for the pair, whatever the study's method:
     the refined method solves the log's classes instead (logs.spectrum), not millions of rows.
@@ -116,7 +118,10 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     peak = dict.fromkeys(LABELS, 0.0)
     shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
-    for samples in cleaner.run(read_chunks(path, plan.headers)):
+    chunks = read_chunks(path, plan.headers)
+    if on_progress is not None:
+        chunks = counted(chunks, row_count(path), on_progress)
+    for samples in cleaner.run(chunks):
         points = operating_points(samples, plan, study, str(path))
         cases = sample_cases(points, samples.hold_s)
         for flag, seconds in flag_time_s(points, samples.hold_s).items():

@@ -65,6 +65,26 @@ def headers(path: Path) -> list[str]:
     return list(next(csv.reader([header_line(path)], delimiter=delimiter(path)), []))
 
 
+def row_count(path: Path) -> int | None:
+    """The rows of a Parquet log (from its metadata); None for CSV, known only once read."""
+    if log_kind(path) != "parquet":
+        return None
+    try:
+        return pq.ParquetFile(path).metadata.num_rows
+    except (pa.ArrowException, OSError):
+        return None     # read_chunks names the error
+
+
+def counted(chunks: Iterator[RawChunk], total: int | None, on_progress) -> Iterator[RawChunk]:
+    """``chunks`` as they come, calling ``on_progress(rows done, total)`` once each chunk
+    has been used (hubload.progress)."""
+    done = 0
+    for chunk in chunks:
+        yield chunk
+        done += len(chunk)
+        on_progress(done, total)
+
+
 def header_line(path: Path) -> str:
     try:
         with path.open(encoding="utf-8-sig", newline="") as stream:

@@ -62,9 +62,13 @@ def basic_rating_life_mrev(dynamic_rating_n, equivalent_load_n):
 
 
 def life_hours(life_mrev, speed_rpm):
-    """Life [h] = 10^6 L / (60 n) from life [10^6 rev] at speed [r/min] [1, 7.1]; inf at standstill."""
+    """Life [h] = 10^6 L / (60 n) from life [10^6 rev] at speed [r/min] [1, 7.1]; inf at standstill.
+
+    Infinite too where the quotient leaves the float range: a vanishing speed (a logged
+    1e-320 r/min) is standstill for fatigue, not an error.
+    """
     speed = np.asarray(speed_rpm, dtype=float)
-    with np.errstate(divide="ignore", invalid="ignore"):
+    with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
         hours = life_mrev * 1e6 / (60.0 * speed)
     return np.where(speed > 0, hours, np.inf)
 

@@ -13,11 +13,15 @@ from hubload.model.operating import DEFAULT_ADHESION_MU
 from hubload.model.setting import SETTING_BASES
 from hubload.model.tapered_pair import ARRANGEMENTS
 from hubload.schema.fleetformat import FLEET, RELIABILITY
-from hubload.schema.limits import (MAX_AXLE_LOAD_KN, MIN_TRACK_MM, MAX_VEHICLE_MM, MAX_E, MAX_Y,
-    MAX_LATERAL_G, MAX_POSITION_MM, MAX_PRESSURE_BAR, MAX_FLOW_LPM, MAX_DISPLACEMENT_CC,
-    MAX_ROLLER_MM, MAX_ROLLERS, MAX_CROWN_DROP_UM, MAX_SPEED_RPM, MAX_SPEED_KMH,
-    MAX_TARGET_LIFE_H, MAX_VISCOSITY_CST, MAX_WHEEL_FORCE_KN, MIN_CONTACT_ANGLE_DEG,
-    MIN_DIAMETER_MM, MAX_DIAMETER_MM, MIN_RADIUS_MM, MAX_RADIUS_MM, MIN_RATING_KN, MAX_RATING_KN)
+from hubload.schema.limits import (MAX_AXLE_LOAD_KN, MAX_CROWN_DROP_UM, MAX_DIAMETER_MM,
+                                   MAX_DISPLACEMENT_CC, MAX_E, MAX_FLOW_LPM, MAX_LATERAL_G,
+                                   MAX_POSITION_MM, MAX_PRESSURE_BAR, MAX_RADIUS_MM, MAX_RATING_KN,
+                                   MAX_ROLLERS, MAX_ROLLER_MM, MAX_SPEED_KMH, MAX_SPEED_RPM,
+                                   MAX_TARGET_LIFE_H, MAX_VEHICLE_MM, MAX_VISCOSITY_CST,
+                                   MAX_WHEEL_FORCE_KN, MAX_Y, MIN_CONTACT_ANGLE_DEG,
+                                   MIN_DIAMETER_MM, MIN_DISPLACEMENT_CC, MIN_EFFICIENCY,
+                                   MIN_RADIUS_MM, MIN_RATING_KN, MIN_ROLLER_MM, MIN_TARGET_LIFE_H,
+                                   MIN_TRACK_MM, MIN_Y)
 from hubload.schema.shaftformat import SHAFT
 from hubload.schema.spec import Choice, Field, Table
 
@@ -37,7 +41,7 @@ PROJECT = Table(
               example="Yard loader, front left wheel"),
         Field("target_life_h", "number", "Required life of the drive [h]: the bearing pair's "
               "system life and, with a [shaft] table, the shaft's fatigue life.",
-              exclusive_minimum=0, maximum=MAX_TARGET_LIFE_H, example=5000),
+              minimum=MIN_TARGET_LIFE_H, maximum=MAX_TARGET_LIFE_H, example=5000),
         Field("reliability_percent", "number", "Reliability R [%] of the lives and the verdict "
               "(default 90: L10; 99 gives L1 with a1 = 0.25, ISO 281).",
               minimum=RELIABILITY_MIN_PERCENT, maximum=RELIABILITY_MAX_PERCENT, example=90),
@@ -83,15 +87,16 @@ MOTOR = Table(
     required=False,
     fields=(
         Field("displacement_cc", "number", "Displacement per revolution in full mode [cm3].",
-              required=True, exclusive_minimum=0, maximum=MAX_DISPLACEMENT_CC, example=750),
+              required=True, minimum=MIN_DISPLACEMENT_CC, maximum=MAX_DISPLACEMENT_CC,
+              example=750),
         Field("half_mode", "boolean", "The motor can switch to half displacement (two-speed "
               "motor): cases may then give mode = \"half\".", default=False),
         Field("efficiency_volumetric", "number", "Volumetric efficiency (speed = flow x "
               "efficiency / displacement; default 1: ideal).", default=1.0,
-              exclusive_minimum=0, maximum=1, example=0.96),
+              minimum=MIN_EFFICIENCY, maximum=1, example=0.96),
         Field("efficiency_mechanical", "number", "Hydraulic-mechanical efficiency (torque = "
               "pressure x displacement x efficiency / 2 pi; default 1: ideal).", default=1.0,
-              exclusive_minimum=0, maximum=1, example=0.92),
+              minimum=MIN_EFFICIENCY, maximum=1, example=0.92),
         Field("max_pressure_bar", "number", "Rated pressure difference [bar]; cases above it "
               "are flagged.", exclusive_minimum=0, maximum=MAX_PRESSURE_BAR, example=350),
         Field("max_speed_rpm", "number", "Rated speed [r/min]; cases above it are flagged.",
@@ -124,7 +129,7 @@ BEARING_FIELDS = (
           required=True, minimum=MIN_RATING_KN, maximum=MAX_RATING_KN),
     Field("e", "number", "Limit of Fa/Fr for X = 1, Y = 0 (ISO 281).", exclusive_minimum=0,
           maximum=MAX_E),
-    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", exclusive_minimum=0,
+    Field("Y", "number", "Axial load factor Y for Fa/Fr > e (ISO 281).", minimum=MIN_Y,
           maximum=MAX_Y),
     Field("Y0", "number", "Static axial load factor Y0 (ISO 76).", exclusive_minimum=0,
           maximum=MAX_Y),
@@ -141,10 +146,10 @@ BEARING_FIELDS = (
     Field("rollers", "integer", "Internal geometry: number of rollers Z (with roller_diameter_mm, "
           "roller_length_mm, pitch_diameter_mm and contact_angle_deg; needed by the refined "
           "method, and gives C and C0 from the geometry).", minimum=3, maximum=MAX_ROLLERS),
-    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].", exclusive_minimum=0,
-          maximum=MAX_ROLLER_MM),
+    Field("roller_diameter_mm", "number", "Mean roller diameter Dwe [mm].",
+          minimum=MIN_ROLLER_MM, maximum=MAX_ROLLER_MM),
     Field("roller_length_mm", "number", "Effective roller length Lwe [mm] (contact length with "
-          "the raceway, without the chamfers).", exclusive_minimum=0, maximum=MAX_ROLLER_MM),
+          "the raceway, without the chamfers).", minimum=MIN_ROLLER_MM, maximum=MAX_ROLLER_MM),
     Field("pitch_diameter_mm", "number", "Pitch diameter Dpw of the roller set [mm] (diameter of "
           "the circle through the roller centres at mid-length).", minimum=MIN_DIAMETER_MM,
           maximum=MAX_DIAMETER_MM),

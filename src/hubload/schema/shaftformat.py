@@ -5,8 +5,9 @@ from __future__ import annotations
 
 from hubload.model.shaft.strength import SURFACES
 from hubload.model.shaft.stress import CRITERIA
-from hubload.schema.limits import (MAX_KT, MAX_NOTCH_RADIUS_MM, MAX_REQUIRED_SAFETY,
-    MAX_POSITION_MM, MAX_RATING_KN, MIN_STRENGTH_MPA, MAX_STRENGTH_MPA)
+from hubload.schema.limits import (MAX_KT, MAX_NOTCH_RADIUS_MM, MAX_POSITION_MM, MAX_RATING_KN,
+                                   MAX_REQUIRED_SAFETY, MAX_STRENGTH_MPA, MIN_NOTCH_RADIUS_MM,
+                                   MIN_REQUIRED_SAFETY, MIN_STRENGTH_MPA)
 from hubload.schema.spec import Choice, Field, Table
 
 SHAFT_SECTION = Table(
@@ -30,7 +31,7 @@ SHAFT_SECTION = Table(
         Field("notch_sensitivity", "number", "Notch sensitivity q (Kf = 1 + q (Kt - 1)); "
               "default 1 (Kf = Kt) unless notch_radius_mm is given.", minimum=0, maximum=1),
         Field("notch_radius_mm", "number", "Notch (fillet) radius [mm]; q is then estimated "
-              "for steel by Neuber's equation.", exclusive_minimum=0,
+              "for steel by Neuber's equation.", minimum=MIN_NOTCH_RADIUS_MM,
               maximum=MAX_NOTCH_RADIUS_MM, example=3),
         Field("carries_torque", "boolean", "Whether the drive torque (tractive force x rolling "
               "radius) passes through this section.", default=True, example=True),
@@ -77,7 +78,7 @@ SHAFT = Table(
               default="goodman", choices=CRITERIA),
         Field("required_safety", "number", "Smallest acceptable fatigue and yield safety factor "
               "(default 1.5, common practice for shafts under well-known loads).",
-              default=1.5, exclusive_minimum=0, maximum=MAX_REQUIRED_SAFETY),
+              default=1.5, minimum=MIN_REQUIRED_SAFETY, maximum=MAX_REQUIRED_SAFETY),
     ),
     tables=(SHAFT_SECTION, SHAFT_PERMISSIBLE),
 )

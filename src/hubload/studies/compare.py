@@ -22,8 +22,9 @@ class Comparison:
     results: tuple[Result, ...]
 
 
-def evaluate_all(studies: Sequence[Study]) -> list[Result]:
-    """Results in input order; same-shaped studies are batched."""
+def evaluate_all(studies: Sequence[Study], on_progress=None) -> list[Result]:
+    """Results in input order; same-shaped studies are batched. ``on_progress(done,
+    total)`` after each group of studies (hubload.progress)."""
     groups: dict[int, list[int]] = defaultdict(list)
     for index, study in enumerate(studies):
         groups[len(study.cases)].append(index)
@@ -36,9 +37,11 @@ def evaluate_all(studies: Sequence[Study]) -> list[Result]:
             found = [evaluate(study) for study in members]
         for i, result in zip(indices, found):
             results[i] = result
+        if on_progress is not None:
+            on_progress(sum(result is not None for result in results), len(studies))
     return results
 
 
-def run_compare(studies: Sequence[Study]) -> Comparison:
+def run_compare(studies: Sequence[Study], on_progress=None) -> Comparison:
     """The studies side by side, in the order given."""
-    return Comparison(tuple(evaluate_all(studies)))
+    return Comparison(tuple(evaluate_all(studies, on_progress)))

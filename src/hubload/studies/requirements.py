@@ -154,14 +154,23 @@ def geometry_rating_n(result: Result, label: str) -> float | None:
     return None if rated is None else float(rated.dynamic_n)
 
 
+SEARCHES_PER_BEARING = 3      # alone, both bearings, this one for the system
+
+
 def bearing_needs(study: Study, result: Result, label: str, target_h: float | None,
-                  required_s0: float) -> BearingNeeds:
+                  required_s0: float, searched=lambda: None) -> BearingNeeds:
+    """What the bearing ``label`` needs; ``searched()`` after each root search."""
     bearing, found, names = study.pair.bearings()[label], result.bearings[label], \
         study.cases.names
     others = tuple(other for other in result.bearings if other != label)
     unsolved = Solve(None, "none", "no target life given")
-    solve = (lambda labels, whose: solve_factor(study, labels, whose, target_h)) \
-        if target_h is not None else (lambda labels, whose: unsolved)
+
+    def solve(labels, whose):
+        solved = solve_factor(study, labels, whose, target_h) if target_h is not None \
+            else unsolved
+        searched()
+        return solved
+
     max_static = extreme(found.static_equivalent_n, names)
     return BearingNeeds(
         label=label, name=bearing.label,
@@ -179,8 +188,17 @@ def bearing_needs(study: Study, result: Result, label: str, target_h: float | No
             max_static.value, required_s0)))
 
 
-def requirements_of(study: Study, required_s0: float) -> Requirements:
+def requirements_of(study: Study, required_s0: float, on_progress=None) -> Requirements:
+    """The brief's numbers; ``on_progress(done, total)`` after each root search (each
+    evaluates the study a dozen times or more)."""
     result = evaluate(study)
+    searches = [0, SEARCHES_PER_BEARING * len(result.bearings)]
+
+    def searched() -> None:
+        searches[0] += 1
+        if on_progress is not None:
+            on_progress(*searches)
+
     target = study.target_life_h
     cases = study.cases
     moments = requirements.wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
@@ -190,7 +208,7 @@ def requirements_of(study: Study, required_s0: float) -> Requirements:
     names_turning = [name for name, turns in zip(cases.names, turning) if turns]
     return Requirements(
         study=study, result=result, target_h=target, required_s0=required_s0,
-        bearings=tuple(bearing_needs(study, result, label, target, required_s0)
+        bearings=tuple(bearing_needs(study, result, label, target, required_s0, searched)
                        for label in result.bearings),
         moment=extreme(moments, cases.names),
         speed_min=least(cases.speed_rpm[turning], names_turning) if any(turning) else None,

@@ -108,14 +108,15 @@ def best_range(settings_m: np.ndarray, life_h: np.ndarray) -> BestRange | None:
                      float(settings_m[high]))
 
 
-def run_setting_sweep(study: Study, settings_um: np.ndarray) -> SettingSweep:
-    """The study evaluated by the refined method at every setting [um]."""
+def run_setting_sweep(study: Study, settings_um: np.ndarray, on_progress=None) -> SettingSweep:
+    """The study evaluated by the refined method at every setting [um]; ``on_progress(done,
+    total)`` as its blocks of settings and cases are solved (hubload.progress)."""
     refined = with_method(study, "refined")
     settings_m = np.asarray(settings_um, dtype=float) * UM
     if refined.pair.setting is not None:   # the assembly setting varies; each case follows
         batched = at_assembly(refined, settings_m[:, None])
     else:
         batched = replace(refined, pair=replace(refined.pair, axial_setting_m=settings_m[:, None]))
-    result = evaluate(batched, with_findings=False)
+    result = evaluate(batched, with_findings=False, on_progress=on_progress)
     found = SettingSweep(study=refined, settings_m=settings_m, result=result, best=None)
     return replace(found, best=best_range(settings_m, found.refined_life_h))

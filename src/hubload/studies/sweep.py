@@ -250,7 +250,11 @@ def run_sweep(file: str, specs: Sequence[str],
         else:
             batched = build([np.array(column) for column in zip(*grid[start:stop])])
             studies = PointStudies(base, batched, stop - start)
-        chunks.append(SweepChunk(studies, evaluate(batched, with_findings=False)))
+        within = None if on_progress is None else (   # the refined solve's blocks
+            lambda done, blocks, start=start, stop=stop:
+            on_progress(start + (stop - start) * done // blocks, total))
+        chunks.append(SweepChunk(studies, evaluate(batched, with_findings=False,
+                                                   on_progress=within)))
         values += [{path.text: int(v) if path.integer else v for path, v in point.items()}
                    for point in chunk]
         if on_progress is not None:

@@ -53,13 +53,14 @@ class PairResponse:
 def pair_response(bearings: tuple[MountedBearing, MountedBearing], wheel_load_n, side_force_n,
                   tractive_force_n, offset_m, loaded_radius_m, setting_m=0.0,
                   rotating_ring="inner", laminae=contact.LAMINAE,
-                  exponent=contact.LOAD_EXPONENT) -> PairResponse:
+                  exponent=contact.LOAD_EXPONENT, on_progress=None) -> PairResponse:
     """Equilibrium, lamina loads and ISO/TS 16281 reference lives of the pair [1].
 
     Forces [N] as in hubload.model.statics (ground on tyre: wheel load +y, side
     force + inboard, tractive force + forward) at the contact patch (offset [m],
     loaded radius [m] below the axis); ``setting_m`` [m] axial setting (> 0
     end play, < 0 preload). Geometry must be scalar; loads and setting broadcast.
+    ``on_progress(done, total)`` is called after each block of cases (hubload.progress).
     """
     lamina_set = layout.build_laminae(bearings, laminae, exponent)
     arrays = np.broadcast_arrays(*(np.asarray(v, dtype=float) for v in (
@@ -68,9 +69,13 @@ def pair_response(bearings: tuple[MountedBearing, MountedBearing], wheel_load_n,
     wheel, side, tractive, offset, radius, setting = (a.reshape(-1) for a in arrays)
     external = layout.external_load_vector(wheel, side, tractive, offset, radius,
                                            lamina_set.mid_x_m, lamina_set.half_spread_m)
-    blocks = [block_response(bearings, lamina_set, external[:, cases], setting[cases],
-                             rotating_ring)
-              for cases in case_blocks(setting.size)]
+    slices = case_blocks(setting.size)
+    blocks = []
+    for cases in slices:
+        blocks.append(block_response(bearings, lamina_set, external[:, cases], setting[cases],
+                                     rotating_ring))
+        if on_progress is not None:
+            on_progress(len(blocks), len(slices))
     z = np.concatenate([block[0] for block in blocks], axis=1)
     per_bearing = tuple(BearingResponse(**{
         name: np.concatenate([getattr(block[1][index], name) for block in blocks]).reshape(shape)

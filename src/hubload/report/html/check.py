@@ -140,10 +140,17 @@ def escape_input(value) -> str:
     return ", ".join(map(str, value)) if isinstance(value, list) else str(value)
 
 
-def report_html(result: Result, inputs: dict) -> str:
-    """The whole page of a check result; ``inputs`` is the file's parsed TOML."""
+def report_html(result: Result, inputs: dict, on_progress=None) -> str:
+    """The whole page of a check result; ``inputs`` is the file's parsed TOML.
+
+    ``on_progress(done, total)`` after each section (the charts and the cases of a large
+    spectrum take seconds)."""
     study = result.study
-    return page(study.title, f"{study.source} · method {result.method}", [
-        verdict_section(result), flags_section(result), results_section(result),
-        charts_section(result), cases_section(result), shaft_section(result),
-        inputs_section(inputs)])
+    builders = [verdict_section, flags_section, results_section, charts_section,
+                cases_section, shaft_section, lambda _result: inputs_section(inputs)]
+    sections = []
+    for build in builders:
+        sections.append(build(result))
+        if on_progress is not None:
+            on_progress(len(sections), len(builders))
+    return page(study.title, f"{study.source} · method {result.method}", sections)
