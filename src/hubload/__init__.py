@@ -1,14 +1,14 @@
 """hubload: bearing and shaft life of hydraulic wheel-hub motors.
 
 The Python API (``hubload.check``, ``load``, ``sweep``, ``compare``, ``setting``,
-``brief``, ``spectrum``) is imported on first use, so that the command line starts fast.
+``brief``, ``spectrum``, ``machine``) is imported on first use, so that the command line starts fast.
 Layers: ``model`` (pure physics) <- ``domain`` (typed study) <- ``casefile``
 (files -> study) and ``engine`` (study -> typed results) <- ``studies`` <-
 ``report`` (terminal, JSON, HTML, plots) <- ``commands`` <- ``cli``.
 """
 
 __version__ = "0.1.0"
-__all__ = ["load", "check", "sweep", "compare", "setting", "brief", "spectrum"]
+__all__ = ["load", "check", "sweep", "compare", "setting", "brief", "spectrum", "machine"]
 
 
 def __getattr__(name: str):

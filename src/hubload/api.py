@@ -77,6 +77,32 @@ def check(study_or_path: Study | str | Path, method: str | None = None) -> Check
 
 
 @dataclass(frozen=True)
+class MachineResult(Wrapped):
+    """The result of a machine: every wheel end's result, the machine's lives and verdict."""
+
+    value: object      # hubload.engine.machine.MachineResult
+
+    @property
+    def governing_life(self):
+        return self.value.governing
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload machine --json``."""
+        from hubload.report.json.machine import machine_document
+
+        return machine_document(self.value)
+
+
+def machine(path: str | Path) -> MachineResult:
+    """A machine file's wheel ends (spectra derived from its operations), its life as a
+    series system of every bearing, the weakest wheel end and the verdict."""
+    from hubload.casefile.machinefile import load_machine_study
+    from hubload.engine.machine import evaluate_machine
+
+    return MachineResult(evaluate_machine(load_machine_study(path)))
+
+
+@dataclass(frozen=True)
 class SweepResult(Wrapped):
     value: object      # hubload.studies.sweep.Sweep
 

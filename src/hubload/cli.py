@@ -136,6 +136,23 @@ def check(file, as_json, report, plot, force, method, show_all):
 
 
 @main.command()
+@click.argument("file", type=click.Path(dir_okay=False))
+@json_option
+@click.option("--cases", "show_cases", is_flag=True,
+              help="Also list each wheel end's derived spectrum.")
+@click.option("--write-wheel-files", metavar="DIR", type=click.Path(file_okay=False),
+              help="Write each wheel end as a load-case file into DIR (check, sweep, compare, "
+                   "setting and brief run on them).")
+@click.option("--force", is_flag=True, help="Overwrite existing wheel end files.")
+@reports_input_errors
+def machine(file, as_json, show_cases, write_wheel_files, force):
+    """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
+    from hubload.commands.machine import machine as run_machine
+    run_machine(file, as_json=as_json, show_cases=show_cases,
+                write_wheel_files=write_wheel_files, force=force)
+
+
+@main.command()
 def schema():
     """Print the load-case file format as a JSON Schema (for editors)."""
     from hubload import commands
