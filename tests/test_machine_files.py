@@ -1,0 +1,288 @@
+"""Machine files end to end: operations -> wheel ends -> lives (hubload machine).
+
+The model's own free-body, mirror and load-transfer checks are in tests/model/test_machine.py;
+these check what the file, the conversion and the command add to them.
+"""
+
+import json
+import math
+import shutil
+import tempfile
+from pathlib import Path
+
+import pytest
+import sympy
+import tomli_w
+from click.testing import CliRunner
+from hypothesis import HealthCheck, given, settings
+from hypothesis import strategies as st
+
+import hubload
+from hubload.cli import main
+
+ROOT = Path(__file__).parent.parent
+MACHINES = ROOT / "load_cases" / "machines"
+WHEEL_END = MACHINES / "yard_loader_wheel_end.toml"
+G = 9.80665  # standard gravity, 3rd CGPM 1901
+
+
+def machine_document(operations, **machine):
+    document = {
+        "project": {"title": "test machine", "target_life_h": 5000},
+        "machine": {"mass_kg": 4000.0, "cog_from_front_axle_mm": 1100.0, "cog_height_mm": 900.0,
+                    "wheelbase_mm": 2400.0, "rolling_resistance": 0.0},
+        "payload": {"cog_from_front_axle_mm": -800.0, "cog_height_mm": 1000.0},
+        "axle": [{"name": "front axle", "position": "front", "track_mm": 1500.0, "driven": True,
+                  "wheel_end": "wheel_end.toml"},
+                 {"name": "rear axle", "position": "rear", "track_mm": 1500.0, "driven": True,
+                  "wheel_end": "wheel_end.toml"}],
+        "operation": operations,
+    }
+    for key, value in machine.items():
+        table, name = key.split("__")
+        if table == "axle":
+            document["axle"][int(name[-1])][name[:-1]] = value
+        else:
+            document[table][name] = value
+    return document
+
+
+def write_machine(folder: Path, document) -> Path:
+    shutil.copy(WHEEL_END, folder / "wheel_end.toml")
+    path = folder / "machine.toml"
+    path.write_text(tomli_w.dumps(document))
+    return path
+
+
+def run(*args):
+    return CliRunner().invoke(main, [str(a) for a in args])
+
+
+def machine_json(folder: Path, document) -> dict:
+    result = run("machine", write_machine(folder, document), "--json")
+    assert result.exit_code == 0, result.output
+    return json.loads(result.output)
+
+
+def wheel(document: dict, name: str) -> dict:
+    return next(w for w in document["wheel_ends"] if w["name"] == name)
+
+
+def operation(name="op", time_percent=100.0, speed_kmh=6.0, **keys):
+    return {"name": name, "time_percent": time_percent, "speed_kmh": speed_kmh, **keys}
+
+
+# -- the free body of the machine, from the file's numbers -------------------------------------
+
+def test_axle_loads_balance_forces_and_pitch_moments_about_the_cog(tmp_path):
+    # Rigid body in the machine's plane of symmetry, solved by sympy (Meriam & Kraige, Statics:
+    # equilibrium; composite centre of mass): contact points s ahead of and L - s behind the
+    # combined CoG, h below it; gravity m g (-sin theta, -cos theta) in machine axes with
+    # tan theta = grade; the ground's forces along X add to m g (a_x + sin theta) (Newton).
+    op = operation(payload_kg=1500.0, accel_g=-0.2, grade_percent=-10.0, speed_kmh=8.0)
+    found = machine_json(tmp_path, machine_document([op], machine__rolling_resistance=0.03))
+    mass = 4000 + 1500
+    s = sympy.Rational(4000 * 1100 - 1500 * 800, mass) / 1000
+    h = sympy.Rational(4000 * 900 + 1500 * 1000, mass) / 1000
+    wheelbase = sympy.Rational(24, 10)
+    theta = sympy.atan(sympy.Rational(-10, 100))
+    front, rear, along = sympy.symbols("front rear along")
+    weight = mass * sympy.nsimplify(G)
+    solution = sympy.solve([
+        sympy.Eq(front + rear, weight * sympy.cos(theta)),
+        sympy.Eq(along, weight * (sympy.Rational(-2, 10) + sympy.sin(theta))),
+        # moments about the CoG (y component of r x F): z F_x - x F_z with z = -h
+        sympy.Eq(-h * along - s * front + (wheelbase - s) * rear, 0)], [front, rear, along])
+    loads = {name: wheel(found, name)["cases"][0]["wheel_load_kN"] * 1000
+             for name in ("front left", "front right", "rear left", "rear right")}
+    assert loads["front left"] + loads["front right"] == pytest.approx(
+        float(solution[front]), rel=1e-9)
+    assert loads["rear left"] + loads["rear right"] == pytest.approx(
+        float(solution[rear]), rel=1e-9)
+
+
+def test_wheel_loads_add_to_the_weight_normal_to_the_ground_on_grade_and_cross_slope(tmp_path):
+    # Normal component of gravity m g cos(theta) cos(phi) for grade theta and roll angle phi
+    # (ISO 8855 yaw-pitch-roll angles, from memory; rotation matrices of any dynamics text).
+    op = operation(payload_kg=800.0, grade_percent=12.0, cross_slope_percent=-9.0,
+                   lateral_accel_g=0.05, mirror=False)
+    found = machine_json(tmp_path, machine_document([op]))
+    total = sum(w["cases"][0]["wheel_load_kN"] for w in found["wheel_ends"]) * 1000
+    expected = 4800 * G * math.cos(math.atan(0.12)) * math.cos(math.atan(-0.09))
+    assert total == pytest.approx(expected, rel=1e-12)
+
+
+def test_static_axle_loads_by_the_lever_rule(tmp_path):
+    # Lever rule (Meriam & Kraige, Statics; Gillespie 1992, ch. 2). Hand example: 4000 kg at
+    # 1.10 m behind the front axle of a 2.40 m wheelbase and 1500 kg 0.80 m ahead of it:
+    # front = g (4000 * 1.30 + 1500 * 3.20) / 2.40 = 40,861.0 N, rear = g (4000 * 1.10 -
+    # 1500 * 0.80) / 2.40 = 13,075.5 N; each wheel half of its axle's load.
+    found = machine_json(tmp_path, machine_document([operation(payload_kg=1500.0,
+                                                               speed_kmh=0.0)]))
+    assert wheel(found, "front left")["cases"][0]["wheel_load_kN"] == pytest.approx(
+        40.8610 / 2, abs=1e-4)
+    assert wheel(found, "rear right")["cases"][0]["wheel_load_kN"] == pytest.approx(
+        13.0755 / 2, abs=1e-4)
+
+
+# -- symmetry --------------------------------------------------------------------------------
+
+def test_a_symmetric_machine_in_straight_travel_gives_left_and_right_the_same_lives(tmp_path):
+    # Mirror symmetry of the free body (Meriam & Kraige, Statics): nothing pushes sideways.
+    ops = [operation("travel", 60.0, 10.0), operation("climb", 25.0, 4.0, grade_percent=15.0,
+                                                        payload_kg=1000.0),
+           operation("brake", 15.0, 8.0, accel_g=-0.3)]
+    found = machine_json(tmp_path, machine_document(ops, machine__rolling_resistance=0.04))
+    for axle in ("front", "rear"):
+        left, right = wheel(found, f"{axle} left"), wheel(found, f"{axle} right")
+        assert left["cases"] == right["cases"]
+        assert left["governing_life"]["life_h"] == pytest.approx(
+            right["governing_life"]["life_h"], rel=1e-12)
+        assert all(case["side_force_kN"] == 0 for case in left["cases"])
+
+
+def test_a_left_turn_equals_a_right_turn_with_the_wheels_swapped(tmp_path):
+    # Mirror symmetry of a machine symmetric left to right (Meriam & Kraige, Statics).
+    def turn(sign):
+        folder = tmp_path / ("left" if sign > 0 else "right")
+        folder.mkdir()
+        return machine_json(folder, machine_document([operation(
+            lateral_accel_g=0.18 * sign, cross_slope_percent=5.0 * sign, mirror=False)]))
+    left_turn, right_turn = turn(1), turn(-1)
+    for axle in ("front", "rear"):
+        for side, other in (("left", "right"), ("right", "left")):
+            a, b = wheel(left_turn, f"{axle} {side}"), wheel(right_turn, f"{axle} {other}")
+            for key in ("wheel_load_kN", "side_force_kN", "tractive_force_kN", "speed_rpm"):
+                assert a["cases"][0][key] == pytest.approx(b["cases"][0][key], rel=1e-12,
+                                                           abs=1e-12)
+            assert a["governing_life"]["life_h"] == pytest.approx(
+                b["governing_life"]["life_h"], rel=1e-9)
+    assert left_turn["machine"]["l10_h"] == pytest.approx(right_turn["machine"]["l10_h"],
+                                                          rel=1e-9)
+
+
+def test_an_oscillating_axle_shows_no_lateral_load_transfer(tmp_path):
+    # A pendulum axle with its pivot at ground level takes no roll moment (statics of the
+    # pivoted axle; Milliken & Milliken 1995, ch. 18, from memory): its wheels stay equally
+    # loaded in a turn, and the other axle moves F_y h / t between its wheels.
+    op = operation(lateral_accel_g=0.2, mirror=False)
+    found = machine_json(tmp_path, machine_document([op], axle__oscillating1=True))
+    rear = [wheel(found, f"rear {side}")["cases"][0]["wheel_load_kN"] for side in ("left",
+                                                                                  "right")]
+    assert rear[0] == pytest.approx(rear[1], rel=1e-12)
+    front = [wheel(found, f"front {side}")["cases"][0]["wheel_load_kN"] for side in ("left",
+                                                                                    "right")]
+    assert (front[1] - front[0]) / 2 == pytest.approx(0.2 * 4000 * G * 0.9 / 1.5 / 1000,
+                                                      rel=1e-12)
+
+
+def test_a_mirrored_operation_spends_half_its_time_each_way(tmp_path):
+    # The duty of a machine that turns both ways (issue contract: mirror = true by default).
+    found = machine_json(tmp_path, machine_document([operation(lateral_accel_g=0.15)]))
+    cases = wheel(found, "front left")["cases"]
+    assert [c["time_fraction"] for c in cases] == [0.5, 0.5]
+    assert cases[0]["side_force_kN"] < 0 < cases[1]["side_force_kN"]   # inside, then outside
+
+
+# -- properties --------------------------------------------------------------------------------
+
+operation_values = st.fixed_dictionaries({
+    "payload_kg": st.floats(0, 1500), "speed_kmh": st.floats(3, 15),
+    "accel_g": st.floats(-0.15, 0.15), "lateral_accel_g": st.floats(-0.12, 0.12),
+    "grade_percent": st.floats(-10, 10), "cross_slope_percent": st.floats(-8, 8),
+})
+
+
+def lives(document):
+    with tempfile.TemporaryDirectory() as folder:
+        found = hubload.machine(write_machine(Path(folder), document)).to_dict()
+    return ([w["governing_life"]["life_h"] for w in found["wheel_ends"]],
+            found["machine"], found["governing_life"]["life_h"])
+
+
+@settings(max_examples=15, deadline=None, suppress_health_check=[HealthCheck.too_slow])
+@given(values=st.lists(operation_values, min_size=2, max_size=3),
+       split=st.integers(0, 2), fraction=st.floats(0.1, 0.9))
+def test_splitting_an_operation_into_two_copies_leaves_every_life_unchanged(values, split,
+                                                                           fraction):
+    # Palmgren-Miner linear damage (Palmgren 1924; Miner 1945): damage adds over time, so an
+    # operation spent as two copies with the same total time changes no life.
+    split %= len(values)
+    ops = [operation(f"op {i}", 100.0 / len(values), **v) for i, v in enumerate(values)]
+    copies = [dict(ops[split], name="first copy", time_percent=ops[split]["time_percent"]
+                   * fraction),
+              dict(ops[split], name="second copy", time_percent=ops[split]["time_percent"]
+                   * (1 - fraction))]
+    halves = ops[:split] + copies + ops[split + 1:]
+    whole, parts = lives(machine_document(ops)), lives(machine_document(halves))
+    assert parts[0] == pytest.approx(whole[0], rel=1e-9)
+    assert parts[1]["l10_h"] == pytest.approx(whole[1]["l10_h"], rel=1e-9)
+    assert parts[1]["l10m_h"] == pytest.approx(whole[1]["l10m_h"], rel=1e-9)
+    assert parts[2] == pytest.approx(whole[2], rel=1e-9)
+
+
+@settings(max_examples=15, deadline=None, suppress_health_check=[HealthCheck.too_slow])
+@given(height=st.floats(500, 1200), extra=st.floats(50, 400),
+       accel=st.floats(0.05, 0.2), speed=st.floats(4, 12))
+def test_more_cog_height_never_lengthens_the_outside_wheels_life_in_a_turn(height, extra,
+                                                                          accel, speed):
+    # Lateral load transfer grows with the CoG height (Gillespie 1992, ch. 9): the outside
+    # wheel of a steady level left turn (the right one, rigid axles) carries more load and
+    # more side force, and its bearings never last longer for it.
+    def outside_lives(cog_height_mm):
+        document = machine_document([operation(speed_kmh=speed, lateral_accel_g=accel,
+                                               mirror=False)],
+                                    machine__cog_height_mm=cog_height_mm)
+        found, _, _ = lives(document)
+        return found[1], found[3]   # front right, rear right
+    low, high = outside_lives(height), outside_lives(height + extra)
+    assert high[0] <= low[0] * (1 + 1e-12)
+    assert high[1] <= low[1] * (1 + 1e-12)
+
+
+# -- the wheel files and the command ------------------------------------------------------------
+
+def test_written_wheel_files_give_the_same_lives_through_check(tmp_path):
+    # The contract of --write-wheel-files: an ordinary load-case file per wheel end.
+    machine = MACHINES / "yard_loader_machine.toml"
+    out = tmp_path / "wheels"
+    result = run("machine", machine, "--json", "--write-wheel-files", out)
+    assert result.exit_code == 0, result.output
+    found = json.loads(result.stdout)
+    for entry in found["wheel_ends"]:
+        checked = run("check", out / (entry["name"].replace(" ", "_") + ".toml"), "--json")
+        assert checked.exit_code == 0, checked.output
+        document = json.loads(checked.output)
+        assert document["governing_life"]["life_h"] == entry["governing_life"]["life_h"]
+        assert document["system"]["l10_h"] == entry["system"]["l10_h"]
+        for label in ("outboard", "inboard"):
+            assert document["bearings"][label]["s0"] == entry["bearings"][label]["s0"]
+    again = run("machine", machine, "--write-wheel-files", out)
+    assert again.exit_code == 2 and "--force" in again.output
+    assert run("machine", machine, "--write-wheel-files", out, "--force").exit_code == 0
+
+
+def test_the_bundled_machine_reports_every_wheel_end_within_80_columns():
+    result = CliRunner().invoke(main, ["machine", str(MACHINES / "yard_loader_machine.toml"),
+                                       "--cases"], terminal_width=80, env={"COLUMNS": "80"})
+    assert result.exit_code == 0, result.output
+    assert max(len(line) for line in result.output.splitlines()) <= 80
+    for name in ("front left", "front right", "rear left", "rear right", "Weakest wheel end",
+                 "Caution"):
+        assert name in result.output
+
+
+def test_json_carries_the_contract_keys():
+    # docs/json-output.md, hubload machine.
+    found = hubload.machine(MACHINES / "yard_loader_machine.toml").to_dict()
+    entry = found["wheel_ends"][0]
+    assert {"name", "axle", "side", "governing_life", "system", "bearings", "cases"} <= set(entry)
+    assert set(entry["system"]) >= {"l10_h", "l10m_h"}
+    assert set(entry["bearings"]["outboard"]) >= {"l10_h", "l10m_h", "s0"}
+    assert set(entry["cases"][0]) >= {"name", "time_fraction", "wheel_load_kN", "side_force_kN",
+                                      "tractive_force_kN", "speed_rpm"}
+    assert set(found["machine"]) >= {"l10_h", "l10m_h"}
+    assert set(found["verdict"]) == {"life", "life_h", "target_h", "passed", "basis"}
+    assert {"symbol", "life_h", "basis"} <= set(found["governing_life"])
+    lives_h = [w["governing_life"]["life_h"] for w in found["wheel_ends"]]
+    assert found["governing_life"]["life_h"] < min(lives_h)   # a series system
