@@ -56,7 +56,8 @@ def test_check_prints_every_life_and_name_in_full(width, scenario, options):
     ("compare", *SCENARIOS),
     ("setting", YARD, "--from", "-40", "--to", "120", "--step", "20"),
     ("brief", YARD),
-], ids=["sweep", "linked", "grid", "compare", "setting", "brief"])
+    ("machine", ROOT / "load_cases" / "machines" / "yard_loader_machine.toml", "--cases"),
+], ids=["sweep", "linked", "grid", "compare", "setting", "brief", "machine"])
 def test_study_commands_fit_the_terminal(width, args):
     text = run(width, *args)
     assert ELLIPSIS not in text

@@ -111,13 +111,13 @@ def verdict_lines(machine: MachineResult) -> list[Text]:
 
 
 def warning_lines(machine: MachineResult) -> list[Text]:
-    lines = []
+    """Each wheel end's warnings; one line for the wheel ends that share its words."""
+    wheels_of: dict[str, list[str]] = {}
     for wheel in machine.wheel_ends:
-        names = wheel.result.study.cases.names
-        for line in summary_lines(wheel.result.findings, names):
-            lines.append(Text.assemble(("Warning", "yellow"),
-                                       f" ({wheel.name}): {plain(line)}"))
-    return lines
+        for line in summary_lines(wheel.result.findings, wheel.result.study.cases.names):
+            wheels_of.setdefault(line, []).append(wheel.name)
+    return [Text.assemble(("Warning", "yellow"), f" ({', '.join(wheels)}): {plain(line)}")
+            for line, wheels in wheels_of.items()]
 
 
 def render_machine(machine: MachineResult, console: Console, show_cases: bool = False) -> None:
