@@ -10,6 +10,7 @@ from __future__ import annotations
 from rich.console import Console
 from rich.text import Text
 
+from hubload.engine.governing import symbol_of
 from hubload.engine.machine import MachineResult, WheelEndResult
 from hubload.report.cautions import CAUTIONS
 from hubload.report.columns import Column, TableSpec
@@ -74,9 +75,12 @@ def cases_table(wheel: WheelEndResult) -> TableSpec:
 
 def machine_lines(machine: MachineResult) -> list[Text]:
     governing = machine.governing
-    l10m = "" if machine.l10m_h is None else f", L10m = {hours_with_unit(machine.l10m_h)}"
+    method = machine.wheel_ends[0].result.method
+    basic = symbol_of(method, 90.0, False)
+    modified = symbol_of(method, float(machine.study.reliability_percent), True)
+    l10m = "" if machine.l10m_h is None else f", {modified} = {hours_with_unit(machine.l10m_h)}"
     weakest = machine.weakest
-    lines = [Text(f"Machine: L10 = {hours_with_unit(machine.l10_h)}{l10m}; governing "
+    lines = [Text(f"Machine: {basic} = {hours_with_unit(machine.l10_h)}{l10m}; governing "
                   f"{governing.symbol} = {hours_with_unit(governing.life_h)} "
                   f"({hours(governing.life_km)} km) as a {governing.basis}.")]
     lines.append(Text(f"Weakest wheel end: {weakest.name} ({governing.symbol} = "
