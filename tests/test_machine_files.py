@@ -286,3 +286,16 @@ def test_json_carries_the_contract_keys():
     assert {"symbol", "life_h", "basis"} <= set(found["governing_life"])
     lives_h = [w["governing_life"]["life_h"] for w in found["wheel_ends"]]
     assert found["governing_life"]["life_h"] < min(lives_h)   # a series system
+
+
+def test_the_html_report_of_a_machine_names_every_wheel_end_and_the_verdict(tmp_path):
+    # Output files are never overwritten without --force (DEVELOPERS.md, common practice).
+    machine = MACHINES / "yard_loader_machine.toml"
+    report = tmp_path / "machine.html"
+    assert run("machine", machine, "--report", report).exit_code == 0
+    text = report.read_text()
+    for name in ("front left", "front right", "rear left", "rear right", "Weakest wheel end",
+                 "Caution", 'data-key="verdict.life_h"'):
+        assert name in text
+    again = run("machine", machine, "--report", report)
+    assert again.exit_code == 2 and "--force" in again.output

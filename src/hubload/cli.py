@@ -143,13 +143,15 @@ def check(file, as_json, report, plot, force, method, show_all):
 @click.option("--write-wheel-files", metavar="DIR", type=click.Path(file_okay=False),
               help="Write each wheel end as a load-case file into DIR (check, sweep, compare, "
                    "setting and brief run on them).")
-@click.option("--force", is_flag=True, help="Overwrite existing wheel end files.")
+@click.option("--report", type=click.Path(dir_okay=False),
+              help="Also write a self-contained HTML report of the machine.")
+@click.option("--force", is_flag=True, help="Overwrite existing wheel end files and --report.")
 @reports_input_errors
-def machine(file, as_json, show_cases, write_wheel_files, force):
+def machine(file, as_json, show_cases, write_wheel_files, report, force):
     """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
     from hubload.commands.machine import machine as run_machine
     run_machine(file, as_json=as_json, show_cases=show_cases,
-                write_wheel_files=write_wheel_files, force=force)
+                write_wheel_files=write_wheel_files, force=force, report=report)
 
 
 @main.command()

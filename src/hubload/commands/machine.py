@@ -29,8 +29,20 @@ def wheel_file_name(wheel: str) -> str:
 
 
 def machine(file: str, as_json: bool = False, show_cases: bool = False,
-            write_wheel_files: str | None = None, force: bool = False) -> api.MachineResult:
+            write_wheel_files: str | None = None, force: bool = False,
+            report: str | None = None) -> api.MachineResult:
+    from hubload.commands import checked, written
+
+    checked(report, force, (".html", ".htm"), (file,))
     found = api.machine(file)
+    if report is not None:
+        from hubload.casefile.load import read_document
+        from hubload.report.files import write_text
+        from hubload.report.html.machine import machine_html
+
+        write_text(report, machine_html(found.value, read_document(file)), force,
+                   inputs=(file, *{w.wheel_end_file for w in found.value.study.wheel_ends}))
+        written("Report", report, as_json)
     if write_wheel_files is not None:
         write_files(found.value, file, Path(write_wheel_files), force, as_json)
     if as_json:
