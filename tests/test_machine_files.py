@@ -8,6 +8,7 @@ import json
 import math
 import shutil
 import tempfile
+import tomllib
 from pathlib import Path
 
 import pytest
@@ -299,3 +300,30 @@ def test_the_html_report_of_a_machine_names_every_wheel_end_and_the_verdict(tmp_
         assert name in text
     again = run("machine", machine, "--report", report)
     assert again.exit_code == 2 and "--force" in again.output
+
+
+def test_each_rigid_axle_reproduces_the_per_wheel_vehicle_lateral_transfer(tmp_path):
+    # The load-case file's [vehicle] rule for one wheel, W = A / 2 + A a_y h / t and S = W a_y
+    # (Gillespie 1992, ch. 9), is what a rigid axle of a machine on level ground gives its
+    # wheels when nothing accelerates along the travel: the outside wheel of a left turn (front
+    # right) with the axle's load, track and the CoG height must get the same forces and life.
+    accel = 0.17
+    found = machine_json(tmp_path, machine_document([operation(lateral_accel_g=accel,
+                                                               mirror=False)]))
+    axle_kN = sum(wheel(found, f"front {side}")["cases"][0]["wheel_load_kN"]
+                  for side in ("left", "right"))
+    outside = wheel(found, "front right")
+    single = dict(tomllib.loads(WHEEL_END.read_text()),
+                  vehicle={"axle_load_kN": axle_kN, "track_mm": 1500.0, "cog_height_mm": 900.0},
+                  case=[{"name": "left turn, outside wheel", "time_percent": 100.0,
+                         "lateral_accel_g": accel,
+                         "speed_rpm": outside["cases"][0]["speed_rpm"]}])
+    path = tmp_path / "single.toml"
+    path.write_text(tomli_w.dumps(single))
+    checked = run("check", path, "--json")
+    assert checked.exit_code == 0, checked.output
+    case = json.loads(checked.output)["cases"][0]
+    assert case["wheel_load_kN"] == pytest.approx(outside["cases"][0]["wheel_load_kN"], rel=1e-12)
+    assert case["side_force_kN"] == pytest.approx(outside["cases"][0]["side_force_kN"], rel=1e-12)
+    assert json.loads(checked.output)["governing_life"]["life_h"] == pytest.approx(
+        outside["governing_life"]["life_h"], rel=1e-9)
