@@ -327,3 +327,28 @@ def test_each_rigid_axle_reproduces_the_per_wheel_vehicle_lateral_transfer(tmp_p
     assert case["side_force_kN"] == pytest.approx(outside["cases"][0]["side_force_kN"], rel=1e-12)
     assert json.loads(checked.output)["governing_life"]["life_h"] == pytest.approx(
         outside["governing_life"]["life_h"], rel=1e-9)
+
+
+def test_docs_machine_file_format_page_is_generated_from_the_format():
+    from hubload.schema.export import MACHINE_INTRO, reference_markdown
+    from hubload.schema.machineformat import MACHINE_FORMAT
+
+    expected = reference_markdown(MACHINE_FORMAT, MACHINE_INTRO)
+    assert (ROOT / "docs" / "machine-file-format.md").read_text() == expected, (
+        "regenerate: PYTHONPATH=src python -m hubload.schema.export machine > "
+        "docs/machine-file-format.md")
+
+
+def test_the_bundled_machine_validates_against_the_printed_json_schema():
+    # jsonschema (independent validator of the JSON Schema standard) checks our export.
+    import jsonschema
+
+    printed = run("schema", "--machine")
+    assert printed.exit_code == 0
+    schema = json.loads(printed.output)
+    jsonschema.Draft202012Validator.check_schema(schema)
+    jsonschema.validate(tomllib.loads((MACHINES / "yard_loader_machine.toml").read_text()),
+                        schema)
+    with pytest.raises(jsonschema.ValidationError):
+        jsonschema.validate({**tomllib.loads((MACHINES / "yard_loader_machine.toml")
+                                             .read_text()), "wheels": 4}, schema)

@@ -155,10 +155,12 @@ def machine(file, as_json, show_cases, write_wheel_files, report, force):
 
 
 @main.command()
-def schema():
+@click.option("--machine", "machine_file", is_flag=True,
+              help="The machine file's format instead (hubload machine).")
+def schema(machine_file):
     """Print the load-case file format as a JSON Schema (for editors)."""
     from hubload import commands
-    commands.schema()
+    commands.schema(machine=machine_file)
 
 
 @main.command()

@@ -70,9 +70,15 @@ def check(file: str, as_json: bool = False, report: str | None = None,
     return found
 
 
-def schema() -> None:
-    from hubload.schema import FORMAT
+def schema(machine: bool = False) -> None:
     from hubload.schema.export import json_schema
+
+    if machine:
+        from hubload.schema.machineformat import MACHINE_FORMAT
+
+        click.echo(json.dumps(json_schema(MACHINE_FORMAT, "hubload machine file"), indent=2))
+        return
+    from hubload.schema import FORMAT
 
     click.echo(json.dumps(json_schema(FORMAT), indent=2))
 
