@@ -352,3 +352,45 @@ def test_the_bundled_machine_validates_against_the_printed_json_schema():
     with pytest.raises(jsonschema.ValidationError):
         jsonschema.validate({**tomllib.loads((MACHINES / "yard_loader_machine.toml")
                                              .read_text()), "wheels": 4}, schema)
+
+
+# -- sweeps of a machine file --------------------------------------------------------------------
+
+@pytest.mark.parametrize("spec, key, value", [
+    ("machine.cog_height_mm=700:1300:4", ("machine", "cog_height_mm"), 1100.0),
+    ("operation[1].payload_kg=0:2000:3", ("operation", 1, "payload_kg"), 1000.0),
+    ("axle[0].track_mm=1300:1700:3", ("axle", 0, "track_mm"), 1500.0),
+])
+def test_a_machine_sweep_point_is_the_machine_with_that_value(tmp_path, spec, key, value):
+    # A sweep point must equal a separate run of the file with the value written in
+    # (the project's rule for sweeps, tests/studies/test_sweep_matches_check.py).
+    source = MACHINES / "yard_loader_machine.toml"
+    swept = run("sweep", source, "--vary", spec, "--json")
+    assert swept.exit_code == 0, swept.output
+    points = json.loads(swept.output)["points"]
+    document = tomllib.loads(source.read_text())
+    node = document[key[0]] if len(key) == 2 else document[key[0]][key[1]]
+    node[key[-1]] = value
+    for name in ("yard_loader_wheel_end.toml",):
+        shutil.copy(MACHINES / name, tmp_path / name)
+    written = tmp_path / "machine.toml"
+    written.write_text(tomli_w.dumps(document))
+    alone = json.loads(run("machine", written, "--json").output)
+    point = next(p for p in points if p["values"][spec.split("=")[0]] == value)
+    assert point["governing_life"]["life_h"] == alone["governing_life"]["life_h"]
+    assert point["machine"] == alone["machine"]
+    assert [w["governing_life"]["life_h"] for w in point["wheel_ends"]] == [
+        w["governing_life"]["life_h"] for w in alone["wheel_ends"]]
+
+
+def test_a_machine_sweep_fits_80_columns_and_refuses_an_unknown_key():
+    source = MACHINES / "yard_loader_machine.toml"
+    found = CliRunner().invoke(main, ["sweep", str(source), "--vary",
+                                      "machine.cog_height_mm=700:1300:4", "--vary",
+                                      "operation[1].payload_kg=0:2000:3"], env={"COLUMNS": "80"})
+    assert found.exit_code == 0, found.output
+    assert max(len(line) for line in found.output.splitlines()) <= 80
+    bad = run("sweep", source, "--vary", "machine.cog_hieght_mm=700:1300:4")
+    assert bad.exit_code == 2
+    assert bad.output.strip() == (f"error: {source}: machine.cog_hieght_mm: unknown key "
+                                  f"'cog_hieght_mm'; did you mean 'cog_height_mm'?")

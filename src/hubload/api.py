@@ -113,10 +113,36 @@ class SweepResult(Wrapped):
         return sweep_document(self.value)
 
 
+@dataclass(frozen=True)
+class MachineSweepResult(Wrapped):
+    value: object      # hubload.studies.machine_sweep.MachineSweep
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload sweep --json`` on a machine file."""
+        from hubload.report.json.machine_sweep import machine_sweep_document
+
+        return machine_sweep_document(self.value)
+
+
+def is_machine_file(path: str | Path) -> bool:
+    """Whether ``path`` is a machine file (a [machine] table) rather than a load-case file."""
+    from hubload.casefile.load import read_document
+    from hubload.casefile.machinefile import is_machine_document
+
+    return is_machine_document(read_document(path))
+
+
 def sweep(path: str | Path, vary: Sequence[str], method: str | None = None,
-          on_progress=None) -> SweepResult:
-    """The file's lives over the grid of ``vary`` specs (``"wheel.offset_mm=40:200:17"``)."""
+          on_progress=None) -> SweepResult | MachineSweepResult:
+    """The file's lives over the grid of ``vary`` specs (``"wheel.offset_mm=40:200:17"``);
+    for a machine file, the machine's (``"machine.cog_height_mm=700:1300:7"``)."""
     from hubload.studies.sweep import run_sweep
+
+    if is_machine_file(path):
+        from hubload.studies.machine_sweep import run_machine_sweep
+
+        return MachineSweepResult(run_machine_sweep(str(path), tuple(vary),
+                                                    on_progress=on_progress, method=method))
 
     return SweepResult(run_sweep(str(path), tuple(vary), on_progress=on_progress,
                                  method=method))

@@ -51,13 +51,22 @@ class AxleInput:
 
 def load_machine_study(path: str | Path) -> MachineStudy:
     """Parse, validate and convert the machine file at ``path``; InputError naming it."""
+    return machine_from_document(read_document(path), str(path))
+
+
+def is_machine_document(document: dict) -> bool:
+    """Whether a parsed file is a machine file (it has a [machine] table)."""
+    return isinstance(document.get("machine"), dict)
+
+
+def machine_from_document(document: dict, file: str) -> MachineStudy:
+    """Validate and convert a parsed machine file; wheel end paths are relative to ``file``."""
     from hubload.casefile.wheelcases import machine_study
 
-    file = str(path)
-    document = read_document(path)
+    path = Path(file)
     try:
         data = validate_document(document, MACHINE_FORMAT)
-        axles = read_axles(data["axle"], Path(path).parent)
+        axles = read_axles(data["axle"], path.parent)
         machine = read_machine(data["machine"], axles)
         return machine_study(data, axles, machine, file)
     except InputError as error:
