@@ -108,3 +108,16 @@ def test_a_bad_wheel_end_file_is_named_with_its_key(tmp_path):
     result = CliRunner().invoke(main, ["machine", str(path)])
     assert result.exit_code == 2
     assert result.output.startswith(f"error: {tmp_path / 'wheel_end.toml'}: pair.outboard.C_kN")
+
+
+def test_a_machine_file_and_a_load_case_file_given_to_the_other_command_are_named():
+    # One line, exit 2, and the command that reads the file (common practice of this CLI).
+    from tests.test_machine_files import MACHINES, ROOT
+
+    machine = MACHINES / "yard_loader_machine.toml"
+    single = ROOT / "load_cases" / "yard_loader.toml"
+    for args, expected in ((["check", machine], "hubload machine reads it"),
+                           (["machine", single], "hubload check reads it")):
+        result = CliRunner().invoke(main, [str(a) for a in args])
+        assert result.exit_code == 2
+        assert result.output.strip().endswith(expected)

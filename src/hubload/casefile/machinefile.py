@@ -64,6 +64,9 @@ def machine_from_document(document: dict, file: str) -> MachineStudy:
     from hubload.casefile.wheelcases import machine_study
 
     path = Path(file)
+    if not is_machine_document(document) and ("case" in document or "wheel" in document):
+        raise InputError("expected a machine file ([machine], [[axle]], [[operation]]); this "
+                         "is a load-case file: hubload check reads it", file=file)
     try:
         data = validate_document(document, MACHINE_FORMAT)
         axles = read_axles(data["axle"], path.parent)

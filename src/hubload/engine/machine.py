@@ -141,9 +141,8 @@ def machine_life(study: MachineStudy, results: list[Result]) -> MachineLife:
     mean_kmh = float(np.sum(study.time_fraction * study.speed_kmh))
     symbols = sorted({g.symbol for g in governing})
     bases = sorted({g.basis for g in governing})
-    basis = SERIES_BASIS.format(
-        slope=Fraction(iso281.WEIBULL_SLOPE_ROLLER).limit_denominator(100)) + "; each wheel end: " + \
-        " / ".join(bases)
+    slope = Fraction(iso281.WEIBULL_SLOPE_ROLLER).limit_denominator(100)
+    basis = SERIES_BASIS.format(slope=slope) + "; each wheel end: " + " / ".join(bases)
     shares = iso281.system_damage_shares(lives, [g.system_damage_share for g in governing])
     return MachineLife(
         symbol="/".join(symbols), basis=basis, life_h=life_h,
