@@ -394,3 +394,32 @@ def test_a_machine_sweep_fits_80_columns_and_refuses_an_unknown_key():
     assert bad.exit_code == 2
     assert bad.output.strip() == (f"error: {source}: machine.cog_hieght_mm: unknown key "
                                   f"'cog_hieght_mm'; did you mean 'cog_height_mm'?")
+
+
+def test_the_machine_life_is_every_bearing_in_series_with_the_weibull_slope_of_rollers(tmp_path):
+    # Bearings in series, L = (sum L_k^-e)^(-1/e), e = 9/8 for roller bearings
+    # (Lundberg & Palmgren 1952, as given in Harris & Kotzalas, Essential Concepts of Bearing
+    # Technology, 5th ed., 2007; from memory): eight bearings of four wheel ends.
+    found = hubload.machine(MACHINES / "yard_loader_machine.toml").to_dict()
+    for key in ("l10_h", "l10m_h"):
+        lives = [b[key] for w in found["wheel_ends"] for b in w["bearings"].values()]
+        assert len(lives) == 8
+        expected = sum(life ** -1.125 for life in lives) ** (-1 / 1.125)
+        assert found["machine"][key] == pytest.approx(expected, rel=1e-12)
+    weakest = wheel(found, found["governing_life"]["weakest_wheel_end"]["name"])
+    shortest = min(w["governing_life"]["life_h"] for w in found["wheel_ends"])
+    assert weakest["governing_life"]["life_h"] == pytest.approx(shortest, rel=1e-12)
+
+
+def test_an_axle_without_wheel_end_carries_load_but_has_no_results(tmp_path):
+    # Issue contract; lever rule (Meriam & Kraige, Statics): the front wheels' loads do not
+    # depend on whether the rear axle has results.
+    document = machine_document([operation()])
+    with_rear = machine_json(tmp_path, document)
+    del document["axle"][1]["wheel_end"]
+    document["axle"][1]["rolling_radius_mm"] = 395.0
+    folder = tmp_path / "front only"
+    folder.mkdir()
+    front_only = machine_json(folder, document)
+    assert [w["name"] for w in front_only["wheel_ends"]] == ["front left", "front right"]
+    assert wheel(front_only, "front left")["cases"] == wheel(with_rear, "front left")["cases"]

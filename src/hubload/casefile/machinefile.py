@@ -25,7 +25,8 @@ from hubload.units import MM
 # Tables of a load-case file that the machine file decides for its wheel ends.
 MACHINE_TABLES = {"case": "the machine's operations give the cases",
                   "project": "the machine file's [project] applies to every wheel end",
-                  "vehicle": "the machine file describes the axle"}
+                  "vehicle": "the machine file describes the axle",
+                  "machine": "a wheel end file is a load-case file, not a machine file"}
 
 
 @dataclass(frozen=True)
