@@ -423,3 +423,29 @@ def test_an_axle_without_wheel_end_carries_load_but_has_no_results(tmp_path):
     front_only = machine_json(folder, document)
     assert [w["name"] for w in front_only["wheel_ends"]] == ["front left", "front right"]
     assert wheel(front_only, "front left")["cases"] == wheel(with_rear, "front left")["cases"]
+
+
+def test_compare_puts_machines_side_by_side_and_refuses_a_mix(tmp_path):
+    # Each compared machine is that machine alone, and its ratio is its life over the first
+    # one's (the project's rule for compare, common practice).
+    machine = MACHINES / "yard_loader_machine.toml"
+    document = tomllib.loads(machine.read_text())
+    document["machine"]["cog_height_mm"] = 1250.0
+    shutil.copy(WHEEL_END, tmp_path / WHEEL_END.name)
+    high = tmp_path / "high.toml"
+    high.write_text(tomli_w.dumps(document))
+    compared = run("compare", machine, high, "--json")
+    assert compared.exit_code == 0, compared.output
+    entries = json.loads(compared.output)["machines"]
+    for entry, path in zip(entries, (machine, high)):
+        alone = json.loads(run("machine", path, "--json").output)
+        assert entry["governing_life"]["life_h"] == alone["governing_life"]["life_h"]
+    assert entries[1]["ratio_to_first"]["governing_life"] == pytest.approx(
+        entries[1]["governing_life"]["life_h"] / entries[0]["governing_life"]["life_h"])
+    table = CliRunner().invoke(main, ["compare", str(machine), str(high)],
+                               env={"COLUMNS": "80"})
+    assert table.exit_code == 0 and "weakest wheel end" in table.output
+    assert max(len(line) for line in table.output.splitlines()) <= 80
+    mixed = run("compare", machine, ROOT / "load_cases" / "yard_loader.toml")
+    assert mixed.exit_code == 2 and len(mixed.output.strip().splitlines()) == 1
+    assert "not both" in mixed.output

@@ -159,12 +159,47 @@ class ComparisonResult(Wrapped):
         return compare_document(self.value)
 
 
+@dataclass(frozen=True)
+class MachineComparisonResult(Wrapped):
+    value: tuple       # hubload.engine.machine.MachineResult, one per machine file
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload compare --json`` on machine files."""
+        from hubload.report.json.machine_compare import compare_document
+
+        return compare_document(self.value)
+
+
 def compare(studies_or_paths: Sequence[Study | str | Path],
-            method: str | None = None) -> ComparisonResult:
-    """Several files (or studies) side by side, the first as the reference."""
+            method: str | None = None) -> ComparisonResult | MachineComparisonResult:
+    """Several files (or studies) side by side, the first as the reference; machine files
+    compare machines (their lives, wheel ends and verdicts)."""
     from hubload.studies.compare import run_compare
 
+    machines = [not isinstance(s, Study) and is_machine_file(s) for s in studies_or_paths]
+    if any(machines):
+        return compare_machines(studies_or_paths, machines, method)
+
     return ComparisonResult(run_compare([as_study(s, method) for s in studies_or_paths]))
+
+
+def compare_machines(paths, machines: list[bool], method: str | None):
+    if not all(machines):
+        odd = next(p for p, is_machine in zip(paths, machines) if not is_machine)
+        raise InputError("compare takes machine files or load-case files, not both; this one "
+                         "is a load-case file", file=str(odd))
+    from hubload.casefile.load import read_document
+    from hubload.casefile.machinefile import machine_from_document
+    from hubload.engine.machine import evaluate_machine
+
+    found = []
+    for path in paths:
+        document = read_document(path)
+        if method is not None:
+            document = {**document, "project": {**document.get("project", {}),
+                                                "method": method}}
+        found.append(evaluate_machine(machine_from_document(document, str(path))))
+    return MachineComparisonResult(tuple(found))
 
 
 @dataclass(frozen=True)

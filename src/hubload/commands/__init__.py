@@ -130,7 +130,18 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None) -> api.ComparisonResult:
     checked(plot, force, PLOT_SUFFIXES, files)
+    if plot is not None and any(api.is_machine_file(f) for f in files):
+        raise InputError("--plot draws comparisons of load-case files; for machine files use "
+                         "--json", file=plot)
     found = api.compare(list(files), method=method)
+    if isinstance(found, api.MachineComparisonResult):
+        if as_json:
+            click.echo(json.dumps(found.to_dict(), indent=2))
+        else:
+            from hubload.report.terminal.machine_compare import render as render_machines
+
+            render_machines(found.value, console())
+        return found
     if plot is not None:
         from hubload.report.plots import save
         from hubload.report.plots.spectrum import compare_figure
