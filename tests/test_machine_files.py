@@ -449,3 +449,25 @@ def test_compare_puts_machines_side_by_side_and_refuses_a_mix(tmp_path):
     mixed = run("compare", machine, ROOT / "load_cases" / "yard_loader.toml")
     assert mixed.exit_code == 2 and len(mixed.output.strip().splitlines()) == 1
     assert "not both" in mixed.output
+
+
+def test_a_wheel_end_key_of_one_axle_is_swept_on_that_axle_only(tmp_path):
+    # A sweep point must equal a separate run with the value written in (the project's rule
+    # for sweeps): here the front axle's own copy of the wheel end file, offset 120 mm.
+    source = MACHINES / "yard_loader_machine.toml"
+    swept = run("sweep", source, "--vary", "axle[0].wheel_end.wheel.offset_mm=80:120:3",
+                "--json")
+    assert swept.exit_code == 0, swept.output
+    point = json.loads(swept.output)["points"][2]
+    assert point["values"] == {"axle[0].wheel_end.wheel.offset_mm": 120.0}
+    document = tomllib.loads(source.read_text())
+    document["axle"][0]["wheel_end"] = "front_wheel_end.toml"
+    shutil.copy(WHEEL_END, tmp_path / WHEEL_END.name)
+    (tmp_path / "front_wheel_end.toml").write_text(
+        WHEEL_END.read_text().replace("offset_mm = 95 ", "offset_mm = 120 "))
+    written = tmp_path / "machine.toml"
+    written.write_text(tomli_w.dumps(document))
+    alone = json.loads(run("machine", written, "--json").output)
+    assert [w["governing_life"]["life_h"] for w in point["wheel_ends"]] == [
+        w["governing_life"]["life_h"] for w in alone["wheel_ends"]]
+    assert point["governing_life"]["life_h"] == alone["governing_life"]["life_h"]

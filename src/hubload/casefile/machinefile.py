@@ -15,6 +15,7 @@ from pathlib import Path
 from hubload.casefile.load import read_document, study_from_document
 from hubload.casefile.machine import PLACEHOLDER_CASE
 from hubload.casefile.validate import validate_document
+from hubload.casefile.variation import with_values
 from hubload.domain.machine import MachineStudy
 from hubload.domain.study import Study
 from hubload.errors import InputError
@@ -60,8 +61,12 @@ def is_machine_document(document: dict) -> bool:
     return isinstance(document.get("machine"), dict)
 
 
-def machine_from_document(document: dict, file: str) -> MachineStudy:
-    """Validate and convert a parsed machine file; wheel end paths are relative to ``file``."""
+def machine_from_document(document: dict, file: str,
+                          wheel_end_values: dict | None = None) -> MachineStudy:
+    """Validate and convert a parsed machine file; wheel end paths are relative to ``file``.
+
+    ``wheel_end_values`` (axle index -> {KeyPath: value}) sets keys of an axle's wheel end
+    file, as a sweep of the machine varies them."""
     from hubload.casefile.wheelcases import machine_study
 
     path = Path(file)
@@ -70,14 +75,15 @@ def machine_from_document(document: dict, file: str) -> MachineStudy:
                          "is a load-case file: hubload check reads it", file=file)
     try:
         data = validate_document(document, MACHINE_FORMAT)
-        axles = read_axles(data["axle"], path.parent)
+        axles = read_axles(data["axle"], path.parent, wheel_end_values or {})
         machine = read_machine(data["machine"], axles)
         return machine_study(data, axles, machine, file)
     except InputError as error:
         raise error.located(file) from None
 
 
-def read_axles(blocks: list[dict], folder: Path) -> tuple[AxleInput, AxleInput]:
+def read_axles(blocks: list[dict], folder: Path,
+               wheel_end_values: dict) -> tuple[AxleInput, AxleInput]:
     """The front and the rear axle (in that order); InputError for any other set."""
     if len(blocks) != 2:
         raise InputError(f"expected exactly two [[axle]] blocks (a front and a rear axle), "
@@ -92,21 +98,25 @@ def read_axles(blocks: list[dict], folder: Path) -> tuple[AxleInput, AxleInput]:
     if not any(block["driven"] for block in blocks):
         raise InputError("expected at least one driven axle (driven = true): the machine has "
                          "hub motors", key_path="axle[0].driven")
-    axles = [read_axle(index, block, folder) for index, block in enumerate(blocks)]
+    axles = [read_axle(index, block, folder, wheel_end_values.get(index, {}))
+             for index, block in enumerate(blocks)]
     axles.sort(key=lambda axle: axle.position != "front")
     check_same_adhesion(axles)
     return axles[0], axles[1]
 
 
-def read_axle(index: int, block: dict, folder: Path) -> AxleInput:
+def read_axle(index: int, block: dict, folder: Path, values: dict) -> AxleInput:
     key = f"axle[{index}]"
     wheel_end = None
+    if values and "wheel_end" not in block:
+        raise InputError("this axle has no wheel_end file whose keys could be varied",
+                         key_path=f"{key}.wheel_end")
     if "wheel_end" in block:
         if "rolling_radius_mm" in block:
             raise InputError("give rolling_radius_mm only for an axle without wheel_end; the "
                              "wheel end file's [wheel] gives it",
                              key_path=f"{key}.rolling_radius_mm")
-        wheel_end = read_wheel_end(folder / block["wheel_end"], f"{key}.wheel_end")
+        wheel_end = read_wheel_end(folder / block["wheel_end"], f"{key}.wheel_end", values)
         radius_m = float(wheel_end.study.wheel.rolling_radius_m)
     elif "rolling_radius_mm" in block:
         radius_m = block["rolling_radius_mm"] * MM
@@ -121,13 +131,13 @@ def read_axle(index: int, block: dict, folder: Path) -> AxleInput:
                      wheel_end=wheel_end, rolling_radius_m=radius_m)
 
 
-def read_wheel_end(path: Path, key_path: str) -> WheelEndFile:
-    """The wheel end file at ``path``, validated as a load-case file without cases."""
+def read_wheel_end(path: Path, key_path: str, values: dict | None = None) -> WheelEndFile:
+    """The wheel end file at ``path`` (with ``values``, KeyPath -> value, set), validated as
+    a load-case file without cases."""
     file = str(path)
-    if not path.is_file():
-        raise InputError(f"wheel end file '{file}' not found (the path is relative to the "
-                         f"machine file)", key_path=key_path)
-    document = read_document(path)
+    document = read_wheel_end_document(path, key_path)
+    if values:
+        document = with_values(document, values)
     for table, reason in MACHINE_TABLES.items():
         if table in document:
             header = "[[case]] blocks" if table == "case" else f"a [{table}] table"
@@ -138,6 +148,14 @@ def read_wheel_end(path: Path, key_path: str) -> WheelEndFile:
     except InputError as error:
         raise error.located(file) from None
     return WheelEndFile(path=file, document=document, study=study)
+
+
+def read_wheel_end_document(path: Path, key_path: str) -> dict:
+    """The parsed wheel end file; InputError naming the machine file's key when it is missing."""
+    if not path.is_file():
+        raise InputError(f"wheel end file '{path}' not found (the path is relative to the "
+                         f"machine file)", key_path=key_path)
+    return read_document(path)
 
 
 def check_same_adhesion(axles: list[AxleInput]) -> None:
