@@ -471,3 +471,17 @@ def test_a_wheel_end_key_of_one_axle_is_swept_on_that_axle_only(tmp_path):
     assert [w["governing_life"]["life_h"] for w in point["wheel_ends"]] == [
         w["governing_life"]["life_h"] for w in alone["wheel_ends"]]
     assert point["governing_life"]["life_h"] == alone["governing_life"]["life_h"]
+
+
+def test_a_machine_of_many_operations_prints_its_most_damaging_cases_only(tmp_path):
+    # The check's rule for large spectra (report.columns, common practice): the 25 most
+    # damaging cases per wheel end and a line saying what was left out; --all lists them.
+    ops = [operation(f"op {i}", 100.0 / 200, 4.0 + i % 9, lateral_accel_g=0.002 * (i % 40),
+                     payload_kg=5.0 * i) for i in range(200)]
+    path = write_machine(tmp_path, machine_document(ops))
+    short = run("machine", path, "--cases")
+    assert short.exit_code == 0, short.output
+    assert len(short.output.splitlines()) < 200
+    assert "more cases" in short.output and "--all" in short.output
+    every = run("machine", path, "--cases", "--all")
+    assert "op 199" in every.output and "more cases" not in every.output

@@ -146,12 +146,16 @@ def check(file, as_json, report, plot, force, method, show_all):
 @click.option("--report", type=click.Path(dir_okay=False),
               help="Also write a self-contained HTML report of the machine.")
 @click.option("--force", is_flag=True, help="Overwrite existing wheel end files and --report.")
+@click.option("--all", "show_all", is_flag=True,
+              help="List every case of --cases and every warning (default: the 25 most "
+                   "damaging cases, warnings summarised).")
 @reports_input_errors
-def machine(file, as_json, show_cases, write_wheel_files, report, force):
+def machine(file, as_json, show_cases, write_wheel_files, report, force, show_all):
     """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
     from hubload.commands.machine import machine as run_machine
     run_machine(file, as_json=as_json, show_cases=show_cases,
-                write_wheel_files=write_wheel_files, force=force, report=report)
+                write_wheel_files=write_wheel_files, force=force, report=report,
+                show_all=show_all)
 
 
 @main.command()

@@ -30,7 +30,7 @@ def wheel_file_name(wheel: str) -> str:
 
 def machine(file: str, as_json: bool = False, show_cases: bool = False,
             write_wheel_files: str | None = None, force: bool = False,
-            report: str | None = None) -> api.MachineResult:
+            report: str | None = None, show_all: bool = False) -> api.MachineResult:
     from hubload.commands import checked, written
 
     checked(report, force, (".html", ".htm"), (file,))
@@ -51,7 +51,7 @@ def machine(file: str, as_json: bool = False, show_cases: bool = False,
         from hubload.commands import console
         from hubload.report.terminal.machine import render_machine
 
-        render_machine(found.value, console(), show_cases=show_cases)
+        render_machine(found.value, console(), show_cases=show_cases, show_all=show_all)
     return found
 
 

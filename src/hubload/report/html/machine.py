@@ -9,6 +9,7 @@ from __future__ import annotations
 
 from hubload.engine.governing import symbol_of
 from hubload.engine.machine import MachineResult
+from hubload.report.columns import CASE_ROWS_SHOWN
 from hubload.report.html.check import inputs_section
 from hubload.report.html.page import escape, figure_html, page, section, spec_table
 from hubload.report.messages import summary_lines
@@ -73,7 +74,7 @@ def wheel_end_sections(machine: MachineResult) -> list[str]:
         warnings = ("<ul>" + "".join(f"<li>{escape(line)}</li>" for line in lines) + "</ul>"
                     ) if lines else "<p>No warnings or flags.</p>"
         body = (f"<p>Wheel end file: {escape(wheel.wheel_end.wheel_end_file)}; axle: "
-                f"{escape(wheel.wheel_end.axle)}.</p>" + spec_table(cases_table(wheel))
+                f"{escape(wheel.wheel_end.axle)}.</p>" + spec_table(cases_table(wheel, CASE_ROWS_SHOWN))
                 + spec_table(check_specs.summary_table(result)) + warnings)
         sections.append(section(f"wheel-end-{index}", f"The {wheel.name} wheel", body))
     return sections

@@ -7,7 +7,7 @@ from __future__ import annotations
 
 from hubload.engine.findings import STATIC_SAFETY_WARNING
 from hubload.engine.machine import MachineResult, WheelEndResult
-from hubload.report.columns import Column, TableSpec
+from hubload.report.columns import Column, TableSpec, cut_to_cases
 from hubload.report.numbers import fixed, hours, percent, safety
 from hubload.units import KN
 
@@ -44,9 +44,11 @@ def wheel_end_table(machine: MachineResult) -> TableSpec:
     return TableSpec("wheel_ends", "Wheel ends", tuple(columns))
 
 
-def cases_table(wheel: WheelEndResult) -> TableSpec:
+def cases_table(wheel: WheelEndResult, limit: int | None) -> TableSpec:
+    """The derived spectrum, cut to the ``limit`` most damaging cases (None: every case)."""
     cases = wheel.result.study.cases
     columns = [
+        Column("case_index", "#", list(range(len(cases)))),
         Column("name", "case", list(cases.names), name=True),
         Column("time_fraction", "time", list(cases.time_fraction), "%", percent),
         Column("wheel_load_kN", "W", list(cases.wheel_load_n / KN), "kN", fixed(2),
@@ -61,4 +63,7 @@ def cases_table(wheel: WheelEndResult) -> TableSpec:
                list(wheel.result.governing.system_damage_share), "%", percent,
                legend="share of the pair's damage"),
     ]
-    return TableSpec("cases", f"Derived spectrum of the {wheel.name} wheel", tuple(columns))
+    governing = wheel.result.governing
+    spec = TableSpec("cases", f"Derived spectrum of the {wheel.name} wheel", tuple(columns),
+                     keep_first=2)
+    return cut_to_cases(spec, governing.system_damage_share, governing.symbol, limit)

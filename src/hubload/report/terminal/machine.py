@@ -13,8 +13,9 @@ from rich.text import Text
 from hubload.engine.governing import symbol_of
 from hubload.engine.machine import MachineResult
 from hubload.report.cautions import CAUTIONS
+from hubload.report.columns import CASE_ROWS_SHOWN
 from hubload.report.numbers import hours, hours_with_unit, share
-from hubload.report.messages import summary_lines
+from hubload.report.messages import summary_lines, warning_texts
 from hubload.report.specs.machine import cases_table, wheel_end_table
 from hubload.report.specs.shaft import item_limit, item_value
 from hubload.report.terminal.tables import plain, render
@@ -61,17 +62,22 @@ def verdict_lines(machine: MachineResult) -> list[Text]:
     return lines
 
 
-def warning_lines(machine: MachineResult) -> list[Text]:
-    """Each wheel end's warnings; one line for the wheel ends that share its words."""
+def warning_lines(machine: MachineResult, show_all: bool = False) -> list[Text]:
+    """Each wheel end's warnings (summarised unless ``show_all``); one line for the wheel
+    ends that share its words."""
     wheels_of: dict[str, list[str]] = {}
+    words = warning_texts if show_all else summary_lines
     for wheel in machine.wheel_ends:
-        for line in summary_lines(wheel.result.findings, wheel.result.study.cases.names):
+        for line in words(wheel.result.findings, wheel.result.study.cases.names):
             wheels_of.setdefault(line, []).append(wheel.name)
     return [Text.assemble(("Warning", "yellow"), f" ({', '.join(wheels)}): {plain(line)}")
             for line, wheels in wheels_of.items()]
 
 
-def render_machine(machine: MachineResult, console: Console, show_cases: bool = False) -> None:
+def render_machine(machine: MachineResult, console: Console, show_cases: bool = False,
+                   show_all: bool = False) -> None:
+    """The wheel ends, the machine's life, the verdict; ``show_cases`` each wheel end's
+    derived spectrum (its most damaging cases unless ``show_all``)."""
     study = machine.study
     console.print(Text.assemble((plain(study.title), "bold"), f"  ({plain(study.source)})"))
     mirrored = int(study.case_mirrored.sum())
@@ -80,8 +86,9 @@ def render_machine(machine: MachineResult, console: Console, show_cases: bool = 
                        f"both ways)."))
     if show_cases:
         for wheel in machine.wheel_ends:
-            render(cases_table(wheel), console)
+            render(cases_table(wheel, None if show_all else CASE_ROWS_SHOWN), console)
     render(wheel_end_table(machine), console)
-    for line in machine_lines(machine) + verdict_lines(machine) + warning_lines(machine):
+    for line in machine_lines(machine) + verdict_lines(machine) + warning_lines(machine,
+                                                                                 show_all):
         console.print(line)
     console.print(Text(f"Caution: {CAUTIONS}", style="dim"))
