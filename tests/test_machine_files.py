@@ -485,3 +485,24 @@ def test_a_machine_of_many_operations_prints_its_most_damaging_cases_only(tmp_pa
     assert "more cases" in short.output and "--all" in short.output
     every = run("machine", path, "--cases", "--all")
     assert "op 199" in every.output and "more cases" not in every.output
+
+
+def test_written_wheel_files_give_the_same_refined_lives_through_check(tmp_path):
+    # The contract of --write-wheel-files holds for the refined method too (its [project]
+    # method travels with the machine's [project]).
+    document = tomllib.loads((MACHINES / "yard_loader_machine.toml").read_text())
+    document["project"]["method"] = "refined"
+    document["operation"] = document["operation"][:4]
+    document["operation"][0]["time_percent"] = 56.0
+    shutil.copy(WHEEL_END, tmp_path / WHEEL_END.name)
+    path = tmp_path / "refined.toml"
+    path.write_text(tomli_w.dumps(document))
+    out = tmp_path / "wheels"
+    result = run("machine", path, "--json", "--write-wheel-files", out)
+    assert result.exit_code == 0, result.output
+    for entry in json.loads(result.stdout)["wheel_ends"]:
+        assert entry["method"] == "refined"
+        checked = json.loads(run("check", out / (entry["name"].replace(" ", "_") + ".toml"),
+                                 "--json").output)
+        assert checked["governing_life"]["life_h"] == entry["governing_life"]["life_h"]
+        assert checked["governing_life"]["symbol"] == entry["governing_life"]["symbol"]

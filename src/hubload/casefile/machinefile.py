@@ -140,7 +140,7 @@ def read_wheel_end(path: Path, key_path: str, values: dict | None = None) -> Whe
         document = with_values(document, values)
     for table, reason in MACHINE_TABLES.items():
         if table in document:
-            header = "[[case]] blocks" if table == "case" else f"a [{table}] table"
+            header = "[[case]] blocks" if table == "case" else f"[{table}] table"
             raise InputError(f"a wheel end file has no {header}: {reason}", file=file,
                              key_path=table)
     try:
