@@ -121,3 +121,11 @@ def test_a_machine_file_and_a_load_case_file_given_to_the_other_command_are_name
         result = CliRunner().invoke(main, [str(a) for a in args])
         assert result.exit_code == 2
         assert result.output.strip().endswith(expected)
+
+
+def test_a_derived_case_outside_the_load_case_limits_names_its_operation(tmp_path):
+    # A 1,000 t machine on these wheel ends: the derived wheel load exceeds the load-case
+    # format's plausibility limit (2,000 kN); the error names the operation, not a case.
+    document = machine_document([operation("heavy travel")], machine__mass_kg=1.0e6)
+    line = failure(tmp_path, document)
+    assert "operation[0]" in line and "'heavy travel'" in line and "wheel_load_kN" in line

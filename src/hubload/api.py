@@ -126,10 +126,9 @@ class MachineSweepResult(Wrapped):
 
 def is_machine_file(path: str | Path) -> bool:
     """Whether ``path`` is a machine file (a [machine] table) rather than a load-case file."""
-    from hubload.casefile.load import read_document
-    from hubload.casefile.machinefile import is_machine_document
+    from hubload.casefile.machinefile import is_machine_file as machine_text
 
-    return is_machine_document(read_document(path))
+    return machine_text(path)
 
 
 def sweep(path: str | Path, vary: Sequence[str], method: str | None = None,

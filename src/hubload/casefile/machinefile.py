@@ -9,6 +9,7 @@ become per-wheel load cases in :mod:`hubload.casefile.wheelcases`.
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -54,6 +55,21 @@ class AxleInput:
 def load_machine_study(path: str | Path) -> MachineStudy:
     """Parse, validate and convert the machine file at ``path``; InputError naming it."""
     return machine_from_document(read_document(path), str(path))
+
+
+# A top-level [machine] table, written as a header, a dotted key or an inline table: no
+# load-case file has a key of that name, so the text tells the kinds apart unparsed.
+MACHINE_TABLE_LINE = re.compile(r"^[ \t]*(\[[ \t]*machine[ \t]*\]|machine[ \t]*[.=])",
+                                re.MULTILINE)
+
+
+def is_machine_file(path: str | Path) -> bool:
+    """Whether the file at ``path`` is a machine file, from its text (a file that cannot be
+    read is left to the command's own reading, which names the problem)."""
+    try:
+        return MACHINE_TABLE_LINE.search(Path(path).read_text(encoding="utf-8")) is not None
+    except (OSError, UnicodeDecodeError):
+        return False
 
 
 def is_machine_document(document: dict) -> bool:

@@ -97,13 +97,12 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     checked(plot, force, PLOT_SUFFIXES, (file,))
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
-    machine = api.is_machine_file(file)
-    if machine and plot is not None:
+    if plot is not None and api.is_machine_file(file):
         raise InputError("--plot draws sweeps of load-case files; for a machine file use "
                          "--json, or sweep a wheel file of --write-wheel-files", file=plot)
     with LateProgress("sweep") as progress:
         found = api.sweep(file, specs, method=method, on_progress=progress)
-    if machine:
+    if isinstance(found, api.MachineSweepResult):
         if as_json:
             click.echo(json.dumps(found.to_dict(), indent=2))
         else:
