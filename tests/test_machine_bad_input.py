@@ -8,7 +8,7 @@ import tomli_w
 from click.testing import CliRunner
 
 from hubload.cli import main
-from tests.test_machine_files import WHEEL_END, machine_document, operation, write_machine
+from machinesupport import MACHINES, ROOT, WHEEL_END, machine_document, operation, write_machine
 
 
 def failure(folder, document, wheel_end_text=None):
@@ -112,8 +112,6 @@ def test_a_bad_wheel_end_file_is_named_with_its_key(tmp_path):
 
 def test_a_machine_file_and_a_load_case_file_given_to_the_other_command_are_named():
     # One line, exit 2, and the command that reads the file (common practice of this CLI).
-    from tests.test_machine_files import MACHINES, ROOT
-
     machine = MACHINES / "yard_loader_machine.toml"
     single = ROOT / "load_cases" / "yard_loader.toml"
     for args, expected in ((["check", machine], "hubload machine reads it"),
