@@ -59,7 +59,8 @@ def test_check_prints_every_life_and_name_in_full(width, scenario, options):
     ("forecast", ROOT / "load_cases" / "site_dumper.toml"),
     ("field", ROOT / "load_cases" / "field_returns.csv", "--against",
      ROOT / "load_cases" / "site_dumper.toml"),
-], ids=["sweep", "linked", "grid", "compare", "setting", "brief", "forecast", "field"])
+    ("machine", ROOT / "load_cases" / "machines" / "yard_loader_machine.toml", "--cases"),
+], ids=["sweep", "linked", "grid", "compare", "setting", "brief", "forecast", "field", "machine"])
 def test_study_commands_fit_the_terminal(width, args):
     text = run(width, *args)
     assert ELLIPSIS not in text

@@ -1,8 +1,8 @@
 """hubload: bearing and shaft life of hydraulic wheel-hub motors.
 
 The Python API (``hubload.check``, ``load``, ``sweep``, ``compare``, ``setting``,
-``brief``, ``spectrum``, ``cases``, ``forecast``, ``field``) is imported on first use, so that the
-command line starts fast.
+``brief``, ``spectrum``, ``cases``, ``forecast``, ``field``, ``machine``) is imported on first
+use, so that the command line starts fast.
 Layers: ``model`` (pure physics) <- ``domain`` (typed study) <- ``casefile``
 (files -> study) and ``engine`` (study -> typed results) <- ``studies`` <-
 ``report`` (terminal, JSON, HTML, plots) <- ``commands`` <- ``cli``.
@@ -10,7 +10,7 @@ Layers: ``model`` (pure physics) <- ``domain`` (typed study) <- ``casefile``
 
 __version__ = "0.1.0"
 __all__ = ["load", "check", "sweep", "compare", "setting", "brief", "spectrum", "cases",
-           "forecast", "field"]
+           "forecast", "field", "machine"]
 
 
 def __getattr__(name: str):

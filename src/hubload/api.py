@@ -80,6 +80,32 @@ def check(study_or_path: Study | str | Path, method: str | None = None,
 
 
 @dataclass(frozen=True)
+class MachineResult(Wrapped):
+    """The result of a machine: every wheel end's result, the machine's lives and verdict."""
+
+    value: object      # hubload.engine.machine.MachineResult
+
+    @property
+    def governing_life(self):
+        return self.value.governing
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload machine --json``."""
+        from hubload.report.json.machine import machine_document
+
+        return machine_document(self.value)
+
+
+def machine(path: str | Path) -> MachineResult:
+    """A machine file's wheel ends (spectra derived from its operations), its life as a
+    series system of every bearing, the weakest wheel end and the verdict."""
+    from hubload.casefile.machinefile import load_machine_study
+    from hubload.engine.machine import evaluate_machine
+
+    return MachineResult(evaluate_machine(load_machine_study(path)))
+
+
+@dataclass(frozen=True)
 class SweepResult(Wrapped):
     value: object      # hubload.studies.sweep.Sweep
 
@@ -90,10 +116,35 @@ class SweepResult(Wrapped):
         return sweep_document(self.value)
 
 
+@dataclass(frozen=True)
+class MachineSweepResult(Wrapped):
+    value: object      # hubload.studies.machine_sweep.MachineSweep
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload sweep --json`` on a machine file."""
+        from hubload.report.json.machine_sweep import machine_sweep_document
+
+        return machine_sweep_document(self.value)
+
+
+def is_machine_file(path: str | Path) -> bool:
+    """Whether ``path`` is a machine file (a [machine] table) rather than a load-case file."""
+    from hubload.casefile.machinefile import is_machine_file as machine_text
+
+    return machine_text(path)
+
+
 def sweep(path: str | Path, vary: Sequence[str], method: str | None = None,
-          on_progress=None) -> SweepResult:
-    """The file's lives over the grid of ``vary`` specs (``"wheel.offset_mm=40:200:17"``)."""
+          on_progress=None) -> SweepResult | MachineSweepResult:
+    """The file's lives over the grid of ``vary`` specs (``"wheel.offset_mm=40:200:17"``);
+    for a machine file, the machine's (``"machine.cog_height_mm=700:1300:7"``)."""
     from hubload.studies.sweep import run_sweep
+
+    if is_machine_file(path):
+        from hubload.studies.machine_sweep import run_machine_sweep
+
+        return MachineSweepResult(run_machine_sweep(str(path), tuple(vary),
+                                                    on_progress=on_progress, method=method))
 
     return SweepResult(run_sweep(str(path), tuple(vary), on_progress=on_progress,
                                  method=method))
@@ -110,20 +161,55 @@ class ComparisonResult(Wrapped):
         return compare_document(self.value)
 
 
+@dataclass(frozen=True)
+class MachineComparisonResult(Wrapped):
+    value: tuple       # hubload.engine.machine.MachineResult, one per machine file
+
+    def to_dict(self) -> dict:
+        """The document of ``hubload compare --json`` on machine files."""
+        from hubload.report.json.machine_compare import compare_document
+
+        return compare_document(self.value)
+
+
 def compare(studies_or_paths: Sequence[Study | str | Path],
-            method: str | None = None, on_progress=None) -> ComparisonResult:
-    """Several files (or studies) side by side, the first as the reference.
+            method: str | None = None,
+            on_progress=None) -> ComparisonResult | MachineComparisonResult:
+    """Several files (or studies) side by side, the first as the reference; machine files
+    compare machines (their lives, wheel ends and verdicts).
 
     ``on_progress(done, total)``: files read, then the studies evaluated."""
     from hubload.progress import in_parts
     from hubload.studies.compare import run_compare
 
+    machines = [not isinstance(s, Study) and is_machine_file(s) for s in studies_or_paths]
+    if any(machines):
+        return compare_machines(studies_or_paths, machines, method)
     reading, evaluating = in_parts(on_progress, 2)
     studies = []
     for item in studies_or_paths:
         studies.append(as_study(item, method))
         reading(len(studies), len(studies_or_paths))
     return ComparisonResult(run_compare(studies, evaluating))
+
+
+def compare_machines(paths, machines: list[bool], method: str | None):
+    if not all(machines):
+        odd = next(p for p, is_machine in zip(paths, machines) if not is_machine)
+        raise InputError("compare takes machine files or load-case files, not both; this one "
+                         "is a load-case file", file=str(odd))
+    from hubload.casefile.load import read_document
+    from hubload.casefile.machinefile import machine_from_document
+    from hubload.engine.machine import evaluate_machine
+
+    found = []
+    for path in paths:
+        document = read_document(path)
+        if method is not None:
+            document = {**document, "project": {**document.get("project", {}),
+                                                "method": method}}
+        found.append(evaluate_machine(machine_from_document(document, str(path))))
+    return MachineComparisonResult(tuple(found))
 
 
 @dataclass(frozen=True)

@@ -145,10 +145,35 @@ def check(file, as_json, report, plot, table, force, method, show_all):
 
 
 @main.command()
-def schema():
+@click.argument("file", type=click.Path(dir_okay=False))
+@json_option
+@click.option("--cases", "show_cases", is_flag=True,
+              help="Also list each wheel end's derived spectrum.")
+@click.option("--write-wheel-files", metavar="DIR", type=click.Path(file_okay=False),
+              help="Write each wheel end as a load-case file into DIR (check, sweep, compare, "
+                   "setting and brief run on them).")
+@click.option("--report", type=click.Path(dir_okay=False),
+              help="Also write a self-contained HTML report of the machine.")
+@click.option("--force", is_flag=True, help="Overwrite existing wheel end files and --report.")
+@click.option("--all", "show_all", is_flag=True,
+              help="List every case of --cases and every warning (default: the 25 most "
+                   "damaging cases, warnings summarised).")
+@reports_input_errors
+def machine(file, as_json, show_cases, write_wheel_files, report, force, show_all):
+    """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
+    from hubload.commands.machine import machine as run_machine
+    run_machine(file, as_json=as_json, show_cases=show_cases,
+                write_wheel_files=write_wheel_files, force=force, report=report,
+                show_all=show_all)
+
+
+@main.command()
+@click.option("--machine", "machine_file", is_flag=True,
+              help="The machine file's format instead (hubload machine).")
+def schema(machine_file):
     """Print the load-case file format as a JSON Schema (for editors)."""
     from hubload import commands
-    commands.schema()
+    commands.schema(machine=machine_file)
 
 
 @main.command()

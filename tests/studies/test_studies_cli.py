@@ -70,7 +70,7 @@ def test_an_integer_key_needs_whole_steps(tmp_path):
 
     integer = KeyPath("x.n", (("x", None), ("n", None)), Field("n", "integer", "count"))
     original = sweep_module.parse_key_path
-    sweep_module.parse_key_path = lambda key, document: integer
+    sweep_module.parse_key_path = lambda key, document, table=None: integer
     try:
         with pytest.raises(Exception, match="whole"):
             sweep_module.parse_vary("x.n=1:2:3", {}, "f.toml")

@@ -32,6 +32,9 @@ def load_study(path: str | Path) -> Study:
     """Parse, validate and convert the file at ``path``; raise InputError naming it."""
     file = str(path)
     document = read_toml(path)
+    if isinstance(document.get("machine"), dict) and "case" not in document:
+        raise InputError("expected a load-case file; this is a machine file ([machine]): "
+                         "hubload machine reads it", file=file)
     try:
         return study_from_document(document, source=file)
     except InputError as error:

@@ -126,9 +126,15 @@ def write_report(found: api.CheckResult, file: str, report: str, force: bool,
                inputs=inputs)
 
 
-def schema() -> None:
-    from hubload.schema import FORMAT
+def schema(machine: bool = False) -> None:
     from hubload.schema.export import json_schema
+
+    if machine:
+        from hubload.schema.machineformat import MACHINE_FORMAT
+
+        click.echo(document_text(json_schema(MACHINE_FORMAT, "hubload machine file")))
+        return
+    from hubload.schema import FORMAT
 
     click.echo(document_text(json_schema(FORMAT)))
 
@@ -149,6 +155,8 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
+    if api.is_machine_file(file):
+        return machine_sweep(file, specs, as_json, plot, table, method)
     if table is not None:
         from hubload.report.spreadsheet.studies import SWEEP_SHEETS
 
@@ -188,11 +196,51 @@ def json_text(found, progress) -> str:
     return document_text(found.to_dict())
 
 
+def machine_sweep(file: str, specs: tuple[str, ...], as_json: bool, plot: str | None,
+                  table: str | None, method: str | None):
+    from hubload.report.progress import LateProgress
+
+    refuse_for_machines(plot, table, "sweeps", "or sweep a wheel file of --write-wheel-files")
+    with LateProgress("sweeping") as progress:
+        found = api.sweep(file, specs, method=method, on_progress=progress)
+        document = json_text(found, progress) if as_json else None
+    if as_json:
+        click.echo(document)
+    else:
+        from hubload.report.terminal.machine_sweep import render as render_machine
+
+        render_machine(found.value, console())
+    return found
+
+
+def refuse_for_machines(plot: str | None, table: str | None, what: str, hint: str = "") -> None:
+    """Plots and sheets of machine sweeps and comparisons are not drawn: one line saying so."""
+    for option, path in (("--plot", plot), ("--table", table)):
+        if path is not None:
+            raise InputError(f"{option} writes {what} of load-case files; for machine files "
+                             f"use --json{', ' + hint if hint else ''}", file=path)
+
+
+def machine_compare(files: tuple[str, ...], as_json: bool, plot: str | None,
+                    table: str | None, method: str | None):
+    refuse_for_machines(plot, table, "comparisons")
+    found = api.compare(list(files), method=method)
+    if as_json:
+        click.echo(document_text(found.to_dict()))
+    else:
+        from hubload.report.terminal.machine_compare import render as render_machines
+
+        render_machines(found.value, console())
+    return found
+
+
 def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
             force: bool = False, method: str | None = None,
             table: str | None = None) -> api.ComparisonResult:
     from hubload.report.progress import LateProgress
 
+    if any(api.is_machine_file(name) for name in files):
+        return machine_compare(files, as_json, plot, table, method)
     inputs = inputs_of(tuple(files), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if table is not None:

@@ -58,10 +58,10 @@ def choice_rules(choice: Choice) -> list[dict[str, Any]]:
     return []
 
 
-def json_schema(table: Table) -> dict[str, Any]:
-    """JSON Schema (draft 2020-12) of the load-case file."""
+def json_schema(table: Table, title: str = "hubload load-case file") -> dict[str, Any]:
+    """JSON Schema (draft 2020-12) of the load-case file (or, by ``table``, the machine file)."""
     return {"$schema": "https://json-schema.org/draft/2020-12/schema",
-            "title": "hubload load-case file", **table_schema(table)}
+            "title": title, **table_schema(table)}
 
 
 def toml_value(value: Any) -> str:
@@ -133,20 +133,36 @@ def reference_lines(table: Table, path: str) -> list[str]:
     return lines
 
 
-def reference_markdown(table: Table) -> str:
+LOAD_CASE_INTRO = (
+    "# Load-case file reference", "",
+    "Generated from `src/hubload/schema/fileformat.py` by "
+    "`python -m hubload.schema.export > docs/file-format.md`; do not edit by hand.",
+    "Positions are along the shaft axis from the motor's mounting face (x = 0), positive "
+    "outboard (towards the wheel); see conventions.md. Unknown keys are errors.", "")
+MACHINE_INTRO = (
+    "# Machine file reference", "",
+    "Generated from `src/hubload/schema/machineformat.py` by "
+    "`python -m hubload.schema.export machine > docs/machine-file-format.md`; do not edit by "
+    "hand. Machine axes: X forward, Y to the left, Z up; see machine.md. Unknown keys are "
+    "errors.", "")
+
+
+def reference_markdown(table: Table, intro: tuple[str, ...] = LOAD_CASE_INTRO) -> str:
     """The file-format reference page (docs/file-format.md is generated from this)."""
-    intro = ["# Load-case file reference", "",
-             "Generated from `src/hubload/schema/fileformat.py` by "
-             "`python -m hubload.schema.export > docs/file-format.md`; do not edit by hand.",
-             "Positions are along the shaft axis from the motor's mounting face (x = 0), positive "
-             "outboard (towards the wheel); see conventions.md. Unknown keys are errors.", ""]
     body = []
     for sub in table.tables:
         body += reference_lines(sub, sub.name)
-    return "\n".join(intro + body)
+    return "\n".join(list(intro) + body)
 
 
 if __name__ == "__main__":
-    from hubload.schema.fileformat import FORMAT
+    import sys
 
-    print(reference_markdown(FORMAT), end="")
+    if sys.argv[1:] == ["machine"]:
+        from hubload.schema.machineformat import MACHINE_FORMAT
+
+        print(reference_markdown(MACHINE_FORMAT, MACHINE_INTRO), end="")
+    else:
+        from hubload.schema.fileformat import FORMAT
+
+        print(reference_markdown(FORMAT), end="")

@@ -27,6 +27,8 @@ from hubload.domain.grid import grid_builder, point_study
 from hubload.domain.study import Study
 from hubload.engine import Result, evaluate, with_findings
 from hubload.errors import InputError
+from hubload.schema import FORMAT
+from hubload.schema.spec import Table
 from hubload.studies.crossing import Crossing, target_crossings
 
 MAX_POINTS = 100_000
@@ -153,17 +155,17 @@ class Sweep:
                 for fixed in itertools.product(*(range(n) for n in self.shape[:-1]))]
 
 
-def parse_vary(spec: str, document: dict, file: str) -> Axis:
+def parse_vary(spec: str, document: dict, file: str, table: Table = FORMAT) -> Axis:
     """``KEY=START:STOP:COUNT``, optionally linked to more keys moving with it
     (``&KEY2=START:STOP[:COUNT]``, the same count) -> Axis; InputError (naming the file and
     key) when malformed."""
     first, *others = spec.split(LINK)
-    axis = parse_one(first, document, file)
+    axis = parse_one(first, document, file, table)
     linked = []
     for part in others:
         if part.count(":") == 1:
             part = f"{part}:{len(axis.values)}"
-        found = parse_one(part, document, file)
+        found = parse_one(part, document, file, table)
         if len(found.values) != len(axis.values):
             raise InputError(f"linked keys move together: expected COUNT {len(axis.values)} "
                              f"like {axis.key}, got {len(found.values)}", file=file,
@@ -172,7 +174,7 @@ def parse_vary(spec: str, document: dict, file: str) -> Axis:
     return Axis(path=axis.path, values=axis.values, linked=tuple(linked))
 
 
-def parse_one(spec: str, document: dict, file: str) -> Axis:
+def parse_one(spec: str, document: dict, file: str, table: Table = FORMAT) -> Axis:
     """One ``KEY=START:STOP:COUNT``."""
     key, equals, span = spec.partition("=")
     key = key.strip()
@@ -181,7 +183,7 @@ def parse_one(spec: str, document: dict, file: str) -> Axis:
         raise InputError(f"--vary expects KEY=START:STOP:COUNT (e.g. wheel.offset_mm=60:140:9), "
                          f"got {spec!r}", file=file)
     try:
-        path = parse_key_path(key, document)
+        path = parse_key_path(key, document, table)
     except InputError as error:
         raise error.located(file) from None
     try:

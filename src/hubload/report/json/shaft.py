@@ -105,7 +105,11 @@ def extend_cases(document: dict, result: Result) -> None:
 
 
 def verdict_summary(result: Result) -> dict | None:
-    found = result.overall
+    return overall_summary(result.overall)
+
+
+def overall_summary(found) -> dict | None:
+    """``overall_verdict`` of an OverallVerdict: every item, the worst, passed."""
     if found is None:
         return None
     items = [{"item": item.name, "value": json_number(item.value),
