@@ -197,8 +197,8 @@ def template():
 @reports_input_errors
 def sweep(file, specs, as_json, plot, force, method, table):
     """Lives and safeties of FILE over a range (or grid) of values of its numeric keys."""
-    from hubload import commands
-    commands.sweep(file, specs, as_json=as_json, plot=plot, force=force, method=method,
+    from hubload.commands import studies
+    studies.sweep(file, specs, as_json=as_json, plot=plot, force=force, method=method,
                    table=table)
 
 
@@ -213,8 +213,8 @@ def sweep(file, specs, as_json, plot, force, method, table):
 @reports_input_errors
 def compare(files, as_json, plot, force, method, table):
     """Several load-case FILES side by side: lives, ratios to the first, dominant cases."""
-    from hubload import commands
-    commands.compare(files, as_json=as_json, plot=plot, force=force, method=method,
+    from hubload.commands import studies
+    studies.compare(files, as_json=as_json, plot=plot, force=force, method=method,
                      table=table)
 
 
@@ -231,8 +231,8 @@ def compare(files, as_json, plot, force, method, table):
 @reports_input_errors
 def brief(file, out, force, required_s0, method):
     """A supplier brief for FILE: cases, demands, required ratings, shaft, open questions."""
-    from hubload import commands
-    commands.brief(file, out=out, force=force, required_s0=required_s0, method=method)
+    from hubload.commands import studies
+    studies.brief(file, out=out, force=force, required_s0=required_s0, method=method)
 
 
 @main.command()
@@ -263,8 +263,8 @@ def cases(file, to, force):
 @reports_input_errors
 def setting(file, start_um, stop_um, step_um, as_json, plot, force):
     """Lives of each bearing and of the pair of FILE against the axial setting (refined method)."""
-    from hubload import commands
-    commands.setting(file, start_um, stop_um, step_um, as_json=as_json, plot=plot, force=force)
+    from hubload.commands import studies
+    studies.setting(file, start_um, stop_um, step_um, as_json=as_json, plot=plot, force=force)
 
 
 @main.command()
@@ -337,8 +337,8 @@ def fleet_options(command):
 @reports_input_errors
 def forecast(file, as_json, plot, force, method, **options):
     """Failure probability of FILE's wheel end over time and failures of its [fleet]."""
-    from hubload import commands
-    commands.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
+    from hubload.commands import reliability
+    reliability.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
 
 
 @main.command()
@@ -356,6 +356,6 @@ def forecast(file, as_json, plot, force, method, **options):
 @reports_input_errors
 def field(data, against, as_json, plot, force, weibayes_slope, method):
     """Weibull fits of field DATA (CSV or XLSX: hours, status failed/suspended per unit)."""
-    from hubload import commands
-    commands.field(data, against=against, as_json=as_json, plot=plot, force=force,
+    from hubload.commands import reliability
+    reliability.field(data, against=against, as_json=as_json, plot=plot, force=force,
                    weibayes_slope=weibayes_slope, method=method)

@@ -1,0 +1,183 @@
+"""The study commands: sweep, compare (load-case files or machines), brief and setting."""
+
+from __future__ import annotations
+
+import click
+
+from hubload import api
+from hubload.commands import (PLOT_SUFFIXES, checked, checked_table, console, inputs_of,
+                              json_text, write_table, written)
+from hubload.errors import InputError
+from hubload.report.json.text import document_text
+
+
+def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
+          force: bool = False, method: str | None = None,
+          table: str | None = None) -> api.SweepResult:
+    from hubload.report.progress import LateProgress
+
+    inputs = inputs_of((file,), plot, table)
+    checked(plot, force, PLOT_SUFFIXES, inputs)
+    if plot is not None and len(specs) not in (1, 2):
+        raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
+    if api.is_machine_file(file):
+        return machine_sweep(file, specs, as_json, plot, table, method)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import SWEEP_SHEETS
+
+        checked_table(table, SWEEP_SHEETS, force, inputs)
+    files = []
+    with LateProgress("sweeping") as progress:
+        found = api.sweep(file, specs, method=method, on_progress=progress)
+        if table is not None:
+            from hubload.report.spreadsheet.studies import sweep_sheets
+
+            progress.phase("writing the tables")
+            files += [("Table", name) for name in
+                      write_table(table, sweep_sheets(found.value), force, inputs)]
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
+
+            progress.phase("drawing the plot")
+            draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
+            save(draw(found.value), plot, force, inputs)
+            files.append(("Plot", plot))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in files:
+        written(kind, path, as_json)
+    if as_json:
+        click.echo(document)
+    else:
+        from hubload.report.terminal.sweep import render
+
+        render(found.value, console())
+    return found
+
+
+def machine_sweep(file: str, specs: tuple[str, ...], as_json: bool, plot: str | None,
+                  table: str | None, method: str | None):
+    from hubload.report.progress import LateProgress
+
+    refuse_for_machines(plot, table, "sweeps", "or sweep a wheel file of --write-wheel-files")
+    with LateProgress("sweeping") as progress:
+        found = api.sweep(file, specs, method=method, on_progress=progress)
+        document = json_text(found, progress) if as_json else None
+    if as_json:
+        click.echo(document)
+    else:
+        from hubload.report.terminal.machine_sweep import render as render_machine
+
+        render_machine(found.value, console())
+    return found
+
+
+def refuse_for_machines(plot: str | None, table: str | None, what: str, hint: str = "") -> None:
+    """Plots and sheets of machine sweeps and comparisons are not drawn: one line saying so."""
+    for option, path in (("--plot", plot), ("--table", table)):
+        if path is not None:
+            raise InputError(f"{option} writes {what} of load-case files; for machine files "
+                             f"use --json{', ' + hint if hint else ''}", file=path)
+
+
+def machine_compare(files: tuple[str, ...], as_json: bool, plot: str | None,
+                    table: str | None, method: str | None):
+    refuse_for_machines(plot, table, "comparisons")
+    found = api.compare(list(files), method=method)
+    if as_json:
+        click.echo(document_text(found.to_dict()))
+    else:
+        from hubload.report.terminal.machine_compare import render as render_machines
+
+        render_machines(found.value, console())
+    return found
+
+
+def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = None,
+            force: bool = False, method: str | None = None,
+            table: str | None = None) -> api.ComparisonResult:
+    from hubload.report.progress import LateProgress
+
+    if any(api.is_machine_file(name) for name in files):
+        return machine_compare(files, as_json, plot, table, method)
+    inputs = inputs_of(tuple(files), plot, table)
+    checked(plot, force, PLOT_SUFFIXES, inputs)
+    if table is not None:
+        from hubload.report.spreadsheet.studies import COMPARE_SHEETS
+
+        checked_table(table, COMPARE_SHEETS, force, inputs)
+    outputs = []
+    with LateProgress(f"comparing {len(files)} files") as progress:
+        found = api.compare(list(files), method=method, on_progress=progress)
+        if table is not None:
+            from hubload.report.spreadsheet.studies import compare_sheets
+
+            progress.phase("writing the tables")
+            outputs += [("Table", name) for name in
+                        write_table(table, compare_sheets(found.value), force, inputs)]
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.spectrum import compare_figure
+
+            progress.phase("drawing the plot")
+            save(compare_figure(found.value), plot, force, inputs)
+            outputs.append(("Plot", plot))
+        document = json_text(found, progress) if as_json else None
+    for kind, path in outputs:
+        written(kind, path, as_json)
+    if as_json:
+        click.echo(document)
+    else:
+        from hubload.report.terminal.compare import render
+
+        render(found.value, console())
+    return found
+
+
+def brief(file: str, out: str | None = None, force: bool = False,
+          required_s0: float | None = None, method: str | None = None) -> api.BriefResult:
+    from hubload.report.progress import LateProgress
+
+    checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else (),
+            inputs=(file,))
+    from hubload.report.terminal.tables import plain
+
+    html = out is not None and out.lower().endswith((".html", ".htm"))
+    with LateProgress("searching the required ratings") as progress:
+        found = api.brief(file, required_s0=required_s0, method=method, on_progress=progress)
+        progress.phase("writing the brief")
+        # no escape sequence from the file reaches a terminal
+        text = found.to_html() if html else plain(found.to_markdown())
+    if out is None:
+        click.echo(text, nl=False)
+    else:
+        from hubload.report.files import write_text
+
+        write_text(out, text, force, inputs=(file,))
+        written("Brief", out)
+    return found
+
+
+def setting(file: str, start_um: float, stop_um: float, step_um: float, as_json: bool = False,
+            plot: str | None = None, force: bool = False) -> api.SettingResult:
+    from hubload.report.progress import LateProgress
+
+    checked(plot, force, PLOT_SUFFIXES, (file,))
+    with LateProgress("solving the cases at each setting") as progress:
+        found = api.setting(file, start_um, stop_um, step_um, on_progress=progress)
+        if plot is not None:
+            from hubload.report.plots import save
+            from hubload.report.plots.setting import setting_figure
+
+            progress.phase("drawing the plot")
+            save(setting_figure(found.value), plot, force, (file,))
+        document = json_text(found, progress) if as_json else None
+    if plot is not None:
+        written("Plot", plot, as_json)
+    if as_json:
+        click.echo(document)
+    else:
+        from hubload.report.terminal.setting import render_setting
+
+        render_setting(found.value, console())
+    return found
