@@ -1,5 +1,7 @@
 """Prints how long a 200-point sweep of a 10-case file takes (compute only, plots aside),
-against the single-file path (read + validate + evaluate) called 200 times.
+against the single-file path (read + validate + evaluate) called 200 times; then, as whole
+commands, the 200-point sweep against one `check` (paired runs, goal 1.5x) and a 200 x 200
+grid's time and peak memory (goals 3 s and 500 MB).
 
 A script, not a test: run `python tests/benchmarks/bench_sweep.py`. The 10-case file is
 the bundled yard loader (with its lubrication block, so L10m is computed) with its
@@ -7,7 +9,11 @@ spectrum stretched to 10 cases.
 """
 
 import copy
+import statistics
+import subprocess
+import sys
 import tempfile
+import time
 import tomllib
 from pathlib import Path
 
@@ -73,6 +79,50 @@ def main():
           f"vs single-file path + JSON x{POINTS}          {single_json_s * 1e3:8.1f} ms "
           f"-> {single_json_s / sweep_s:.1f}x")
     print(f"  target (< 1000 ms for the whole sweep): {'met' if sweep_s < 1.0 else 'NOT met'}")
+    whole_commands(file)
+
+
+def wall_s(command) -> float:
+    start = time.perf_counter()
+    subprocess.run(command, check=True, stdout=subprocess.DEVNULL)
+    return time.perf_counter() - start
+
+
+GRID_CHILD = """
+import contextlib, io, sys, time
+from pathlib import Path
+from hubload.cli import main
+start = time.perf_counter()
+with contextlib.redirect_stdout(io.StringIO()):
+    try:
+        main(sys.argv[1:])
+    except SystemExit:
+        pass
+elapsed = time.perf_counter() - start
+peak = next(int(line.split()[1]) for line in Path("/proc/self/status").read_text().splitlines()
+            if line.startswith("VmHWM:")) / 1024
+print(f"{elapsed:.2f} {peak:.0f}")
+"""
+
+
+def whole_commands(file: Path, runs: int = 7) -> None:
+    """The sweep command against one check of the same file, A B A B ..., and a big grid."""
+    hubload = [sys.executable, "-m", "hubload"]
+    sweep = hubload + ["sweep", str(file), "--vary",
+                       f"wheel.offset_mm={OFFSETS_MM[0]}:{OFFSETS_MM[-1]}:{POINTS}", "--json"]
+    check = hubload + ["check", str(file), "--json"]
+    pairs = [(wall_s(sweep), wall_s(check)) for _ in range(runs)]
+    ratio = statistics.median(a / b for a, b in pairs)
+    print(f"whole commands, median of {runs} paired runs:")
+    print(f"  sweep of {POINTS} points --json / check --json   {ratio:4.2f}x (goal 1.5x)  "
+          f"{statistics.median(a for a, _ in pairs) * 1e3:5.0f} ms vs "
+          f"{statistics.median(b for _, b in pairs) * 1e3:4.0f} ms")
+    grid = ["sweep", str(file), "--vary", "wheel.offset_mm=40:200:200",
+            "--vary", "wheel.loaded_radius_mm=300:500:200", "--json"]
+    seconds, peak_mb = subprocess.run([sys.executable, "-c", GRID_CHILD, *grid], check=True,
+                                      capture_output=True, text=True).stdout.split()
+    print(f"  200 x 200 grid --json (in-process)          {float(seconds):5.2f} s (goal 3 s), "
+          f"peak {float(peak_mb):4.0f} MB (goal 500 MB)")
 
 
 if __name__ == "__main__":
