@@ -1,7 +1,7 @@
 """One pass over one log: direct damage and dwell classing, chunk by chunk.
 
 Every chunk of clean samples is evaluated by the engine as a batch of load
-cases; the per-sample Palmgren-Miner damage (hold time / case life) of each
+cases (engine.samples: only the per-sample lives and loads a log needs); the per-sample Palmgren-Miner damage (hold time / case life) of each
 bearing and the classing weights go into a dwell table. Memory stays bounded
 by the chunk size and the number of occupied classes; there is no loop per row.
 """
@@ -10,15 +10,19 @@ from __future__ import annotations
 
 import dataclasses
 import functools
+import os
+from collections import deque
+from collections.abc import Iterable, Iterator
+from concurrent.futures import Future, ThreadPoolExecutor
 from dataclasses import dataclass, field
 from pathlib import Path
 
 import numpy as np
 
 from hubload.domain.study import Study
-from hubload.engine import evaluate
+from hubload.engine.samples import SampleLives, sample_lives
 from hubload.errors import InputError
-from hubload.logs.clean import Cleaner, CleaningReport
+from hubload.logs.clean import Cleaner, CleaningReport, Samples
 from hubload.logs import shaft
 from hubload.logs.columns import ColumnPlan, plan_columns
 from hubload.logs.reader import headers, read_chunks
@@ -55,6 +59,9 @@ class LogOptions:
     gaps: str = "error"
     max_gap_s: float | None = None
     classes: tuple[int, ...] = tuple(DEFAULT_CLASSES.values())
+    # threads that evaluate one log's chunks: None = one per core; 1 where logs already
+    # run in parallel processes (fleets), so that pools do not nest
+    chunk_workers: int | None = None
 
 
 @dataclass(frozen=True)
@@ -104,6 +111,10 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
 
     Every sample is evaluated by the ISO 281 rule for the pair, whatever the study's method:
     the refined method solves the log's classes instead (logs.spectrum), not millions of rows.
+    Reading and cleaning run in this thread (the cleaner carries rows from chunk to chunk);
+    each clean chunk is evaluated and classed on a worker thread (numpy releases the GIL
+    in its loops), and the chunks' results are merged in file order, so the outcome does
+    not depend on the number of threads or their timing.
     """
     path = Path(path)
     study = dataclasses.replace(study, method="iso281")
@@ -116,23 +127,18 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     peak = dict.fromkeys(LABELS, 0.0)
     shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
-    for samples in cleaner.run(read_chunks(path, plan.headers)):
-        points = operating_points(samples, plan, study, str(path))
-        cases = sample_cases(points, samples.hold_s)
-        for flag, seconds in flag_time_s(points, samples.hold_s).items():
+
+    def evaluate_chunk(samples: Samples) -> ChunkPart:
+        return chunk_part(samples, plan, study, str(path), options.classes, len(weight_names))
+
+    parts = in_file_order(evaluate_chunk, cleaner.run(read_chunks(path, plan.headers)),
+                          options.chunk_workers or os.cpu_count() or 1)
+    for part in parts:
+        table = dwell.merged([table, part.table], options.classes, MIN_EXPONENTS)
+        for flag, seconds in part.flag_time_s.items():
             flagged[flag] += seconds
-        temperature_c = sample_temperature_c(samples, study)
-        result = evaluate(with_cases(study, cases, temperature_c), with_findings=False)
-        hold_h = samples.hold_s / SECONDS_PER_HOUR
-        damages = [iso281.damage_rate_per_hour(hold_h, life_h)
-                   for life_h in case_lives(result)] + shaft.sample_damages(result, hold_h)
-        shaft_extremes = shaft.worst(shaft_extremes, shaft.chunk_extremes(result))
-        flagged[KAPPA_FLAG] += kappa_outside_time_s(result, samples.hold_s)
-        for label in LABELS:
-            peak[label] = max(peak[label], float(np.max(
-                result.bearings[label].static_equivalent_n)))
-        values, weights = class_inputs(cases, samples.hold_s, temperature_c, damages)
-        table = dwell.add_samples(table, values, weights, options.classes, MIN_EXPONENTS)
+        peak = {label: max(peak[label], part.peak_static_load_n[label]) for label in LABELS}
+        shaft_extremes = shaft.worst(shaft_extremes, part.shaft)
     cleaning = cleaner.report
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
@@ -141,20 +147,78 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
                       weights=weight_names, shaft=shaft_extremes)
 
 
-def case_lives(result) -> list[np.ndarray]:
+@dataclass(frozen=True)
+class ChunkPart:
+    """What one chunk of samples adds to a log's summary."""
+
+    table: dwell.DwellTable
+    flag_time_s: dict[str, float]
+    peak_static_load_n: dict[str, float]
+    shaft: dict[str, np.ndarray] | None
+
+
+def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str,
+               classes: tuple[int, ...], weight_count: int) -> ChunkPart:
+    """Operating points, per-sample lives and damage, and the dwell table of one chunk."""
+    points = operating_points(samples, plan, study, file)
+    cases = sample_cases(points, samples.hold_s)
+    flagged = flag_time_s(points, samples.hold_s)
+    temperature_c = sample_temperature_c(samples, study)
+    lives = sample_lives(with_cases(study, cases, temperature_c))
+    hold_h = samples.hold_s / SECONDS_PER_HOUR
+    damages = [iso281.damage_rate_per_hour(hold_h, life_h)
+               for life_h in case_lives(lives)] + shaft.sample_damages(lives, hold_h)
+    flagged[KAPPA_FLAG] = kappa_outside_time_s(lives, samples.hold_s)
+    values, weights = class_inputs(cases, samples.hold_s, temperature_c, damages)
+    empty = dwell.empty_table(len(CLASS_CHANNELS), weight_count, MIN_EXPONENTS)
+    return ChunkPart(
+        table=dwell.add_samples(empty, values, weights, classes, MIN_EXPONENTS),
+        flag_time_s=flagged,
+        peak_static_load_n={label: float(np.max(lives.bearings[label].static_equivalent_n))
+                            for label in LABELS},
+        shaft=shaft.chunk_extremes(lives))
+
+
+def in_file_order(function, items: Iterable, workers: int) -> Iterator:
+    """``function`` of every item, in the items' order, on up to ``workers`` threads.
+
+    At most ``workers + 1`` items are in flight, so memory stays bounded by the chunk
+    size. When producing the items fails (a bad row), the items before it are finished
+    first: their errors come first, as in a pass one chunk after the other.
+    """
+    if workers <= 1:
+        yield from map(function, items)
+        return
+    source = iter(items)
+    with ThreadPoolExecutor(max_workers=workers) as pool:
+        pending: deque[Future] = deque()
+        while True:
+            try:
+                item = next(source)
+            except StopIteration:
+                break
+            except Exception:
+                for future in pending:
+                    future.result()
+                raise
+            pending.append(pool.submit(function, item))
+            if len(pending) > workers:
+                yield pending.popleft().result()
+        while pending:
+            yield pending.popleft().result()
+
+
+def case_lives(lives: SampleLives) -> list[np.ndarray]:
     """Per-sample L10 [h] of each bearing, then L10m (inf without lubrication)."""
-    basic = [result.bearings[label].case_life_h for label in LABELS]
-    if result.modified is None:
-        return basic + [np.full_like(basic[0], np.inf) for _ in LABELS]
-    return basic + [result.modified.bearings[label].case_life_h for label in LABELS]
+    return ([lives.bearings[label].case_life_h for label in LABELS]
+            + [lives.bearings[label].modified_life_h for label in LABELS])
 
 
-def kappa_outside_time_s(result, hold_s: np.ndarray) -> float:
+def kappa_outside_time_s(lives: SampleLives, hold_s: np.ndarray) -> float:
     """Hold time [s] of samples where either bearing runs at kappa < 0.1."""
-    if result.modified is None:
+    if not lives.modified:
         return 0.0
-    outside = np.any([result.modified.bearings[label].kappa_outside_scope for label in LABELS],
-                     axis=0)
+    outside = np.any([lives.bearings[label].kappa_outside_scope for label in LABELS], axis=0)
     return float(np.sum(hold_s[outside]))
 
 
