@@ -13,6 +13,7 @@ import numpy as np
 
 from hubload.domain.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
+from hubload.model import statics
 from hubload.model.requirements import wheel_moment_nm
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study
@@ -193,7 +194,7 @@ def permissible_result(study: Study) -> PermissibleResult | None:
     cases, wheel = study.cases, study.wheel
     offset = per_study(wheel.offset_m)
     permissible = read_curve(offset, curve)[..., None]
-    radial = np.hypot(cases.wheel_load_n, cases.tractive_force_n)
+    radial = statics.resultant(cases.wheel_load_n, cases.tractive_force_n)
     moment = wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
                              cases.tractive_force_n, wheel.offset_m, wheel.loaded_radius_m)
     lever = np.asarray(wheel.offset_m, dtype=float)

@@ -49,6 +49,9 @@ WEIGHTS = ("time_s", "revolutions",
            *(f"damage_{label}" for label in LABELS),
            *(f"damage_modified_{label}" for label in LABELS))
 KAPPA_FLAG = "kappa_outside_scope"
+# samples evaluated at once: a few MB of temporaries (measured: 16-32 k rows run about a
+# third faster per row than 64 k, whose temporaries spill out of a 2 MB L2 cache)
+PIECE_ROWS = 16_384
 
 
 @dataclass(frozen=True)
@@ -131,7 +134,7 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     def evaluate_chunk(samples: Samples) -> ChunkPart:
         return chunk_part(samples, plan, study, str(path), options.classes, len(weight_names))
 
-    parts = in_file_order(evaluate_chunk, cleaner.run(read_chunks(path, plan.headers)),
+    parts = in_file_order(evaluate_chunk, pieces(cleaner.run(read_chunks(path, plan.headers))),
                           options.chunk_workers or os.cpu_count() or 1)
     for part in parts:
         table = dwell.merged([table, part.table], options.classes, MIN_EXPONENTS)
@@ -145,6 +148,14 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
                       peak_static_load_n=peak, flag_time_s=flagged,
                       logged_temperature="temperature_C" in plan.headers,
                       weights=weight_names, shaft=shaft_extremes)
+
+
+def pieces(chunks: Iterable[Samples], rows: int = PIECE_ROWS) -> Iterator[Samples]:
+    """The samples in pieces of at most ``rows`` (views): the per-sample path's dozens of
+    temporary arrays then stay in the processor's cache."""
+    for samples in chunks:
+        for start in range(0, len(samples), rows):
+            yield samples.take(slice(start, start + rows))
 
 
 @dataclass(frozen=True)
@@ -231,13 +242,24 @@ def class_inputs(cases, hold_s: np.ndarray, temperature_c: np.ndarray,
     bearing life exponent) so that a class level can be their damage-equivalent
     power mean; a class never straddles zero, so its sign is the class's sign.
     """
-    forces_kn = np.stack([cases.wheel_load_n, cases.side_force_n, cases.tractive_force_n]) / KN
+    # written into two arrays allocated once: the chunk's largest ones
+    values = np.empty((len(CLASS_CHANNELS), hold_s.size))
+    for row, force_n in enumerate((cases.wheel_load_n, cases.side_force_n,
+                                   cases.tractive_force_n)):
+        np.divide(force_n, KN, out=values[row])
+    values[3] = cases.speed_rpm
+    forces_kn = values[:3]
     revolutions = cases.speed_rpm * hold_s / 60.0
-    values = np.concatenate([forces_kn, cases.speed_rpm[None]])
-    weights = np.concatenate([hold_s[None], revolutions[None],
-                              np.abs(forces_kn) ** LEVEL_EXPONENT * revolutions,
-                              forces_kn * hold_s, (temperature_c * revolutions)[None],
-                              (temperature_c * hold_s)[None], np.stack(damages)])
+    weights = np.empty((10 + len(damages), hold_s.size))
+    weights[0], weights[1] = hold_s, revolutions
+    powers = weights[2:5]
+    np.power(np.abs(forces_kn), LEVEL_EXPONENT, out=powers)
+    powers *= revolutions
+    np.multiply(forces_kn, hold_s, out=weights[5:8])
+    np.multiply(temperature_c, revolutions, out=weights[8])
+    np.multiply(temperature_c, hold_s, out=weights[9])
+    for row, damage in enumerate(damages, start=10):
+        weights[row] = damage
     return values, weights
 
 
