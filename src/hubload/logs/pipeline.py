@@ -10,10 +10,11 @@ from __future__ import annotations
 
 import dataclasses
 import functools
+import multiprocessing
 import os
 from collections import deque
 from collections.abc import Iterable, Iterator
-from concurrent.futures import Future, ThreadPoolExecutor
+from concurrent.futures import Future, ProcessPoolExecutor
 from dataclasses import dataclass, field
 from pathlib import Path
 
@@ -62,7 +63,7 @@ class LogOptions:
     gaps: str = "error"
     max_gap_s: float | None = None
     classes: tuple[int, ...] = tuple(DEFAULT_CLASSES.values())
-    # threads that evaluate one log's chunks: None = one per core; 1 where logs already
+    # processes that evaluate one log's pieces: None = one per core; 1 where logs already
     # run in parallel processes (fleets), so that pools do not nest
     chunk_workers: int | None = None
 
@@ -114,10 +115,11 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
 
     Every sample is evaluated by the ISO 281 rule for the pair, whatever the study's method:
     the refined method solves the log's classes instead (logs.spectrum), not millions of rows.
-    Reading and cleaning run in this thread (the cleaner carries rows from chunk to chunk);
-    each clean chunk is evaluated and classed on a worker thread (numpy releases the GIL
-    in its loops), and the chunks' results are merged in file order, so the outcome does
-    not depend on the number of threads or their timing.
+    Reading and cleaning run in this process (the cleaner carries rows from chunk to chunk);
+    the clean samples are evaluated and classed in pieces on worker processes (threads
+    would not do: the per-sample path's short numpy calls keep taking the GIL), and the
+    pieces' results are merged in file order, so the outcome does not depend on the
+    number of workers or their timing.
     """
     path = Path(path)
     study = dataclasses.replace(study, method="iso281")
@@ -131,9 +133,8 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
 
-    def evaluate_chunk(samples: Samples) -> ChunkPart:
-        return chunk_part(samples, plan, study, str(path), options.classes, len(weight_names))
-
+    evaluate_chunk = functools.partial(chunk_part, plan=plan, study=study, file=str(path),
+                                       classes=options.classes, weight_count=len(weight_names))
     parts = in_file_order(evaluate_chunk, pieces(cleaner.run(read_chunks(path, plan.headers))),
                           options.chunk_workers or os.cpu_count() or 1)
     for part in parts:
@@ -191,18 +192,33 @@ def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str,
 
 
 def in_file_order(function, items: Iterable, workers: int) -> Iterator:
-    """``function`` of every item, in the items' order, on up to ``workers`` threads.
+    """``function`` of every item, in the items' order, on up to ``workers`` processes.
 
-    At most ``workers + 1`` items are in flight, so memory stays bounded by the chunk
-    size. When producing the items fails (a bad row), the items before it are finished
-    first: their errors come first, as in a pass one chunk after the other.
+    A log of one piece is evaluated here (no processes started). At most ``2 workers``
+    items are in flight, so memory stays bounded by the piece size. When producing the
+    items fails (a bad row), the items before it are finished first: their errors come
+    first, as in a pass one piece after the other.
     """
-    if workers <= 1:
-        yield from map(function, items)
-        return
     source = iter(items)
-    with ThreadPoolExecutor(max_workers=workers) as pool:
-        pending: deque[Future] = deque()
+    if workers <= 1 or "fork" not in multiprocessing.get_all_start_methods():
+        yield from map(function, source)
+        return
+    held = next(source, None)
+    if held is None:
+        return
+    try:
+        following = next(source, None)
+    except Exception:
+        function(held)
+        raise
+    if following is None:
+        yield function(held)
+        return
+    # forked workers start at once and inherit the loaded modules and warning filters
+    with ProcessPoolExecutor(max_workers=workers,
+                             mp_context=multiprocessing.get_context("fork")) as pool:
+        pending: deque[Future] = deque([pool.submit(function, held),
+                                        pool.submit(function, following)])
         while True:
             try:
                 item = next(source)
@@ -213,7 +229,7 @@ def in_file_order(function, items: Iterable, workers: int) -> Iterator:
                     future.result()
                 raise
             pending.append(pool.submit(function, item))
-            if len(pending) > workers:
+            if len(pending) >= 2 * workers:
                 yield pending.popleft().result()
         while pending:
             yield pending.popleft().result()
