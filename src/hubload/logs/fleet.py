@@ -10,7 +10,7 @@ from __future__ import annotations
 import os
 from collections.abc import Callable
 from concurrent.futures import ProcessPoolExecutor, as_completed
-from dataclasses import dataclass, replace
+from dataclasses import dataclass
 from pathlib import Path
 
 from hubload.domain.study import Study
@@ -65,7 +65,6 @@ def run_local(paths: list[str], study: Study, options: LogOptions, jobs: int | N
             progress(path)
         return results
     found: dict[str, LogSummary | Failure] = {}
-    options = replace(options, chunk_workers=1)   # the logs' processes use the cores
     with ProcessPoolExecutor(max_workers=workers) as pool:
         futures = {pool.submit(summarise, path, study, options): path for path in paths}
         for future in as_completed(futures):
@@ -97,8 +96,7 @@ def run_cluster(address: str, paths: list[str], study: Study, options: LogOption
         raise InputError(f"cannot reach the Dask scheduler at {address!r} ({error})",
                          key_path="--cluster") from None
     with client:
-        futures = client.map(summarise, paths, study=study,
-                             options=replace(options, chunk_workers=1), pure=False)
+        futures = client.map(summarise, paths, study=study, options=options, pure=False)
         names = {future.key: path for future, path in zip(futures, paths)}
         found = {}
         for future in completed(futures):

@@ -10,11 +10,7 @@ from __future__ import annotations
 
 import dataclasses
 import functools
-import multiprocessing
-import os
-from collections import deque
 from collections.abc import Iterable, Iterator
-from concurrent.futures import Future, ProcessPoolExecutor
 from dataclasses import dataclass, field
 from pathlib import Path
 
@@ -63,9 +59,6 @@ class LogOptions:
     gaps: str = "error"
     max_gap_s: float | None = None
     classes: tuple[int, ...] = tuple(DEFAULT_CLASSES.values())
-    # processes that evaluate one log's pieces: None = one per core; 1 where logs already
-    # run in parallel processes (fleets), so that pools do not nest
-    chunk_workers: int | None = None
 
 
 @dataclass(frozen=True)
@@ -115,11 +108,9 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
 
     Every sample is evaluated by the ISO 281 rule for the pair, whatever the study's method:
     the refined method solves the log's classes instead (logs.spectrum), not millions of rows.
-    Reading and cleaning run in this process (the cleaner carries rows from chunk to chunk);
-    the clean samples are evaluated and classed in pieces on worker processes (threads
-    would not do: the per-sample path's short numpy calls keep taking the GIL), and the
-    pieces' results are merged in file order, so the outcome does not depend on the
-    number of workers or their timing.
+    One process, one thread (measured: worker threads gain nothing, as the per-sample
+    path's short numpy calls keep taking the GIL; forked worker processes lost time on a
+    10-million-row log, where the reader's pages shared with them are copied on write).
     """
     path = Path(path)
     study = dataclasses.replace(study, method="iso281")
@@ -133,12 +124,10 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
 
-    evaluate_chunk = functools.partial(chunk_part, plan=plan, study=study, file=str(path),
-                                       classes=options.classes, weight_count=len(weight_names))
-    parts = in_file_order(evaluate_chunk, pieces(cleaner.run(read_chunks(path, plan.headers))),
-                          options.chunk_workers or os.cpu_count() or 1)
-    for part in parts:
-        table = dwell.merged([table, part.table], options.classes, MIN_EXPONENTS)
+    for samples in pieces(cleaner.run(read_chunks(path, plan.headers))):
+        part = chunk_part(samples, plan, study, str(path))
+        table = dwell.add_samples(table, part.values, part.weights, options.classes,
+                                  MIN_EXPONENTS)
         for flag, seconds in part.flag_time_s.items():
             flagged[flag] += seconds
         peak = {label: max(peak[label], part.peak_static_load_n[label]) for label in LABELS}
@@ -161,17 +150,18 @@ def pieces(chunks: Iterable[Samples], rows: int = PIECE_ROWS) -> Iterator[Sample
 
 @dataclass(frozen=True)
 class ChunkPart:
-    """What one chunk of samples adds to a log's summary."""
+    """What one piece of samples adds to a log's summary: classed values and weights
+    (class_inputs), flagged time, peak static loads and shaft extremes."""
 
-    table: dwell.DwellTable
+    values: np.ndarray
+    weights: np.ndarray
     flag_time_s: dict[str, float]
     peak_static_load_n: dict[str, float]
     shaft: dict[str, np.ndarray] | None
 
 
-def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str,
-               classes: tuple[int, ...], weight_count: int) -> ChunkPart:
-    """Operating points, per-sample lives and damage, and the dwell table of one chunk."""
+def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str) -> ChunkPart:
+    """Operating points, per-sample lives and damage, and the classing inputs of a piece."""
     points = operating_points(samples, plan, study, file)
     cases = sample_cases(points, samples.hold_s)
     flagged = flag_time_s(points, samples.hold_s)
@@ -182,57 +172,11 @@ def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str,
                for life_h in case_lives(lives)] + shaft.sample_damages(lives, hold_h)
     flagged[KAPPA_FLAG] = kappa_outside_time_s(lives, samples.hold_s)
     values, weights = class_inputs(cases, samples.hold_s, temperature_c, damages)
-    empty = dwell.empty_table(len(CLASS_CHANNELS), weight_count, MIN_EXPONENTS)
     return ChunkPart(
-        table=dwell.add_samples(empty, values, weights, classes, MIN_EXPONENTS),
-        flag_time_s=flagged,
+        values=values, weights=weights, flag_time_s=flagged,
         peak_static_load_n={label: float(np.max(lives.bearings[label].static_equivalent_n))
                             for label in LABELS},
         shaft=shaft.chunk_extremes(lives))
-
-
-def in_file_order(function, items: Iterable, workers: int) -> Iterator:
-    """``function`` of every item, in the items' order, on up to ``workers`` processes.
-
-    A log of one piece is evaluated here (no processes started). At most ``2 workers``
-    items are in flight, so memory stays bounded by the piece size. When producing the
-    items fails (a bad row), the items before it are finished first: their errors come
-    first, as in a pass one piece after the other.
-    """
-    source = iter(items)
-    if workers <= 1 or "fork" not in multiprocessing.get_all_start_methods():
-        yield from map(function, source)
-        return
-    held = next(source, None)
-    if held is None:
-        return
-    try:
-        following = next(source, None)
-    except Exception:
-        function(held)
-        raise
-    if following is None:
-        yield function(held)
-        return
-    # forked workers start at once and inherit the loaded modules and warning filters
-    with ProcessPoolExecutor(max_workers=workers,
-                             mp_context=multiprocessing.get_context("fork")) as pool:
-        pending: deque[Future] = deque([pool.submit(function, held),
-                                        pool.submit(function, following)])
-        while True:
-            try:
-                item = next(source)
-            except StopIteration:
-                break
-            except Exception:
-                for future in pending:
-                    future.result()
-                raise
-            pending.append(pool.submit(function, item))
-            if len(pending) >= 2 * workers:
-                yield pending.popleft().result()
-        while pending:
-            yield pending.popleft().result()
 
 
 def case_lives(lives: SampleLives) -> list[np.ndarray]:
