@@ -10,7 +10,6 @@ from __future__ import annotations
 
 import dataclasses
 import functools
-from collections.abc import Iterable, Iterator
 from dataclasses import dataclass, field
 from pathlib import Path
 
@@ -124,14 +123,18 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
     shaft_extremes = None
     flagged = dict.fromkeys((*FLAGS, KAPPA_FLAG), 0.0)
 
-    for samples in pieces(cleaner.run(read_chunks(path, plan.headers))):
-        part = chunk_part(samples, plan, study, str(path))
-        table = dwell.add_samples(table, part.values, part.weights, options.classes,
-                                  MIN_EXPONENTS)
-        for flag, seconds in part.flag_time_s.items():
-            flagged[flag] += seconds
-        peak = {label: max(peak[label], part.peak_static_load_n[label]) for label in LABELS}
-        shaft_extremes = shaft.worst(shaft_extremes, part.shaft)
+    for samples in cleaner.run(read_chunks(path, plan.headers)):
+        # the pieces write their classing inputs into the chunk's arrays, classed at once
+        values = np.empty((len(CLASS_CHANNELS), len(samples)))
+        weights = np.empty((len(weight_names), len(samples)))
+        for piece in pieces(len(samples)):
+            part = chunk_part(samples.take(piece), plan, study, str(path),
+                              (values[:, piece], weights[:, piece]))
+            for flag, seconds in part.flag_time_s.items():
+                flagged[flag] += seconds
+            peak = {label: max(peak[label], part.peak_static_load_n[label]) for label in LABELS}
+            shaft_extremes = shaft.worst(shaft_extremes, part.shaft)
+        table = dwell.add_samples(table, values, weights, options.classes, MIN_EXPONENTS)
     cleaning = cleaner.report
     cleaning.notes[:0] = plan.notes
     return LogSummary(name=str(path), plan=plan, cleaning=cleaning, table=table,
@@ -140,28 +143,26 @@ def process_log(path: str | Path, study: Study, options: LogOptions) -> LogSumma
                       weights=weight_names, shaft=shaft_extremes)
 
 
-def pieces(chunks: Iterable[Samples], rows: int = PIECE_ROWS) -> Iterator[Samples]:
-    """The samples in pieces of at most ``rows`` (views): the per-sample path's dozens of
+def pieces(size: int, rows: int = PIECE_ROWS) -> list[slice]:
+    """Consecutive slices of at most ``rows`` samples: the per-sample path's dozens of
     temporary arrays then stay in the processor's cache."""
-    for samples in chunks:
-        for start in range(0, len(samples), rows):
-            yield samples.take(slice(start, start + rows))
+    return [slice(start, min(start + rows, size)) for start in range(0, size, rows)]
 
 
 @dataclass(frozen=True)
 class ChunkPart:
-    """What one piece of samples adds to a log's summary: classed values and weights
-    (class_inputs), flagged time, peak static loads and shaft extremes."""
+    """What one piece of samples adds to a log's summary besides its classing inputs:
+    flagged time, peak static loads and shaft extremes."""
 
-    values: np.ndarray
-    weights: np.ndarray
     flag_time_s: dict[str, float]
     peak_static_load_n: dict[str, float]
     shaft: dict[str, np.ndarray] | None
 
 
-def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str) -> ChunkPart:
-    """Operating points, per-sample lives and damage, and the classing inputs of a piece."""
+def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str,
+               out: tuple[np.ndarray, np.ndarray]) -> ChunkPart:
+    """Operating points, per-sample lives and damage of a piece; its classed values and
+    weights (class_inputs) go into ``out``."""
     points = operating_points(samples, plan, study, file)
     cases = sample_cases(points, samples.hold_s)
     flagged = flag_time_s(points, samples.hold_s)
@@ -171,9 +172,9 @@ def chunk_part(samples: Samples, plan: ColumnPlan, study: Study, file: str) -> C
     damages = [iso281.damage_rate_per_hour(hold_h, life_h)
                for life_h in case_lives(lives)] + shaft.sample_damages(lives, hold_h)
     flagged[KAPPA_FLAG] = kappa_outside_time_s(lives, samples.hold_s)
-    values, weights = class_inputs(cases, samples.hold_s, temperature_c, damages)
+    class_inputs(cases, samples.hold_s, temperature_c, damages, out)
     return ChunkPart(
-        values=values, weights=weights, flag_time_s=flagged,
+        flag_time_s=flagged,
         peak_static_load_n={label: float(np.max(lives.bearings[label].static_equivalent_n))
                             for label in LABELS},
         shaft=shaft.chunk_extremes(lives))
@@ -194,23 +195,22 @@ def kappa_outside_time_s(lives: SampleLives, hold_s: np.ndarray) -> float:
 
 
 def class_inputs(cases, hold_s: np.ndarray, temperature_c: np.ndarray,
-                 damages: list[np.ndarray]):
+                 damages: list[np.ndarray], out: tuple[np.ndarray, np.ndarray]):
     """Classed values (kN, r/min) and the per-sample weights in the order of WEIGHTS
-    (then the shaft sections' damage).
+    (then the shaft sections' damage), written into ``out`` = (values, weights): the
+    chunk's largest arrays, allocated once per chunk.
 
     Forces enter the revolution-weighted sums as |F|^p (p = 10/3, the roller
     bearing life exponent) so that a class level can be their damage-equivalent
     power mean; a class never straddles zero, so its sign is the class's sign.
     """
-    # written into two arrays allocated once: the chunk's largest ones
-    values = np.empty((len(CLASS_CHANNELS), hold_s.size))
+    values, weights = out
     for row, force_n in enumerate((cases.wheel_load_n, cases.side_force_n,
                                    cases.tractive_force_n)):
         np.divide(force_n, KN, out=values[row])
     values[3] = cases.speed_rpm
     forces_kn = values[:3]
     revolutions = cases.speed_rpm * hold_s / 60.0
-    weights = np.empty((10 + len(damages), hold_s.size))
     weights[0], weights[1] = hold_s, revolutions
     powers = weights[2:5]
     np.power(np.abs(forces_kn), LEVEL_EXPONENT, out=powers)
