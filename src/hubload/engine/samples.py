@@ -64,20 +64,21 @@ def sample_lives(study: Study) -> SampleLives:
         equivalent, life_h = rule_case_life(given[label], radial, axial, speed)
         static = iso281.equivalent_static_load_n(radial, axial, given[label].y0)
         loads[label] = (radial, axial, equivalent, static, life_h)
-    bearings = {label: SampleBearing(*found, *modified_lives(study, given[label], found))
+    bearings = {label: SampleBearing(*found, *modified_lives(study, given[label], found[2],
+                                                             found[4]))
                 for label, found in loads.items()}
     finite.check_lives(study, SampleLives(bearings, False, None))
     return SampleLives(bearings, study.lubrication is not None, sample_shaft(study))
 
 
-def modified_lives(study: Study, bearing, loads) -> tuple[np.ndarray, np.ndarray]:
-    """L10m [h] and kappa-outside-scope per sample (inf and False without lubrication)."""
-    life_h = loads[-1]
+def modified_lives(study: Study, bearing, equivalent_n, life_h) -> tuple[np.ndarray, np.ndarray]:
+    """L10m [h] and kappa-outside-scope per sample from P [N] and L10 [h] (inf and False
+    without lubrication)."""
     if study.lubrication is None:
         return np.full_like(life_h, np.inf), np.zeros(life_h.shape, dtype=bool)
     level, _ = modified_life.contamination_level(study.lubrication)
     found = modified_life.modified_cases(
-        bearing, loads[2], life_h, viscosity_per_sample(study.lubrication), level,
+        bearing, equivalent_n, life_h, viscosity_per_sample(study.lubrication), level,
         modified_life.reliability_life_factor(study), study.cases.speed_rpm)
     return found.case_life_h, lub.kappa_outside_scope(found.kappa)
 

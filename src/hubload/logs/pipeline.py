@@ -1,9 +1,10 @@
 """One pass over one log: direct damage and dwell classing, chunk by chunk.
 
-Every chunk of clean samples is evaluated by the engine as a batch of load
-cases (engine.samples: only the per-sample lives and loads a log needs); the per-sample Palmgren-Miner damage (hold time / case life) of each
-bearing and the classing weights go into a dwell table. Memory stays bounded
-by the chunk size and the number of occupied classes; there is no loop per row.
+Every chunk of clean samples is evaluated by the engine as a batch of load cases, in
+cache-sized pieces (engine.samples: only the per-sample lives and loads a log needs);
+the per-sample Palmgren-Miner damage (hold time / case life) of each bearing and the
+classing weights go into a dwell table. Memory stays bounded by the chunk size and the
+number of occupied classes; there is no loop per row.
 """
 
 from __future__ import annotations
