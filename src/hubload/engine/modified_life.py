@@ -76,22 +76,42 @@ def per_study(value) -> np.ndarray:
     return value[..., 0] if value.ndim else value
 
 
-def modified_bearing(bearing: Bearing, equivalent_n, basic_case_life_h, viscosity_m2_s,
-                     level: lub.ContaminationLevel, a1, study: Study, to_km) -> ModifiedBearing:
-    speed = study.cases.speed_rpm
-    moving = speed > 0
-    nu1 = lub.reference_viscosity_m2_s(speed, bearing.mean_diameter_m)
+@dataclass(frozen=True)
+class ModifiedCases:
+    """Per-case factors and L10m of one bearing (what a measured log's samples need)."""
+
+    reference_viscosity_m2_s: np.ndarray
+    kappa: np.ndarray
+    e_c: np.ndarray
+    a_iso: np.ndarray
+    case_life_h: np.ndarray
+
+
+def modified_cases(bearing: Bearing, equivalent_n, basic_case_life_h, viscosity_m2_s,
+                   level: lub.ContaminationLevel, a1, speed_rpm) -> ModifiedCases:
+    """nu1, kappa, eC, aISO and L10m = a1 aISO L10 [h] per case (ISO 281:2007, 9.1);
+    NaN factors and an infinite life at standstill."""
+    moving = speed_rpm > 0
+    nu1 = lub.reference_viscosity_m2_s(speed_rpm, bearing.mean_diameter_m)
     kappa = np.where(moving, lub.viscosity_ratio(viscosity_m2_s, nu1), np.nan)
     e_c = np.where(moving, lub.contamination_factor(kappa, bearing.mean_diameter_m, level), np.nan)
-    cu_n, estimated = fatigue_limit(bearing)
+    cu_n, _ = fatigue_limit(bearing)
     a_iso = np.where(moving, lub.life_modification_factor(kappa, e_c, cu_n, equivalent_n), np.nan)
     case_life_h = np.where(np.isfinite(basic_case_life_h), a1 * a_iso * basic_case_life_h, np.inf)
-    damage = iso281.damage_rate_per_hour(study.cases.time_fraction, case_life_h)
+    return ModifiedCases(nu1, kappa, e_c, a_iso, case_life_h)
+
+
+def modified_bearing(bearing: Bearing, equivalent_n, basic_case_life_h, viscosity_m2_s,
+                     level: lub.ContaminationLevel, a1, study: Study, to_km) -> ModifiedBearing:
+    found = modified_cases(bearing, equivalent_n, basic_case_life_h, viscosity_m2_s, level, a1,
+                           study.cases.speed_rpm)
+    cu_n, estimated = fatigue_limit(bearing)
+    damage = iso281.damage_rate_per_hour(study.cases.time_fraction, found.case_life_h)
     life_h = iso281.spectrum_life_h(damage)
     return ModifiedBearing(
-        reference_viscosity_m2_s=nu1, kappa=kappa,
-        kappa_outside_scope=lub.kappa_outside_scope(kappa),
-        e_c=e_c, a_iso=a_iso, case_life_h=case_life_h,
+        reference_viscosity_m2_s=found.reference_viscosity_m2_s, kappa=found.kappa,
+        kappa_outside_scope=lub.kappa_outside_scope(found.kappa),
+        e_c=found.e_c, a_iso=found.a_iso, case_life_h=found.case_life_h,
         damage_share=iso281.damage_shares(damage), life_h=life_h,
         life_km=to_km(life_h), fatigue_limit_n=per_study(cu_n),
         fatigue_limit_estimated=estimated)

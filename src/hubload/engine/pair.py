@@ -73,15 +73,20 @@ def per_study_km(life_h, mean_rpm, study: Study) -> np.ndarray:
                        study.wheel.rolling_radius_m)[..., 0]
 
 
+def rule_case_life(bearing: Bearing, radial_n, axial_n, speed_rpm):
+    """P [N] and L10 [h] per case by the ISO 281 rule from the bearing's loads [N]."""
+    equivalent = iso281.equivalent_dynamic_load_n(radial_n, axial_n, bearing.e, bearing.y)
+    return equivalent, iso281.life_hours(
+        iso281.basic_rating_life_mrev(bearing.dynamic_rating_n, equivalent), speed_rpm)
+
+
 def bearing_result(bearing: Bearing, radial_n, axial_n, study: Study, mean_rpm,
                    refined: refined_method.RefinedBearing | None = None) -> BearingResult:
     """ISO 281 lives from the loads, or the refined method's lives and Pref when given."""
     cases = study.cases
     static_equivalent = iso281.equivalent_static_load_n(radial_n, axial_n, bearing.y0)
     if refined is None:
-        equivalent = iso281.equivalent_dynamic_load_n(radial_n, axial_n, bearing.e, bearing.y)
-        case_life_h = iso281.life_hours(
-            iso281.basic_rating_life_mrev(bearing.dynamic_rating_n, equivalent), cases.speed_rpm)
+        equivalent, case_life_h = rule_case_life(bearing, radial_n, axial_n, cases.speed_rpm)
     else:
         equivalent, case_life_h = refined.reference_load_n, refined.case_life_h
     damage = iso281.damage_rate_per_hour(cases.time_fraction, case_life_h)

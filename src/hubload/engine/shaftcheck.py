@@ -13,6 +13,7 @@ import numpy as np
 
 from hubload.domain.study import PermissibleCurve, Shaft, ShaftSection, Study
 from hubload.model.iso281 import damage_rate_per_hour, damage_shares, spectrum_life_h
+from hubload.model import statics
 from hubload.model.requirements import wheel_moment_nm
 from hubload.model.shaft import fatigue, strength, stress
 from hubload.engine.modified_life import per_study
@@ -96,7 +97,26 @@ def lowest(values, rotating):
     return np.min(masked, axis=-1), np.argmin(masked, axis=-1)
 
 
-def section_result(study: Study, section: ShaftSection, fraction, to_km) -> SectionResult:
+@dataclass(frozen=True)
+class SectionCases:
+    """Per-case values of one section (what a measured log's samples need), and the
+    per-study constants they came from."""
+
+    kf_bending: np.ndarray
+    kf_torsion: np.ndarray
+    marin: strength.MarinFactors
+    endurance_pa: np.ndarray
+    sn_slope: np.ndarray
+    loads: stress.SectionLoads
+    stresses: stress.SectionStresses
+    rotating: np.ndarray
+    safety: np.ndarray               # NaN at standstill
+    case_yield_safety: np.ndarray
+    case_life_h: np.ndarray
+
+
+def section_cases(study: Study, section: ShaftSection, fraction) -> SectionCases:
+    """Loads, stresses, fatigue and yield safety and fatigue life [h] of a section per case."""
     shaft, cases, wheel, pair = study.shaft, study.cases, study.wheel, study.pair
     kf, kfs = notch_factors(shaft, section)
     marin = strength.marin_factors(shaft.ultimate_pa, shaft.surface, section.diameter_m,
@@ -110,28 +130,36 @@ def section_result(study: Study, section: ShaftSection, fraction, to_km) -> Sect
     rotating = cases.speed_rpm > 0
     safety = np.where(rotating, stress.fatigue_safety(
         stresses, endurance_pa, shaft.ultimate_pa, shaft.yield_pa, shaft.criterion), np.nan)
-    case_yield = stress.yield_safety(stresses, shaft.yield_pa)
     _, sn_slope = fatigue.basquin_constants(shaft.ultimate_pa, endurance_pa, fraction)
     cycles = fatigue.cycles_to_failure(
         fatigue.equivalent_reversed_stress_pa(stresses.alternating_pa, stresses.mean_pa,
                                               shaft.ultimate_pa),
         shaft.ultimate_pa, endurance_pa, fraction)
-    case_life_h = fatigue.case_life_h(cycles, cases.speed_rpm)
-    damage = damage_rate_per_hour(cases.time_fraction, case_life_h)
+    return SectionCases(
+        kf_bending=kf, kf_torsion=kfs, marin=marin, endurance_pa=endurance_pa,
+        sn_slope=sn_slope, loads=loads, stresses=stresses, rotating=rotating, safety=safety,
+        case_yield_safety=stress.yield_safety(stresses, shaft.yield_pa),
+        case_life_h=fatigue.case_life_h(cycles, cases.speed_rpm))
+
+
+def section_result(study: Study, section: ShaftSection, fraction, to_km) -> SectionResult:
+    found = section_cases(study, section, fraction)
+    damage = damage_rate_per_hour(study.cases.time_fraction, found.case_life_h)
     life_h = spectrum_life_h(damage)
-    min_safety, min_case = lowest(safety, rotating)
-    yield_safety, yield_case = lowest(case_yield, True)
+    min_safety, min_case = lowest(found.safety, found.rotating)
+    yield_safety, yield_case = lowest(found.case_yield_safety, True)
     return SectionResult(
-        name=section.name, kf_bending=per_study(kf), kf_torsion=per_study(kfs),
+        name=section.name, kf_bending=per_study(found.kf_bending),
+        kf_torsion=per_study(found.kf_torsion),
         marin=strength.MarinFactors(**{key: per_study(value)
-                                       for key, value in vars(marin).items()}),
-        endurance_pa=per_study(endurance_pa),
-        loads=loads, stresses=stresses, safety=safety, case_yield_safety=case_yield,
-        case_life_h=case_life_h, damage_share=damage_shares(damage), min_safety=min_safety,
-        min_safety_case=min_case, yield_safety=yield_safety, yield_case=yield_case,
-        fatigue_life_h=life_h,
-        fatigue_life_km=to_km(life_h),
-        sn_exponent=per_study(-1.0 / sn_slope))
+                                       for key, value in vars(found.marin).items()}),
+        endurance_pa=per_study(found.endurance_pa),
+        loads=found.loads, stresses=found.stresses, safety=found.safety,
+        case_yield_safety=found.case_yield_safety,
+        case_life_h=found.case_life_h, damage_share=damage_shares(damage),
+        min_safety=min_safety, min_safety_case=min_case, yield_safety=yield_safety,
+        yield_case=yield_case, fatigue_life_h=life_h, fatigue_life_km=to_km(life_h),
+        sn_exponent=per_study(-1.0 / found.sn_slope))
 
 
 def read_curve(position_m, curve: PermissibleCurve):
@@ -166,7 +194,7 @@ def permissible_result(study: Study) -> PermissibleResult | None:
     cases, wheel = study.cases, study.wheel
     offset = per_study(wheel.offset_m)
     permissible = read_curve(offset, curve)[..., None]
-    radial = np.hypot(cases.wheel_load_n, cases.tractive_force_n)
+    radial = statics.resultant(cases.wheel_load_n, cases.tractive_force_n)
     moment = wheel_moment_nm(0.0, cases.wheel_load_n, cases.side_force_n,
                              cases.tractive_force_n, wheel.offset_m, wheel.loaded_radius_m)
     lever = np.asarray(wheel.offset_m, dtype=float)

@@ -170,6 +170,9 @@ class Cleaner:
         return block.take(keep)
 
     def last_complete(self, block: Block) -> int | None:
+        if self.policy != "interpolate":
+            # settle_empty left no empty sample (it stopped at one, or dropped its row)
+            return len(block.rows) - 1 if len(block.rows) else None
         complete = ~np.any([np.isnan(v) for v in block.columns.values()], axis=0)
         found = np.flatnonzero(complete)
         return int(found[-1]) if found.size else None
@@ -199,7 +202,8 @@ class Cleaner:
     def with_holds(self, block: Block) -> Iterable[Samples]:
         """Samples of all rows but the last, holding until the next row's stamp (in
         batches of bounded size where gaps are filled)."""
-        block = self.interpolate_empty(block)
+        if self.policy == "interpolate":
+            block = self.interpolate_empty(block)
         time_s = block.columns["time_s"]
         hold_s = np.diff(time_s)
         head = block.take(slice(0, -1))
@@ -230,8 +234,10 @@ class Cleaner:
 
     def observe_interval(self, time_s: np.ndarray) -> None:
         """The nominal sample interval: median step of the first stamps (before repairs)."""
+        if self.report.nominal_interval_s is not None:
+            return
         steps = np.diff(time_s[~np.isnan(time_s)])
-        if self.report.nominal_interval_s is None and np.any(steps > 0):
+        if np.any(steps > 0):
             self.report.nominal_interval_s = float(np.median(steps[steps > 0]))
 
     def gap_limits(self) -> tuple[float, float]:

@@ -1,9 +1,9 @@
 """The shaft check over a log: per-sample fatigue damage of each section and extremes.
 
-The engine's shaft check (hubload.engine.shaftcheck) runs on every chunk of samples
-like on a spectrum; each sample's damage is its hold time over its case life
-(Palmgren-Miner, as for the bearings), and the lowest safeties and the highest
-use of the supplier's curve are kept over the whole log.
+The engine's shaft check (hubload.engine.shaftcheck, through engine.samples) runs on
+every chunk of samples like on a spectrum; each sample's damage is its hold time over
+its case life (Palmgren-Miner, as for the bearings), and the lowest safeties and the
+highest use of the supplier's curve are kept over the whole log.
 """
 
 from __future__ import annotations
@@ -11,6 +11,7 @@ from __future__ import annotations
 import numpy as np
 
 from hubload.domain.study import Study
+from hubload.engine.samples import SampleLives
 from hubload.model import iso281
 
 WORST = {"min_safety": np.fmin, "yield_safety": np.fmin, "max_utilisation": np.fmax}
@@ -23,24 +24,19 @@ def damage_names(study: Study) -> tuple[str, ...]:
     return tuple(f"damage_shaft_{index}" for index in range(len(study.shaft.sections)))
 
 
-def sample_damages(result, hold_h: np.ndarray) -> list[np.ndarray]:
+def sample_damages(lives: SampleLives, hold_h: np.ndarray) -> list[np.ndarray]:
     """Per-sample fatigue damage of each section (none without [shaft])."""
-    if result.shaft is None:
+    if lives.shaft is None:
         return []
-    return [iso281.damage_rate_per_hour(hold_h, section.case_life_h)
-            for section in result.shaft.sections]
+    return [iso281.damage_rate_per_hour(hold_h, life_h) for life_h in lives.shaft.case_life_h]
 
 
-def chunk_extremes(result) -> dict[str, np.ndarray] | None:
+def chunk_extremes(lives: SampleLives) -> dict[str, np.ndarray] | None:
     """Lowest fatigue and yield safety per section, highest curve use, in one chunk."""
-    if result.shaft is None:
+    if lives.shaft is None:
         return None
-    permissible = result.shaft.permissible
-    utilisation = (np.nan if permissible is None or not bool(permissible.inside)
-                   else float(np.max(permissible.utilisation)))
-    return {"min_safety": np.array([float(s.min_safety) for s in result.shaft.sections]),
-            "yield_safety": np.array([float(s.yield_safety) for s in result.shaft.sections]),
-            "max_utilisation": np.array([utilisation])}
+    return {"min_safety": lives.shaft.min_safety, "yield_safety": lives.shaft.yield_safety,
+            "max_utilisation": np.array([lives.shaft.max_utilisation])}
 
 
 def worst(first: dict | None, second: dict | None) -> dict | None:

@@ -155,8 +155,10 @@ def add_samples(table: DwellTable, values, weights, classes, min_exponents) -> D
     high = np.fmax(table.high, values.max(axis=1))
     exponents = np.maximum(table.exponents, covering_exponents(low, high, classes, min_exponents))
     base = coarsened(table, exponents)
-    keys = np.concatenate([base.keys, class_keys(values, exponents)], axis=1)
-    all_weights = np.concatenate([base.sums, np.asarray(weights, dtype=float)], axis=1)
+    keys, all_weights = class_keys(values, exponents), np.asarray(weights, dtype=float)
+    if base.keys.shape[-1]:     # a table with samples already (else no copy)
+        keys = np.concatenate([base.keys, keys], axis=1)
+        all_weights = np.concatenate([base.sums, all_weights], axis=1)
     cell_keys, sums = aggregate(keys, all_weights)
     return DwellTable(exponents, cell_keys, sums, low, high)
 

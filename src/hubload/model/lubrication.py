@@ -98,9 +98,9 @@ def reference_viscosity_m2_s(speed_rpm, mean_diameter_m):
     speed = np.asarray(speed_rpm, dtype=float)
     dm_mm = np.asarray(mean_diameter_m, dtype=float) / MM
     moving = np.where(speed > 0, speed, 1.0)
-    slow = 45000.0 * np.power(moving, -0.83)
-    fast = 4500.0 * np.power(moving, -0.5)
-    nu1_mm2_s = np.where(speed < 1000.0, slow, fast) / np.sqrt(dm_mm)
+    slow = speed < 1000.0      # one power per case, with the exponent of its speed range
+    nu1_mm2_s = (np.where(slow, 45000.0, 4500.0) * np.power(moving, np.where(slow, -0.83, -0.5))
+                 / np.sqrt(dm_mm))
     return np.where(speed > 0, nu1_mm2_s * MM2_S, np.inf)
 
 

@@ -39,6 +39,7 @@ from __future__ import annotations
 
 import numpy as np
 
+from hubload.model import statics
 from hubload.units import SECONDS_PER_MINUTE
 
 TWO_PI = 2.0 * np.pi
@@ -160,5 +161,5 @@ def adhesion_capped_force_n(force_n, wheel_load_n, adhesion_mu):
 def exceeds_friction_circle(tractive_force_n, side_force_n, wheel_load_n, adhesion_mu):
     """True where the combined ground force sqrt(F^2 + S^2) exceeds mu W: the tyre
     would slide (friction circle of an isotropic tyre) [4]."""
-    return (np.hypot(tractive_force_n, side_force_n)
+    return (statics.resultant(tractive_force_n, side_force_n)
             > adhesion_limit_n(wheel_load_n, adhesion_mu) * (1.0 + 1e-12))

@@ -50,10 +50,10 @@ def wheel_moment_nm(section_x_m, wheel_load_n, side_force_n, tractive_force_n, o
                     loaded_radius_m):
     """Bending moment [N m] of the tyre forces about the shaft axis at ``section_x_m`` [m] [4].
 
-    The resultant hypot(M_y, M_z) of the ground forces' moments about the section's
+    The resultant sqrt(M_y^2 + M_z^2) of the ground forces' moments about the section's
     centre (:func:`hubload.model.statics.tyre_moments_nm`, side force positive
     inboard): the bending moment the motor's mounting face must carry. The drive
     torque about the axis is carried by the motor and is not included.
     """
-    return np.hypot(*statics.tyre_moments_nm(section_x_m, wheel_load_n, side_force_n,
+    return statics.resultant(*statics.tyre_moments_nm(section_x_m, wheel_load_n, side_force_n,
                                              tractive_force_n, offset_m, loaded_radius_m))

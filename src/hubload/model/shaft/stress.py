@@ -79,7 +79,7 @@ def section_loads(section_x_m, carries_torque, wheel_load_n, side_force_n, tract
     torque_nm = np.asarray(carries_torque, dtype=float) * tractive_force_n * rolling_radius_m
     axial_n = section_axial_force_n(section_x_m, side_force_n, outboard_x_m, inboard_x_m,
                                     arrangement)
-    return SectionLoads(*np.broadcast_arrays(np.hypot(vertical_nm, horizontal_nm),
+    return SectionLoads(*np.broadcast_arrays(statics.resultant(vertical_nm, horizontal_nm),
                                              np.abs(torque_nm), axial_n, shear_n))
 
 
@@ -131,7 +131,7 @@ def goodman_safety(alternating_pa, mean_pa, endurance_pa, ultimate_pa):
 def asme_elliptic_safety(alternating_pa, mean_pa, endurance_pa, yield_pa):
     """DE-ASME elliptic fatigue safety factor [1, eq. 7-11]:
     1/n = sqrt((sigma'a / Se)^2 + (sigma'm / Sy)^2)."""
-    return reciprocal(np.hypot(alternating_pa / endurance_pa, mean_pa / yield_pa))
+    return reciprocal(statics.resultant(alternating_pa / endurance_pa, mean_pa / yield_pa))
 
 
 def fatigue_safety(stresses: SectionStresses, endurance_pa, ultimate_pa, yield_pa,
