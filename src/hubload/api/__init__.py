@@ -13,7 +13,6 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from hubload.domain.study import Study
-from hubload.engine import Result
 from hubload.errors import InputError
 
 # Static safety s0 of rolling bearings: 0.5 to 4 in the tables of common practice (ISO 76
@@ -45,18 +44,21 @@ def as_study(study_or_path: Study | str | Path, method: str | None = None) -> St
     return load(study_or_path, method)
 
 
+@dataclass(frozen=True)
 class Wrapped:
-    """A typed result with the outputs of its command: attributes pass through to it."""
+    """A typed result with the outputs of its command: attributes pass through to it.
+
+    The results of most commands are this one field under their own class name (defined
+    without a dataclass decorator of their own: each one cost a millisecond at start-up)."""
+
+    value: object
 
     def __getattr__(self, name: str):
         return getattr(object.__getattribute__(self, "value"), name)
 
 
-@dataclass(frozen=True)
 class CheckResult(Wrapped):
     """The result of a check: the engine's typed result, its governing life, its JSON."""
-
-    value: Result
 
     @property
     def governing_life(self):
@@ -79,11 +81,8 @@ def check(study_or_path: Study | str | Path, method: str | None = None,
     return CheckResult(evaluate(as_study(study_or_path, method), on_progress=on_progress))
 
 
-@dataclass(frozen=True)
 class MachineResult(Wrapped):
     """The result of a machine: every wheel end's result, the machine's lives and verdict."""
-
-    value: object      # hubload.engine.machine.MachineResult
 
     @property
     def governing_life(self):
@@ -105,9 +104,8 @@ def machine(path: str | Path) -> MachineResult:
     return MachineResult(evaluate_machine(load_machine_study(path)))
 
 
-@dataclass(frozen=True)
 class SweepResult(Wrapped):
-    value: object      # hubload.studies.sweep.Sweep
+    """``value``: hubload.studies.sweep.Sweep."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload sweep --json``."""
@@ -116,9 +114,8 @@ class SweepResult(Wrapped):
         return sweep_document(self.value)
 
 
-@dataclass(frozen=True)
 class MachineSweepResult(Wrapped):
-    value: object      # hubload.studies.machine_sweep.MachineSweep
+    """``value``: hubload.studies.machine_sweep.MachineSweep."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload sweep --json`` on a machine file."""
@@ -150,9 +147,8 @@ def sweep(path: str | Path, vary: Sequence[str], method: str | None = None,
                                  method=method))
 
 
-@dataclass(frozen=True)
 class ComparisonResult(Wrapped):
-    value: object      # hubload.studies.compare.Comparison
+    """``value``: hubload.studies.compare.Comparison."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload compare --json``."""
@@ -161,9 +157,8 @@ class ComparisonResult(Wrapped):
         return compare_document(self.value)
 
 
-@dataclass(frozen=True)
 class MachineComparisonResult(Wrapped):
-    value: tuple       # hubload.engine.machine.MachineResult, one per machine file
+    """``value``: hubload.engine.machine.MachineResult, one per machine file."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload compare --json`` on machine files."""
@@ -212,9 +207,8 @@ def compare_machines(paths, machines: list[bool], method: str | None):
     return MachineComparisonResult(tuple(found))
 
 
-@dataclass(frozen=True)
 class SettingResult(Wrapped):
-    value: object      # hubload.studies.setting.SettingSweep
+    """``value``: hubload.studies.setting.SettingSweep."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload setting --json``."""

@@ -2,16 +2,14 @@
 
 from __future__ import annotations
 
-from dataclasses import dataclass
 from pathlib import Path
 
 from hubload.api import Wrapped, check, load
 from hubload.errors import InputError
 
 
-@dataclass(frozen=True)
 class ForecastResult(Wrapped):
-    value: object      # hubload.studies.forecast.Forecast
+    """``value``: hubload.studies.forecast.Forecast."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload forecast --json``."""
@@ -59,9 +57,8 @@ def forecast_inputs(path: str | Path, model_options: dict, fleet_options: dict):
         raise error.located(str(path)) from None
 
 
-@dataclass(frozen=True)
 class FieldResult(Wrapped):
-    value: object      # hubload.studies.field.FieldStudy
+    """``value``: hubload.studies.field.FieldStudy."""
 
     def to_dict(self) -> dict:
         """The document of ``hubload field --json``."""
