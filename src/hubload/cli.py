@@ -309,7 +309,7 @@ def fleet_options(command):
                      help="Slope of the two-parameter Weibull (implies --distribution weibull)."),
         click.option("--machines", type=int, default=None, help="Machines in the fleet."),
         click.option("--wheel-ends-per-machine", type=int, default=None,
-                     help="Wheel ends like FILE's on each machine."),
+                     help="Wheel ends like FILE's on each machine (not for a machine file)."),
         click.option("--hours-per-year-median", type=float, default=None,
                      help="Median operating hours per machine and year [h]."),
         click.option("--hours-per-year-spread", type=float, default=None,
@@ -336,7 +336,8 @@ def fleet_options(command):
 @fleet_options
 @reports_input_errors
 def forecast(file, as_json, plot, force, method, **options):
-    """Failure probability of FILE's wheel end over time and failures of its [fleet]."""
+    """Failure probability over time of FILE's wheel end (or a machine file's wheel ends and
+    machine) and failures of its [fleet]."""
     from hubload.commands import reliability
     reliability.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
 
@@ -344,7 +345,8 @@ def forecast(file, as_json, plot, force, method, **options):
 @main.command()
 @click.argument("data", type=click.Path(dir_okay=False))
 @click.option("--against", type=click.Path(dir_okay=False),
-              help="Load-case FILE whose predicted wheel end is compared with the data.")
+              help="Load-case or machine FILE whose predicted wheel end is compared with the "
+                   "data (a machine's: by the rows' positions).")
 @json_option
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write the Weibull probability plot (.png or .svg).")

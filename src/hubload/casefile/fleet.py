@@ -61,6 +61,20 @@ def read_life_model(given: Mapping | None, overrides: Mapping | None = None) -> 
     return LifeModel(kind, ISO281_SLOPE if slope is None else float(slope))
 
 
+PER_MACHINE = "wheel_ends_per_machine"
+
+
+def refuse_wheel_ends_per_machine(written: object, overrides: Mapping) -> None:
+    """A machine file's fleet counts the machine's own wheel ends: its [fleet] as written
+    (before defaults) and the options may not set wheel_ends_per_machine."""
+    where = option_name(PER_MACHINE) if overrides.get(PER_MACHINE) is not None else \
+        f"fleet.{PER_MACHINE}" if isinstance(written, Mapping) and PER_MACHINE in written \
+        else None
+    if where is not None:
+        raise InputError("a machine file's machine has its own wheel ends (the [[axle]] "
+                         "blocks): expected no wheel_ends_per_machine", key_path=where)
+
+
 def read_fleet(given: Mapping | None, overrides: Mapping | None = None) -> Fleet | None:
     """The fleet of [fleet] (validated) with option overrides; None when neither gives one."""
     overrides = {key: value for key, value in (overrides or {}).items() if value is not None}
