@@ -154,17 +154,19 @@ def check(file, as_json, report, plot, table, force, method, show_all):
                    "setting and brief run on them).")
 @click.option("--report", type=click.Path(dir_okay=False),
               help="Also write a self-contained HTML report of the machine.")
-@click.option("--force", is_flag=True, help="Overwrite existing wheel end files and --report.")
+@table_option()
+@click.option("--force", is_flag=True,
+              help="Overwrite existing wheel end files, --report and --table files.")
 @click.option("--all", "show_all", is_flag=True,
               help="List every case of --cases and every warning (default: the 25 most "
                    "damaging cases, warnings summarised).")
 @reports_input_errors
-def machine(file, as_json, show_cases, write_wheel_files, report, force, show_all):
+def machine(file, as_json, show_cases, write_wheel_files, report, table, force, show_all):
     """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
     from hubload.commands.machine import machine as run_machine
     run_machine(file, as_json=as_json, show_cases=show_cases,
                 write_wheel_files=write_wheel_files, force=force, report=report,
-                show_all=show_all)
+                show_all=show_all, table=table)
 
 
 @main.command()
