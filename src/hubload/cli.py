@@ -179,10 +179,12 @@ def schema(machine_file):
 
 
 @main.command()
-def template():
-    """Print a commented starting load-case file."""
+@click.option("--machine", "machine_file", is_flag=True,
+              help="A machine file instead (hubload machine; it names a wheel end file).")
+def template(machine_file):
+    """Print a commented starting load-case file (or machine file)."""
     from hubload import commands
-    commands.template()
+    commands.template(machine_file)
 
 
 @main.command()

@@ -16,7 +16,7 @@ from hubload.casefile.validate import validate_value
 from hubload.domain.fleet import Fleet, LifeModel
 from hubload.errors import InputError
 from hubload.model.reliability import ISO281_SLOPE
-from hubload.schema.fleetformat import FLEET, RELIABILITY
+from hubload.schema.fleetformat import FLEET, PER_MACHINE, RELIABILITY
 
 
 def option_name(key: str) -> str:
@@ -59,9 +59,6 @@ def read_life_model(given: Mapping | None, overrides: Mapping | None = None) -> 
                          f'{ISO281_SLOPE:g}); set distribution = "weibull" to use '
                          f"{slope:g}", key_path=where("weibull_slope"))
     return LifeModel(kind, ISO281_SLOPE if slope is None else float(slope))
-
-
-PER_MACHINE = "wheel_ends_per_machine"
 
 
 def refuse_wheel_ends_per_machine(written: object, overrides: Mapping) -> None:

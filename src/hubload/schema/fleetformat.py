@@ -67,5 +67,8 @@ RELIABILITY = Table(
     ),
 )
 
+# The key that a machine file's [fleet] refuses: the machine has its own wheel ends.
+PER_MACHINE = "wheel_ends_per_machine"
+
 # Tables that only `hubload forecast` reads: a sweep of their keys would change nothing.
 FORECAST_TABLES = (FLEET.name, RELIABILITY.name)
