@@ -26,7 +26,8 @@ from hubload.domain.field import FieldData
 from hubload.domain.fleet import Fleet, LifeModel
 from hubload.engine.machine import MachineResult
 from hubload.errors import InputError
-from hubload.model.reliability import LifeDistribution, series_failure_probability
+from hubload.model.reliability import (LifeDistribution, series_b_life_h,
+                                       series_failure_probability)
 from hubload.studies.forecast import (B_LIFE_PROBABILITIES, Forecast, LifeBasis, Unit,
                                       bearing_distributions, failing, forecast_of_units,
                                       life_basis)
@@ -85,8 +86,6 @@ def mixture_b_life_h(units, failure_probability: float) -> float:
     """Time [h] at which the mixture's F reaches p: bisection on ln t between the
     shortest and the longest of the units' own B_p (F of each unit is monotonic, so the
     mixture's B_p lies between them). Units that cannot fail keep F at zero."""
-    from hubload.model.reliability import series_b_life_h
-
     able = [(share, failing(d)) for share, d in units if share > 0]
     possible = sum(share for share, d in able if d)
     if possible <= failure_probability:
