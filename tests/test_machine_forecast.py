@@ -14,6 +14,7 @@ import math
 
 import numpy as np
 import pytest
+from hypothesis import assume, given, settings, strategies as st
 from scipy import optimize, stats
 
 from machinesupport import MACHINES, machine_document, operation, run, write_machine
@@ -187,3 +188,26 @@ def test_field_positions_that_name_no_wheel_end_of_the_machine_are_refused(tmp_p
 def test_a_machine_sweep_refuses_a_key_of_the_fleet():
     result = run("sweep", BUNDLED, "--vary", "fleet.machines=100:200:2")
     assert result.exit_code == 2 and "enters only `hubload forecast`" in result.output
+
+
+@settings(max_examples=40, deadline=None)
+@given(lives=st.lists(st.floats(100.0, 1e5), min_size=1, max_size=4),
+       weights=st.lists(st.integers(0, 5), min_size=4, max_size=4),
+       p=st.sampled_from([0.01, 0.1, 0.5]))
+def test_the_mixtures_b_life_is_where_the_weighted_failure_probabilities_reach_p(
+        lives, weights, p):
+    # Law of total probability: F_mix(t) = sum w_i F_i(t); F_mix(B_p) = p, and B_p lies
+    # between the shortest and the longest unit's own B_p (each F_i is monotonic).
+    from hubload.model.reliability import LifeDistribution
+    from hubload.studies.machine_forecast import mixture_b_life_h
+
+    weights = weights[:len(lives)]
+    assume(sum(weights) > 0)
+    shares = [w / sum(weights) for w in weights]
+    units = [(share, (LifeDistribution("iso281", life, 1.5),)) for share, life in
+             zip(shares, lives)]
+    found = mixture_b_life_h(units, p)
+    mixed = sum(share * iso281(life).cdf(found) for share, life in zip(shares, lives))
+    assert mixed == pytest.approx(p, rel=1e-6)
+    own = [iso281(life).ppf(p) for share, life in zip(shares, lives) if share > 0]
+    assert min(own) * (1 - 1e-9) <= found <= max(own) * (1 + 1e-9)

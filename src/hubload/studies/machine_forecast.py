@@ -32,7 +32,8 @@ from hubload.studies.forecast import (B_LIFE_PROBABILITIES, Forecast, LifeBasis,
                                       bearing_distributions, failing, forecast_of_units,
                                       life_basis)
 
-BISECTION_STEPS = 200
+# Halving a bracket of a few units of ln t 100 times reaches double precision.
+BISECTION_STEPS = 100
 
 
 def machine_units(result: MachineResult, model: LifeModel,
