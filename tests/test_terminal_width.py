@@ -60,7 +60,11 @@ def test_check_prints_every_life_and_name_in_full(width, scenario, options):
     ("field", ROOT / "load_cases" / "field_returns.csv", "--against",
      ROOT / "load_cases" / "site_dumper.toml"),
     ("machine", ROOT / "load_cases" / "machines" / "yard_loader_machine.toml", "--cases"),
-], ids=["sweep", "linked", "grid", "compare", "setting", "brief", "forecast", "field", "machine"])
+    ("forecast", ROOT / "load_cases" / "machines" / "yard_loader_machine.toml"),
+    ("field", ROOT / "load_cases" / "field_returns.csv", "--against",
+     ROOT / "load_cases" / "machines" / "yard_loader_machine.toml"),
+], ids=["sweep", "linked", "grid", "compare", "setting", "brief", "forecast", "field", "machine",
+        "machine-forecast", "machine-field"])
 def test_study_commands_fit_the_terminal(width, args):
     text = run(width, *args)
     assert ELLIPSIS not in text

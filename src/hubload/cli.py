@@ -154,17 +154,19 @@ def check(file, as_json, report, plot, table, force, method, show_all):
                    "setting and brief run on them).")
 @click.option("--report", type=click.Path(dir_okay=False),
               help="Also write a self-contained HTML report of the machine.")
-@click.option("--force", is_flag=True, help="Overwrite existing wheel end files and --report.")
+@table_option()
+@click.option("--force", is_flag=True,
+              help="Overwrite existing wheel end files, --report and --table files.")
 @click.option("--all", "show_all", is_flag=True,
               help="List every case of --cases and every warning (default: the 25 most "
                    "damaging cases, warnings summarised).")
 @reports_input_errors
-def machine(file, as_json, show_cases, write_wheel_files, report, force, show_all):
+def machine(file, as_json, show_cases, write_wheel_files, report, table, force, show_all):
     """Every wheel end of the machine FILE and the machine's life (operations -> wheel forces)."""
     from hubload.commands.machine import machine as run_machine
     run_machine(file, as_json=as_json, show_cases=show_cases,
                 write_wheel_files=write_wheel_files, force=force, report=report,
-                show_all=show_all)
+                show_all=show_all, table=table)
 
 
 @main.command()
@@ -177,10 +179,12 @@ def schema(machine_file):
 
 
 @main.command()
-def template():
-    """Print a commented starting load-case file."""
+@click.option("--machine", "machine_file", is_flag=True,
+              help="A machine file instead (hubload machine; it names a wheel end file).")
+def template(machine_file):
+    """Print a commented starting load-case file (or machine file)."""
     from hubload import commands
-    commands.template()
+    commands.template(machine_file)
 
 
 @main.command()
@@ -309,7 +313,7 @@ def fleet_options(command):
                      help="Slope of the two-parameter Weibull (implies --distribution weibull)."),
         click.option("--machines", type=int, default=None, help="Machines in the fleet."),
         click.option("--wheel-ends-per-machine", type=int, default=None,
-                     help="Wheel ends like FILE's on each machine."),
+                     help="Wheel ends like FILE's on each machine (not for a machine file)."),
         click.option("--hours-per-year-median", type=float, default=None,
                      help="Median operating hours per machine and year [h]."),
         click.option("--hours-per-year-spread", type=float, default=None,
@@ -336,7 +340,8 @@ def fleet_options(command):
 @fleet_options
 @reports_input_errors
 def forecast(file, as_json, plot, force, method, **options):
-    """Failure probability of FILE's wheel end over time and failures of its [fleet]."""
+    """Failure probability over time of FILE's wheel end (or a machine file's wheel ends and
+    machine) and failures of its [fleet]."""
     from hubload.commands import reliability
     reliability.forecast(file, as_json=as_json, plot=plot, force=force, method=method, **options)
 
@@ -344,7 +349,8 @@ def forecast(file, as_json, plot, force, method, **options):
 @main.command()
 @click.argument("data", type=click.Path(dir_okay=False))
 @click.option("--against", type=click.Path(dir_okay=False),
-              help="Load-case FILE whose predicted wheel end is compared with the data.")
+              help="Load-case or machine FILE whose predicted wheel end is compared with the "
+                   "data (a machine's: by the rows' positions).")
 @json_option
 @click.option("--plot", type=click.Path(dir_okay=False),
               help="Write the Weibull probability plot (.png or .svg).")

@@ -193,18 +193,20 @@ def compare_machines(paths, machines: list[bool], method: str | None):
         odd = next(p for p, is_machine in zip(paths, machines) if not is_machine)
         raise InputError("compare takes machine files or load-case files, not both; this one "
                          "is a load-case file", file=str(odd))
+    return MachineComparisonResult(tuple(evaluated_machine(path, method) for path in paths))
+
+
+def evaluated_machine(path: str | Path, method: str | None = None):
+    """The machine file's result (engine.machine.MachineResult), ``method`` overriding its
+    [project] method for every wheel end."""
     from hubload.casefile.load import read_document
     from hubload.casefile.machinefile import machine_from_document
     from hubload.engine.machine import evaluate_machine
 
-    found = []
-    for path in paths:
-        document = read_document(path)
-        if method is not None:
-            document = {**document, "project": {**document.get("project", {}),
-                                                "method": method}}
-        found.append(evaluate_machine(machine_from_document(document, str(path))))
-    return MachineComparisonResult(tuple(found))
+    document = read_document(path)
+    if method is not None:
+        document = {**document, "project": {**document.get("project", {}), "method": method}}
+    return evaluate_machine(machine_from_document(document, str(path)))
 
 
 class SettingResult(Wrapped):

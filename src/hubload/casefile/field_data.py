@@ -143,7 +143,7 @@ def text_of(value, where: str) -> str:
 def field_data_of(rows, file: str) -> FieldData:
     """Validate the rows (header first) and build the field data."""
     columns = None
-    hours, failed, units, positions = [], [], [], []
+    hours, failed, units, positions, numbers = [], [], [], [], []
     for number, cells in rows:
         if not any(str(cell).strip() for cell in cells):
             continue
@@ -154,6 +154,7 @@ def field_data_of(rows, file: str) -> FieldData:
             raise InputError(f"more than {MAX_ROWS:,} rows; field data of one wheel end "
                              "are far fewer", key_path=f"row {number}")
         where = {name: f"row {number}, column {name}" for name in columns}
+        numbers.append(number)
         hours.append(hours_of(cell_of(cells, columns["hours"]), where["hours"]))
         failed.append(status_of(cell_of(cells, columns["status"]), where["status"]))
         if "unit" in columns:
@@ -166,4 +167,5 @@ def field_data_of(rows, file: str) -> FieldData:
         raise InputError("no data rows: expected one row per unit below the header")
     return FieldData(source=file, hours=np.array(hours), failed=np.array(failed, dtype=bool),
                      unit=tuple(units) if "unit" in columns else None,
-                     position=tuple(positions) if "position" in columns else None)
+                     position=tuple(positions) if "position" in columns else None,
+                     row_number=tuple(numbers))

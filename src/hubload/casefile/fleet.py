@@ -16,7 +16,7 @@ from hubload.casefile.validate import validate_value
 from hubload.domain.fleet import Fleet, LifeModel
 from hubload.errors import InputError
 from hubload.model.reliability import ISO281_SLOPE
-from hubload.schema.fleetformat import FLEET, RELIABILITY
+from hubload.schema.fleetformat import FLEET, PER_MACHINE, RELIABILITY
 
 
 def option_name(key: str) -> str:
@@ -59,6 +59,17 @@ def read_life_model(given: Mapping | None, overrides: Mapping | None = None) -> 
                          f'{ISO281_SLOPE:g}); set distribution = "weibull" to use '
                          f"{slope:g}", key_path=where("weibull_slope"))
     return LifeModel(kind, ISO281_SLOPE if slope is None else float(slope))
+
+
+def refuse_wheel_ends_per_machine(written: object, overrides: Mapping) -> None:
+    """A machine file's fleet counts the machine's own wheel ends: its [fleet] as written
+    (before defaults) and the options may not set wheel_ends_per_machine."""
+    where = option_name(PER_MACHINE) if overrides.get(PER_MACHINE) is not None else \
+        f"fleet.{PER_MACHINE}" if isinstance(written, Mapping) and PER_MACHINE in written \
+        else None
+    if where is not None:
+        raise InputError("a machine file's machine has its own wheel ends (the [[axle]] "
+                         "blocks): expected no wheel_ends_per_machine", key_path=where)
 
 
 def read_fleet(given: Mapping | None, overrides: Mapping | None = None) -> Fleet | None:

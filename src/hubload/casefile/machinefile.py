@@ -28,7 +28,9 @@ from hubload.units import MM
 MACHINE_TABLES = {"case": "the machine's operations give the cases",
                   "project": "the machine file's [project] applies to every wheel end",
                   "vehicle": "the machine file describes the axle",
-                  "machine": "a wheel end file is a load-case file, not a machine file"}
+                  "machine": "a wheel end file is a load-case file, not a machine file",
+                  "fleet": "the machine file's [fleet] describes the machines",
+                  "reliability": "the machine file's [reliability] applies to every wheel end"}
 
 
 @dataclass(frozen=True)

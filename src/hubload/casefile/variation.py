@@ -56,7 +56,7 @@ def parse_key_path(text: str, document: Mapping, table: Table = FORMAT) -> KeyPa
 
 
 def resolve(segments: list, document: Mapping, table: Table, text: str) -> Field:
-    if table is FORMAT and segments[0][0] in FORECAST_TABLES:
+    if segments[0][0] in FORECAST_TABLES and table.table_named(segments[0][0]) is not None:
         raise InputError(f"[{segments[0][0]}] enters only `hubload forecast`; a sweep varies "
                          "the check's inputs (give the forecast's options instead)",
                          key_path=text)

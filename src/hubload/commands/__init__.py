@@ -137,7 +137,12 @@ def schema(machine: bool = False) -> None:
     click.echo(document_text(json_schema(FORMAT)))
 
 
-def template() -> None:
+def template(machine_file: bool = False) -> None:
+    if machine_file:
+        from hubload.schema.machine_template import machine_template_text
+
+        click.echo(machine_template_text(), nl=False)
+        return
     from hubload.schema import FORMAT
     from hubload.schema.export import template_text
 

@@ -30,11 +30,20 @@ def wheel_file_name(wheel: str) -> str:
 
 def machine(file: str, as_json: bool = False, show_cases: bool = False,
             write_wheel_files: str | None = None, force: bool = False,
-            report: str | None = None, show_all: bool = False) -> api.MachineResult:
-    from hubload.commands import checked, written
+            report: str | None = None, show_all: bool = False,
+            table: str | None = None) -> api.MachineResult:
+    from hubload.commands import checked, checked_table, write_table, written
+    from hubload.report.spreadsheet.machine import SHEETS
 
     checked(report, force, (".html", ".htm"), (file,))
+    checked_table(table, SHEETS, force, (file,))
     found = api.machine(file)
+    if table is not None:
+        from hubload.report.spreadsheet.machine import machine_sheets
+
+        for name in write_table(table, machine_sheets(found.value), force,
+                                (file, *{w.wheel_end_file for w in found.value.study.wheel_ends})):
+            written("Table", name, as_json)
     if report is not None:
         from hubload.casefile.load import read_document
         from hubload.report.files import write_text

@@ -21,7 +21,7 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
     if plot is not None and len(specs) not in (1, 2):
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
     if api.is_machine_file(file):
-        return machine_sweep(file, specs, as_json, plot, table, method)
+        return machine_sweep(file, specs, as_json, plot, table, force, method)
     if table is not None:
         from hubload.report.spreadsheet.studies import SWEEP_SHEETS
 
@@ -56,13 +56,21 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
 
 
 def machine_sweep(file: str, specs: tuple[str, ...], as_json: bool, plot: str | None,
-                  table: str | None, method: str | None):
+                  table: str | None, force: bool, method: str | None):
     from hubload.report.progress import LateProgress
+    from hubload.report.spreadsheet.machine import SWEEP_SHEETS, machine_sweep_sheets
 
-    refuse_for_machines(plot, table, "sweeps", "or sweep a wheel file of --write-wheel-files")
+    refuse_plot_for_machines(plot, "sweeps", "or sweep a wheel file of --write-wheel-files")
+    checked_table(table, SWEEP_SHEETS, force, (file,))
+    written_tables = []
     with LateProgress("sweeping") as progress:
         found = api.sweep(file, specs, method=method, on_progress=progress)
+        if table is not None:
+            written_tables = write_table(table, machine_sweep_sheets(found.value), force,
+                                         (file,))
         document = json_text(found, progress) if as_json else None
+    for name in written_tables:
+        written("Table", name, as_json)
     if as_json:
         click.echo(document)
     else:
@@ -72,18 +80,24 @@ def machine_sweep(file: str, specs: tuple[str, ...], as_json: bool, plot: str | 
     return found
 
 
-def refuse_for_machines(plot: str | None, table: str | None, what: str, hint: str = "") -> None:
-    """Plots and sheets of machine sweeps and comparisons are not drawn: one line saying so."""
-    for option, path in (("--plot", plot), ("--table", table)):
-        if path is not None:
-            raise InputError(f"{option} writes {what} of load-case files; for machine files "
-                             f"use --json{', ' + hint if hint else ''}", file=path)
+def refuse_plot_for_machines(plot: str | None, what: str, hint: str = "") -> None:
+    """Plots of machine sweeps and comparisons are not drawn: one line saying so."""
+    if plot is not None:
+        raise InputError(f"--plot draws {what} of load-case files; for machine files use "
+                         f"--json or --table{', ' + hint if hint else ''}", file=plot)
 
 
 def machine_compare(files: tuple[str, ...], as_json: bool, plot: str | None,
-                    table: str | None, method: str | None):
-    refuse_for_machines(plot, table, "comparisons")
+                    table: str | None, force: bool, method: str | None):
+    from hubload.report.spreadsheet.machine import COMPARE_SHEETS, machine_compare_sheets
+
+    refuse_plot_for_machines(plot, "comparisons")
+    checked_table(table, COMPARE_SHEETS, force, tuple(files))
     found = api.compare(list(files), method=method)
+    if table is not None:
+        for name in write_table(table, machine_compare_sheets(found.value), force,
+                                tuple(files)):
+            written("Table", name, as_json)
     if as_json:
         click.echo(document_text(found.to_dict()))
     else:
@@ -99,7 +113,7 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
     from hubload.report.progress import LateProgress
 
     if any(api.is_machine_file(name) for name in files):
-        return machine_compare(files, as_json, plot, table, method)
+        return machine_compare(files, as_json, plot, table, force, method)
     inputs = inputs_of(tuple(files), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
     if table is not None:

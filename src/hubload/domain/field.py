@@ -16,6 +16,7 @@ class FieldData:
     failed: np.ndarray
     unit: tuple[str, ...] | None = None
     position: tuple[str, ...] | None = None
+    row_number: tuple[int, ...] = ()   # each unit's row in the file (for messages)
 
     @property
     def failures(self) -> int:

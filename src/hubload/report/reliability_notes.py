@@ -31,6 +31,9 @@ def forecast_notes(forecast: Forecast) -> list[str]:
              "distribution; the check's system life of the pair stands on the "
              "Lundberg-Palmgren slope 9/8 and differs from the wheel end's B10 (the check's "
              "verdict stays on the standard's system life)."]
+    if forecast.wheel_ends_per_machine > 1:
+        notes.append(f"The machine is every bearing of its {forecast.wheel_ends_per_machine} "
+                     "wheel ends in series (R = product of every bearing's R).")
     if forecast.calibration != 1.0:
         notes.append(f"Every life is multiplied by the calibration factor "
                      f"{forecast.calibration:g} (field B10 / predicted B10).")
@@ -68,7 +71,11 @@ def field_notes(study) -> list[str]:
                  "run so far (suspended).")
     found = study.prediction
     if found is not None:
-        notes.append(f"Predicted: the wheel end of {found.source} ({found.basis.symbol} of "
+        unit = "the wheel end" if found.wheel_end.name == "wheel end" else \
+            f"the machine's wheel end ({found.wheel_end.name}, " + \
+            ("by the rows' positions)" if study.data.position is not None else
+             "no position column: its wheel ends alike)")
+        notes.append(f"Predicted: {unit} of {found.source} ({found.basis.symbol} of "
                      f"each bearing, {distribution_text(found.model.kind, found.model.slope)}; "
                      f"uncalibrated). The ratio field B10 / predicted B10 may be carried into "
                      f"`hubload forecast` as [fleet] calibration_factor.")

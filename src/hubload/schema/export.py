@@ -74,12 +74,16 @@ def toml_value(value: Any) -> str:
     return f"{value:g}" if isinstance(value, float) else str(value)
 
 
-def template_lines(table: Table, path: str) -> list[str]:
+def template_lines(table: Table, path: str, values: dict | None = None) -> list[str]:
+    """The commented block of ``table``: each key with its example (or default), or with
+    ``values[key]`` where given (None: written commented out)."""
     header = f"[[{path}]]" if table.array else f"[{path}]"
     lines = [f"# {table.doc}" + ("" if table.required else " (optional table)"), header]
     lines += [f"# {choice.doc}" for choice in table.choices]
+    values = values or {}
     for spec in table.fields:
-        value = spec.example if spec.example is not None else spec.default
+        value = values[spec.key] if spec.key in values else \
+            spec.example if spec.example is not None else spec.default
         limits = spec.describe_limits()
         comment = f"  # {'required' if spec.required else 'optional'}. {spec.doc}" + (
             f" ({limits})" if limits else "")

@@ -22,14 +22,15 @@ MIN_WEIBULL_SLOPE, MAX_WEIBULL_SLOPE, MAX_CALIBRATION = 0.3, 10.0, 100.0
 FLEET = Table(
     name="fleet",
     required=False,
-    doc="A fleet of machines that carry this wheel end, for `hubload forecast`: expected "
-        "failures per year and within the warranty (docs/reliability.md). The check does not "
-        "use it. Options of the same names override the keys.",
+    doc="A fleet of machines that carry this wheel end (or, in a machine file, of this "
+        "machine), for `hubload forecast`: expected failures per year and within the warranty "
+        "(docs/reliability.md). The check does not use it. Options of the same names override "
+        "the keys.",
     fields=(
         Field("machines", "integer", "Machines in the fleet, all put into service together.",
               required=True, minimum=1, maximum=MAX_MACHINES, example=400),
         Field("wheel_ends_per_machine", "integer", "Wheel ends like this file's on each machine "
-              "(all on the same duty).", default=1, minimum=1, maximum=MAX_WHEEL_ENDS,
+              "(all on the same duty; not in a machine file, whose machine has its own).", default=1, minimum=1, maximum=MAX_WHEEL_ENDS,
               example=4),
         Field("hours_per_year_median", "number", "Median operating hours per machine and year "
               "[h] (half the fleet runs less, half more).", required=True, exclusive_minimum=0,
@@ -66,6 +67,9 @@ RELIABILITY = Table(
               maximum=MAX_WEIBULL_SLOPE),
     ),
 )
+
+# The key that a machine file's [fleet] refuses: the machine has its own wheel ends.
+PER_MACHINE = "wheel_ends_per_machine"
 
 # Tables that only `hubload forecast` reads: a sweep of their keys would change nothing.
 FORECAST_TABLES = (FLEET.name, RELIABILITY.name)

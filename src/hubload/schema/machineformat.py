@@ -10,6 +10,7 @@ from __future__ import annotations
 
 from hubload.model.machine import DRIVE_RULES
 from hubload.schema.fileformat import PROJECT, TIME_SUM_TOLERANCE_PERCENT
+from hubload.schema.fleetformat import FLEET, RELIABILITY
 from hubload.schema.limits import (MAX_LATERAL_G, MAX_RADIUS_MM, MAX_SPEED_KMH, MAX_VEHICLE_MM,
                                    MIN_RADIUS_MM, MIN_TRACK_MM)
 from hubload.schema.spec import Field, Table
@@ -134,5 +135,8 @@ OPERATION = Table(
 MACHINE_FORMAT = Table(
     name="",
     doc="A hubload machine file.",
-    tables=(PROJECT, MACHINE, PAYLOAD, AXLE, OPERATION),
+    # [fleet] and [reliability] as in a load-case file (`hubload forecast`), except that
+    # fleet.wheel_ends_per_machine is refused: the machine has its own four wheel ends
+    # (casefile/fleet.py).
+    tables=(PROJECT, MACHINE, PAYLOAD, AXLE, OPERATION, FLEET, RELIABILITY),
 )

@@ -4,7 +4,8 @@ Two-parameter Weibull by maximum likelihood with right censoring (bounds by the
 likelihood ratio) and by median-rank regression (Johnson's adjusted ranks, Benard's
 approximation), both from model/weibull_fit.py. With fewer than two failures there is
 no fit: a Weibayes estimate needs an assumed slope. The prediction is the wheel end of
-the file (its two bearings in series on the file's life distribution, uncalibrated);
+the file (its two bearings in series on the file's life distribution, uncalibrated; of a
+machine file the wheel end the rows come from, studies/machine_forecast.py);
 the ratio of the field B10 to the predicted B10 is the calibration factor that
 ``hubload forecast`` takes as ``calibration_factor``.
 """
@@ -35,7 +36,7 @@ class Prediction:
     title: str
     model: LifeModel
     basis: LifeBasis
-    wheel_end: ItemLives
+    wheel_end: ItemLives           # or a machine's MixtureLives (studies/machine_forecast.py)
     ratio: float                   # field B10 / predicted B10 (nan without a point estimate)
     ratio_low: float
     ratio_high: float

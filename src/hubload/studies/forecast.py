@@ -86,6 +86,10 @@ class Forecast:
     def bearings_per_machine(self) -> int:
         return sum(len(unit.bearings) for unit in self.units)
 
+    @property
+    def wheel_ends_per_machine(self) -> int:
+        return len(self.units)
+
 
 def failing(distributions) -> tuple[LifeDistribution, ...]:
     """The distributions that can fail: a bearing that carries no load has an infinite life."""
@@ -132,8 +136,14 @@ def item_lives(name: str, kind: str, distributions, target_life_h: float | None)
                      reliability_at_target=at_target, **lives)
 
 
-def items_of(units: tuple[Unit, ...], target_life_h: float | None) -> tuple[ItemLives, ...]:
-    """The first unit's bearings, each distinct unit, and the machine when it has several."""
+def items_of(units: tuple[Unit, ...], target_life_h: float | None,
+             each_unit: bool = False) -> tuple[ItemLives, ...]:
+    """The first unit's bearings, each distinct unit, and the machine when it has several;
+    ``each_unit`` (a machine file's wheel ends, each with its own duty): every unit by its
+    name, then the machine."""
+    if each_unit:
+        return tuple(item_lives(unit.name, "wheel end", unit.distributions, target_life_h)
+                     for unit in units) + machine_items(units, target_life_h)
     first = units[0]
     items = [item_lives(f"{label} bearing", "bearing", (d,), target_life_h)
              for label, d in first.bearings]
@@ -141,11 +151,15 @@ def items_of(units: tuple[Unit, ...], target_life_h: float | None) -> tuple[Item
     kind = "wheel end"
     items += [item_lives(unit.name if len(distinct) > 1 else kind, kind, unit.distributions,
                          target_life_h) for unit in distinct.values()]
-    if len(units) > 1:
-        every = tuple(d for unit in units for d in unit.distributions)
-        items.append(item_lives(f"machine ({len(units)} wheel ends)", "machine", every,
-                                target_life_h))
-    return tuple(items)
+    return tuple(items) + machine_items(units, target_life_h)
+
+
+def machine_items(units: tuple[Unit, ...], target_life_h: float | None) -> tuple[ItemLives, ...]:
+    """The machine, every bearing of every unit in series (none for a single unit)."""
+    if len(units) < 2:
+        return ()
+    every = tuple(d for unit in units for d in unit.distributions)
+    return (item_lives(f"machine ({len(units)} wheel ends)", "machine", every, target_life_h),)
 
 
 def fleet_outcome(units: tuple[Unit, ...], fleet: Fleet | None) -> FleetForecast | None:
@@ -165,11 +179,12 @@ def fleet_outcome(units: tuple[Unit, ...], fleet: Fleet | None) -> FleetForecast
 
 def forecast_of_units(units: tuple[Unit, ...], *, title: str, source: str, model: LifeModel,
                       basis: LifeBasis, target_life_h: float | None, calibration: float,
-                      fleet: Fleet | None) -> Forecast:
-    """The forecast of one machine's units (already calibrated): every builder ends here."""
+                      fleet: Fleet | None, each_unit: bool = False) -> Forecast:
+    """The forecast of one machine's units (already calibrated): every builder ends here.
+    ``each_unit``: list every unit (see :func:`items_of`)."""
     return Forecast(title=title, source=source, model=model, basis=basis,
                     target_life_h=target_life_h, calibration=calibration, units=units,
-                    items=items_of(units, target_life_h), fleet=fleet,
+                    items=items_of(units, target_life_h, each_unit), fleet=fleet,
                     outcome=fleet_outcome(units, fleet))
 
 

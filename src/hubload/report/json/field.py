@@ -28,6 +28,7 @@ def against_entry(study: FieldStudy) -> dict | None:
     wheel_end = found.wheel_end
     return {"source": found.source, "title": found.title, "distribution": found.model.kind,
             "weibull_slope": found.model.slope, "basis": found.basis.symbol,
+            "predicted_unit": wheel_end.name,
             "predicted_b10_h": json_number(wheel_end.b10_h),
             "predicted_b1_h": json_number(wheel_end.b1_h),
             "predicted_b50_h": json_number(wheel_end.b50_h),

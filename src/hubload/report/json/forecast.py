@@ -32,7 +32,7 @@ def fleet_entry(forecast: Forecast) -> dict | None:
                     json_numbers(outcome.first_failures_cumulative))]
     return {
         "machines": fleet.machines,
-        "wheel_ends_per_machine": fleet.wheel_ends_per_machine,
+        "wheel_ends_per_machine": forecast.wheel_ends_per_machine,
         "bearings_per_machine": forecast.bearings_per_machine,
         "hours_per_year_median": fleet.usage_median_h_per_year,
         "hours_per_year_spread": fleet.usage_sigma_ln,

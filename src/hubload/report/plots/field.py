@@ -22,6 +22,15 @@ CURVE_POINTS = 100
 MAX_RUG = 500      # rug marks of suspensions: enough to show their spread, bounded in size
 
 
+
+def prediction_name(name: str) -> str:
+    """A load-case file's "wheel end"; a machine's "wheel end rear left" or "wheel end
+    (mixture of the machine's wheel ends)"."""
+    if name == "wheel end":
+        return name
+    return "wheel end (mixture of the machine's)" if name.startswith("mixture") else \
+        f"wheel end {name}"
+
 def weibull_y(probability):
     """ln ln(1 / (1 - F)) of probability paper."""
     return np.log(-np.log1p(-np.asarray(probability, dtype=float)))
@@ -106,7 +115,8 @@ def field_figure(study: FieldStudy) -> Figure:
         shown = probability > low_p / 10
         axes.plot(time[shown], weibull_y(probability[shown]), color=TARGET_COLOUR,
                   linewidth=1.6, linestyle="-.",
-                  label=f"predicted wheel end ({found.basis.symbol}, {found.model.kind}): "
+                  label=f"predicted {prediction_name(found.wheel_end.name)} "
+                        f"({found.basis.symbol}, {found.model.kind}): "
                         f"B10 {found.wheel_end.b10_h:,.0f} h")
     if not study.is_fit:
         bound_times = fit.eta_low_h * (-np.log1p(-span)) ** (1.0 / fit.beta)

@@ -16,6 +16,8 @@ from hubload.studies.forecast import Forecast
 
 LINE_STYLES = (("#1f77b4", "--", "o"), ("#ff7f0e", ":", "s"), (SYSTEM_COLOUR, "-", None),
                ("#555555", "-.", "^"))
+UNIT_STYLES = tuple(style for style in LINE_STYLES if style[0] != SYSTEM_COLOUR)
+MACHINE_STYLE = (SYSTEM_COLOUR, "-", None)
 CURVE_POINTS = 200
 SHORT_DISTRIBUTION = {"iso281": "ISO 281: Weibull slope 1.5, minimum life 0.05 L10",
                       "weibull": "two-parameter Weibull, slope {slope:g}"}
@@ -27,13 +29,38 @@ def time_range_h(forecast: Forecast) -> tuple[float, float]:
     return (0.2 * min(finite), 2.0 * max(finite)) if finite else (1.0, 1e5)
 
 
+def curves(forecast: Forecast) -> list[tuple[str, object]]:
+    """One curve per distinct item: a machine's mirror-image wheel ends, whose B-lives agree
+    but for rounding, share one curve named "front left = front right"."""
+    found: list[tuple[list[str], object]] = []
+    for item in forecast.items:
+        same = next((names for names, other in found if other.kind == item.kind and all(
+            math.isclose(getattr(item, key), getattr(other, key), rel_tol=1e-9)
+            for key in ("b1_h", "b10_h", "b50_h"))), None)
+        if same is None:
+            found.append(([item.name], item))
+        else:
+            same.append(item.name)
+    return [(" = ".join(names), item) for names, item in found]
+
+
+def line_styles(forecast: Forecast):
+    """The load-case file's styles in their order; a machine file's units cycle through the
+    dashed styles and its machine is the solid system line."""
+    if forecast.wheel_ends_per_machine == 1 or forecast.items[0].kind == "bearing":
+        yield from LINE_STYLES * 3
+        return
+    for index, (_, item) in enumerate(curves(forecast)):
+        yield MACHINE_STYLE if item.kind == "machine" else UNIT_STYLES[index % len(UNIT_STYLES)]
+
+
 def draw_failure_probability(axes, forecast: Forecast) -> None:
     low, high = time_range_h(forecast)
     time = np.geomspace(low, high, CURVE_POINTS)
-    for item, (colour, style, marker) in zip(forecast.items, LINE_STYLES * 3):
+    for (label, item), (colour, style, marker) in zip(curves(forecast), line_styles(forecast)):
         axes.plot(time, 100.0 * item.failure_probability(time), color=colour, linestyle=style,
                   linewidth=2.2 if item.kind != "bearing" else 1.4, marker=marker,
-                  markevery=25, markersize=4, label=item.name)
+                  markevery=25, markersize=4, label=label)
     if forecast.target_life_h is not None:
         axes.axvline(forecast.target_life_h, color=TARGET_COLOUR, linewidth=1.0,
                      linestyle=(0, (1, 1)), label=f"target {forecast.target_life_h:,.0f} h")

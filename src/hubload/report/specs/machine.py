@@ -67,3 +67,61 @@ def cases_table(wheel: WheelEndResult, limit: int | None) -> TableSpec:
     spec = TableSpec("cases", f"Derived spectrum of the {wheel.name} wheel", tuple(columns),
                      keep_first=2)
     return cut_to_cases(spec, governing.system_damage_share, governing.symbol, limit)
+
+
+def optional_hours(value) -> str:
+    return "-" if value is None else hours(value)
+
+
+def wheel_end_lives_table(machine: MachineResult) -> TableSpec:
+    """Each wheel end's system and bearing lives and static safeties (the sheets' detail)."""
+    wheels = machine.wheel_ends
+
+    def modified(wheel: WheelEndResult, label: str | None):
+        found = wheel.result.modified
+        if found is None:
+            return None
+        return float(found.system_life_h if label is None else found.bearings[label].life_h)
+
+    columns = [
+        Column("name", "wheel end", [w.name for w in wheels], name=True),
+        Column("system.l10_h", "L10 pair", [float(w.result.system_life_h) for w in wheels],
+               "h", hours, legend="basic system life of the pair"),
+        Column("system.l10m_h", "L10m pair", [modified(w, None) for w in wheels], "h",
+               optional_hours, legend="modified system life of the pair (with [lubrication])"),
+    ]
+    for label in wheels[0].result.bearings:
+        columns += [
+            Column(f"bearings.{label}.l10_h", f"L10 {label}",
+                   [float(w.result.bearings[label].life_h) for w in wheels], "h", hours),
+            Column(f"bearings.{label}.l10m_h", f"L10m {label}",
+                   [modified(w, label) for w in wheels], "h", optional_hours),
+            Column(f"bearings.{label}.s0", f"s0 {label}",
+                   [float(w.result.bearings[label].static_safety) for w in wheels], "", safety),
+        ]
+    return TableSpec("wheel_end_lives", "Lives of the wheel ends", tuple(columns))
+
+
+def machine_table(machine: MachineResult) -> TableSpec:
+    """The machine's lives as a series system of its wheel ends, and its verdict."""
+    governing = machine.governing
+    verdict = machine.verdict
+    overall = machine.overall
+    columns = [
+        Column("l10_h", "L10", [machine.l10_h], "h", hours,
+               legend="basic life of every bearing of every wheel end in series"),
+        Column("l10m_h", "L10m", [machine.l10m_h], "h", optional_hours,
+               legend="modified life likewise (every wheel end with [lubrication])"),
+        Column("governing_life.symbol", "governing", [governing.symbol], name=True),
+        Column("governing_life.life_h", "life", [governing.life_h], "h", hours,
+               legend=f"governing life: {governing.basis}"),
+        Column("weakest", "weakest wheel end", [machine.weakest.name], name=True),
+        Column("target_life_h", "target", [machine.study.target_life_h], "h", optional_hours),
+        Column("verdict", "verdict", ["-" if verdict is None else
+                                      "PASS" if verdict.passed else "FAIL"], name=True,
+               legend="the machine's governing life against the target"),
+        Column("overall_verdict", "overall", ["-" if overall is None else
+                                              "PASS" if overall.passed else "FAIL"], name=True,
+               legend="bearings and every wheel end's shaft checks"),
+    ]
+    return TableSpec("machine", "The machine", tuple(columns))

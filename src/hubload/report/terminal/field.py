@@ -38,7 +38,8 @@ def prediction_lines(study: FieldStudy) -> list[str]:
     if found is None:
         return []
     ratio = "-" if found.ratio != found.ratio else f"{found.ratio:.2f}"
-    return [f"Predicted wheel end ({plain(found.source)}): B10 "
+    unit = "" if found.wheel_end.name == "wheel end" else f"{plain(found.wheel_end.name)}; "
+    return [f"Predicted wheel end ({unit}{plain(found.source)}): B10 "
             f"{hours_with_unit(found.wheel_end.b10_h)}, B50 "
             f"{hours_with_unit(found.wheel_end.b50_h)}.",
             f"Field B10 / predicted B10 = {ratio} ({100 * study.fit.confidence:g} % bounds "

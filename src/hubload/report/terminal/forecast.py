@@ -15,10 +15,10 @@ from hubload.studies.forecast import Forecast
 
 def warranty_lines(forecast: Forecast) -> list[str]:
     fleet, outcome = forecast.fleet, forecast.outcome
-    bearings = forecast.bearings_per_machine
+    bearings, wheel_ends = forecast.bearings_per_machine, forecast.wheel_ends_per_machine
     return [
         f"Fleet: {fleet.machines:,} machines x {bearings} bearings "
-        f"({fleet.wheel_ends_per_machine} wheel end{'s' if fleet.wheel_ends_per_machine > 1 else ''}), "
+        f"({wheel_ends} wheel end{'s' if wheel_ends > 1 else ''}), "
         f"{fleet.years} years.",
         f"In the warranty: {outcome.warranty_first_failures:,.1f} bearing failures expected "
         f"(90 % band {outcome.warranty_first_failures_low:,} to "
