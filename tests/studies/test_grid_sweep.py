@@ -8,7 +8,6 @@ import json
 
 import pytest
 
-from hubload.casefile.load import read_document
 from hubload.report.json.sweep import sweep_document
 from hubload.studies import sweep as sweep_module
 from studies_helpers import LOAD_CASES, YARD_LOADER
@@ -32,11 +31,27 @@ def test_batched_grid_equals_the_point_by_point_grid(monkeypatch, file, first, s
     assert json.dumps(fast, sort_keys=True) == json.dumps(slow, sort_keys=True)
 
 
-def test_keys_of_one_table_are_built_point_by_point():
-    # Cross-key rules of one table hold only point by point (the bearings' order, the time
-    # shares): such a grid is not assembled from the axes.
-    document = read_document(YARD_LOADER)
-    axes = tuple(sweep_module.parse_vary(spec, document, str(YARD_LOADER)) for spec in
-                 ("pair.outboard.position_mm=20:40:3", "pair.inboard.position_mm=-60:-40:3"))
-    base = sweep_module.study_from_document(document, str(YARD_LOADER))
-    assert sweep_module.grid_study(document, axes, base, str(YARD_LOADER)) is None
+SAME_TABLE = [
+    (YARD_LOADER, "wheel.offset_mm=40:200:4", "wheel.loaded_radius_mm=300:500:3"),
+    (YARD_LOADER, "pair.outboard.position_mm=20:40:3", "pair.inboard.position_mm=-60:-40:3"),
+    (YARD_LOADER, "shaft.section[0].diameter_mm=55:75:3", "shaft.section[1].position_mm=0:20:3"),
+]
+
+
+@pytest.mark.parametrize("file, first, second", SAME_TABLE, ids=lambda v: str(v)[:24])
+def test_keys_of_one_table_give_what_the_point_by_point_grid_gives(monkeypatch, file, first,
+                                                                   second):
+    test_batched_grid_equals_the_point_by_point_grid(monkeypatch, file, first, second)
+
+
+def test_a_corner_that_breaks_a_cross_key_rule_is_refused_naming_the_point():
+    # The bearings must stay in order along the shaft. Each axis alone keeps them in order
+    # (the file's outboard bearing is at 28 mm, its inboard one at -52 mm); the corner of
+    # the outboard bearing at 20 mm and the inboard one at 25 mm does not.
+    from hubload.errors import InputError
+
+    with pytest.raises(InputError) as refused:
+        sweep_module.run_sweep(str(YARD_LOADER), ["pair.outboard.position_mm=20:40:3",
+                                                  "pair.inboard.position_mm=-60:25:3"])
+    assert "at pair.outboard.position_mm = 20, pair.inboard.position_mm = 25" in \
+        str(refused.value)

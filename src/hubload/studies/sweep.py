@@ -284,18 +284,26 @@ class PointStudies:
 
 def grid_study(document: dict, axes: tuple[Axis, ...], base: Study, file: str):
     """A builder of a grid's batched studies from each axis's variants (domain.grid), or None
-    where the points must be built one by one: when two axes move keys of one table (its
-    cross-key rules, e.g. the time shares adding to 100 % or the bearings' order, hold only
-    point by point) or vary the same leaf of the study (a derived value)."""
-    tables = [{path.segments[0][0] for path, _ in axis.moving()} for axis in axes]
-    if sum(len(t) for t in tables) != len(set().union(*tables)):
-        return None
+    where the points must be built one by one: when two axes vary the same leaf of the study
+    (a derived value).
+
+    Two axes may move keys of one table, whose cross-key rules (the bearings' order, a
+    section inside the shaft) hold point by point: the grid's corners are then validated as
+    points of their own. The rules are comparisons of values that move monotonically along
+    each axis, so where every corner holds them, every point of the grid does."""
     variants = [variant_studies(document, [axis.at(i) for i in range(len(axis.values))], file)
                 for axis in axes]
     try:
-        return grid_builder(base, variants)
+        build = grid_builder(base, variants)
     except StackError:
         return None
+    tables = [{path.segments[0][0] for path, _ in axis.moving()} for axis in axes]
+    if build is not None and sum(len(t) for t in tables) != len(set().union(*tables)):
+        corners = [{path: value for axis, index in zip(axes, corner)
+                    for path, value in axis.at(index).items()}
+                   for corner in itertools.product(*((0, len(a.values) - 1) for a in axes))]
+        variant_studies(document, corners, file)
+    return build
 
 
 def chunk_bounds(total: int) -> list[tuple[int, int]]:
