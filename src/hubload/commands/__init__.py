@@ -50,10 +50,13 @@ def inputs_of(files: tuple[str, ...], *outputs: str | None) -> tuple[str, ...]:
 
 
 def checked_table(path: str | None, sheets, force: bool, inputs: tuple[str, ...]) -> None:
+    """Refuse a --table output before the work; ``sheets``: the sheet names, or where they
+    are ("module:NAME", imported only with a --table)."""
     if path is not None:
         from hubload.report.spreadsheet.workbook import check_outputs
 
-        check_outputs(path, sheets, force, inputs)
+        check_outputs(path, named(sheets) if isinstance(sheets, str) else sheets, force,
+                      inputs)
 
 
 def write_table(path: str, sheets, force: bool, inputs: tuple[str, ...]) -> list[str]:
@@ -61,6 +64,54 @@ def write_table(path: str, sheets, force: bool, inputs: tuple[str, ...]) -> list
     from hubload.report.spreadsheet.workbook import write_sheets
 
     return list(write_sheets(path, sheets, force, inputs))
+
+
+class Outputs:
+    """The files a command writes, each under the progress bar's phase of its own, named on
+    the terminal once the bar is gone (``name_all``)."""
+
+    def __init__(self, progress, force: bool, inputs: tuple[str, ...]):
+        self.progress, self.force, self.inputs = progress, force, inputs
+        self.files: list[tuple[str, str]] = []
+
+    def table(self, path: str | None, sheets: str, *args) -> None:
+        """Write the sheets ``sheets(*args)`` (named "module:function", imported only when
+        asked for) to the --table ``path`` when one is given."""
+        if path is not None:
+            self.progress.phase("writing the tables")
+            self.files += [("Table", name) for name in
+                           write_table(path, named(sheets)(*args), self.force, self.inputs)]
+
+    def plot(self, path: str | None, figure: str, *args) -> None:
+        """Draw ``figure(*args)`` ("module:function") into the --plot ``path`` when given."""
+        if path is not None:
+            from hubload.report.plots import save
+
+            self.progress.phase("drawing the plot")
+            save(named(figure)(*args), path, self.force, self.inputs)
+            self.files.append(("Plot", path))
+
+    def name_all(self, as_json: bool) -> None:
+        for kind, path in self.files:
+            written(kind, path, as_json)
+
+
+def named(reference: str):
+    """The function "module:function", its module imported now (outputs load only when
+    asked for: plots, sheets and tables cost start-up time)."""
+    from importlib import import_module
+
+    module, _, name = reference.partition(":")
+    return getattr(import_module(module), name)
+
+
+def printed(found, document: str | None, render: str, **options) -> None:
+    """The --json document when one was built, else ``render(result, console, **options)``
+    ("module:function")."""
+    if document is not None:
+        click.echo(document)
+    else:
+        named(render)(found.value, console(), **options)
 
 
 def check(file: str, as_json: bool = False, report: str | None = None,
@@ -71,40 +122,20 @@ def check(file: str, as_json: bool = False, report: str | None = None,
     inputs = inputs_of((file,), report, plot, table)
     checked(report, force, (".html", ".htm"), inputs)
     checked(plot, force, PLOT_SUFFIXES, inputs)
-    if table is not None:
-        from hubload.report.spreadsheet.check import SHEETS
-
-        checked_table(table, SHEETS, force, inputs)
-    files = []
+    checked_table(table, "hubload.report.spreadsheet.check:SHEETS", force, inputs)
     with LateProgress("reading the file") as progress:  # ends before anything is printed
+        outputs = Outputs(progress, force, inputs)
         study = api.load(file, method)
         found = api.check(study, on_progress=progress.phase(computing(study)))
-        if table is not None:
-            from hubload.report.spreadsheet.check import check_sheets
-
-            progress.phase("writing the tables")
-            files += [("Table", name) for name in
-                      write_table(table, check_sheets(found.value), force, inputs)]
+        outputs.table(table, "hubload.report.spreadsheet.check:check_sheets", found.value)
         if report is not None:
             write_report(found, file, report, force, inputs,
                          progress.phase("writing the report"))
-            files.append(("Report", report))
-        if plot is not None:
-            from hubload.report.plots import save
-            from hubload.report.plots.spectrum import damage_share_figure
-
-            progress.phase("drawing the plot")
-            save(damage_share_figure(found.value), plot, force, inputs)
-            files.append(("Plot", plot))
+            outputs.files.append(("Report", report))
+        outputs.plot(plot, "hubload.report.plots.spectrum:damage_share_figure", found.value)
         document = json_text(found, progress) if as_json else None
-    for kind, path in files:
-        written(kind, path, as_json)
-    if as_json:
-        click.echo(document)
-    else:
-        from hubload.report.terminal.check import render_check
-
-        render_check(found.value, console(), show_all=show_all)
+    outputs.name_all(as_json)
+    printed(found, document, "hubload.report.terminal.check:render_check", show_all=show_all)
     return found
 
 

@@ -5,10 +5,9 @@ from __future__ import annotations
 import click
 
 from hubload import api
-from hubload.commands import (PLOT_SUFFIXES, checked, checked_table, console, inputs_of,
-                              json_text, write_table, written)
+from hubload.commands import (PLOT_SUFFIXES, Outputs, checked, checked_table, console,
+                              inputs_of, json_text, printed, written)
 from hubload.errors import InputError
-from hubload.report.json.text import document_text
 
 
 def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | None = None,
@@ -22,61 +21,33 @@ def sweep(file: str, specs: tuple[str, ...], as_json: bool = False, plot: str | 
         raise InputError(f"--plot draws one or two --vary keys, got {len(specs)}", file=plot)
     if api.is_machine_file(file):
         return machine_sweep(file, specs, as_json, plot, table, force, method)
-    if table is not None:
-        from hubload.report.spreadsheet.studies import SWEEP_SHEETS
-
-        checked_table(table, SWEEP_SHEETS, force, inputs)
-    files = []
+    checked_table(table, "hubload.report.spreadsheet.studies:SWEEP_SHEETS", force, inputs)
     with LateProgress("sweeping") as progress:
+        outputs = Outputs(progress, force, inputs)
         found = api.sweep(file, specs, method=method, on_progress=progress)
-        if table is not None:
-            from hubload.report.spreadsheet.studies import sweep_sheets
-
-            progress.phase("writing the tables")
-            files += [("Table", name) for name in
-                      write_table(table, sweep_sheets(found.value), force, inputs)]
-        if plot is not None:
-            from hubload.report.plots import save
-            from hubload.report.plots.sweep import sweep_contour_figure, sweep_line_figure
-
-            progress.phase("drawing the plot")
-            draw = sweep_line_figure if len(found.axes) == 1 else sweep_contour_figure
-            save(draw(found.value), plot, force, inputs)
-            files.append(("Plot", plot))
+        outputs.table(table, "hubload.report.spreadsheet.studies:sweep_sheets", found.value)
+        outputs.plot(plot, "hubload.report.plots.sweep:sweep_line_figure" if len(found.axes) == 1
+                     else "hubload.report.plots.sweep:sweep_contour_figure", found.value)
         document = json_text(found, progress) if as_json else None
-    for kind, path in files:
-        written(kind, path, as_json)
-    if as_json:
-        click.echo(document)
-    else:
-        from hubload.report.terminal.sweep import render
-
-        render(found.value, console())
+    outputs.name_all(as_json)
+    printed(found, document, "hubload.report.terminal.sweep:render")
     return found
 
 
 def machine_sweep(file: str, specs: tuple[str, ...], as_json: bool, plot: str | None,
                   table: str | None, force: bool, method: str | None):
     from hubload.report.progress import LateProgress
-    from hubload.report.spreadsheet.machine import SWEEP_SHEETS, machine_sweep_sheets
 
     refuse_plot_for_machines(plot, "sweeps", "or sweep a wheel file of --write-wheel-files")
-    checked_table(table, SWEEP_SHEETS, force, (file,))
-    written_tables = []
+    checked_table(table, "hubload.report.spreadsheet.machine:SWEEP_SHEETS", force, (file,))
     with LateProgress("sweeping") as progress:
+        outputs = Outputs(progress, force, (file,))
         found = api.sweep(file, specs, method=method, on_progress=progress)
-        if table is not None:
-            written_tables = write_table(table, machine_sweep_sheets(found.value), force,
-                                         (file,))
+        outputs.table(table, "hubload.report.spreadsheet.machine:machine_sweep_sheets",
+                      found.value)
         document = json_text(found, progress) if as_json else None
-    for name in written_tables:
-        written("Table", name, as_json)
-    if as_json:
-        click.echo(document)
-    else:
-        from hubload.report.terminal.machine_sweep import render as render_machine
-
-        render_machine(found.value, console())
+    outputs.name_all(as_json)
+    printed(found, document, "hubload.report.terminal.machine_sweep:render")
     return found
 
 
@@ -89,21 +60,19 @@ def refuse_plot_for_machines(plot: str | None, what: str, hint: str = "") -> Non
 
 def machine_compare(files: tuple[str, ...], as_json: bool, plot: str | None,
                     table: str | None, force: bool, method: str | None):
-    from hubload.report.spreadsheet.machine import COMPARE_SHEETS, machine_compare_sheets
+    from hubload.report.progress import LateProgress
 
     refuse_plot_for_machines(plot, "comparisons")
-    checked_table(table, COMPARE_SHEETS, force, tuple(files))
-    found = api.compare(list(files), method=method)
-    if table is not None:
-        for name in write_table(table, machine_compare_sheets(found.value), force,
-                                tuple(files)):
-            written("Table", name, as_json)
-    if as_json:
-        click.echo(document_text(found.to_dict()))
-    else:
-        from hubload.report.terminal.machine_compare import render as render_machines
-
-        render_machines(found.value, console())
+    checked_table(table, "hubload.report.spreadsheet.machine:COMPARE_SHEETS", force,
+                  tuple(files))
+    with LateProgress(f"comparing {len(files)} machines") as progress:
+        outputs = Outputs(progress, force, tuple(files))
+        found = api.compare(list(files), method=method)
+        outputs.table(table, "hubload.report.spreadsheet.machine:machine_compare_sheets",
+                      found.value)
+        document = json_text(found, progress) if as_json else None
+    outputs.name_all(as_json)
+    printed(found, document, "hubload.report.terminal.machine_compare:render")
     return found
 
 
@@ -116,35 +85,15 @@ def compare(files: tuple[str, ...], as_json: bool = False, plot: str | None = No
         return machine_compare(files, as_json, plot, table, force, method)
     inputs = inputs_of(tuple(files), plot, table)
     checked(plot, force, PLOT_SUFFIXES, inputs)
-    if table is not None:
-        from hubload.report.spreadsheet.studies import COMPARE_SHEETS
-
-        checked_table(table, COMPARE_SHEETS, force, inputs)
-    outputs = []
+    checked_table(table, "hubload.report.spreadsheet.studies:COMPARE_SHEETS", force, inputs)
     with LateProgress(f"comparing {len(files)} files") as progress:
+        outputs = Outputs(progress, force, inputs)
         found = api.compare(list(files), method=method, on_progress=progress)
-        if table is not None:
-            from hubload.report.spreadsheet.studies import compare_sheets
-
-            progress.phase("writing the tables")
-            outputs += [("Table", name) for name in
-                        write_table(table, compare_sheets(found.value), force, inputs)]
-        if plot is not None:
-            from hubload.report.plots import save
-            from hubload.report.plots.spectrum import compare_figure
-
-            progress.phase("drawing the plot")
-            save(compare_figure(found.value), plot, force, inputs)
-            outputs.append(("Plot", plot))
+        outputs.table(table, "hubload.report.spreadsheet.studies:compare_sheets", found.value)
+        outputs.plot(plot, "hubload.report.plots.spectrum:compare_figure", found.value)
         document = json_text(found, progress) if as_json else None
-    for kind, path in outputs:
-        written(kind, path, as_json)
-    if as_json:
-        click.echo(document)
-    else:
-        from hubload.report.terminal.compare import render
-
-        render(found.value, console())
+    outputs.name_all(as_json)
+    printed(found, document, "hubload.report.terminal.compare:render")
     return found
 
 
