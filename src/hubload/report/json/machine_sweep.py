@@ -10,9 +10,9 @@ from __future__ import annotations
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.json.machine import machine_document
-from hubload.report.numbers import json_number
-from hubload.studies.machine_sweep import MachineSweep
+from hubload.report.json.sweep import parameter_entries
 from hubload.report.json.text import document_text
+from hubload.studies.machine_sweep import MachineSweep
 
 POINT_KEYS = ("machine", "governing_life", "verdict", "overall_verdict")
 
@@ -32,14 +32,7 @@ def machine_sweep_document(sweep: MachineSweep) -> dict:
         "title": sweep.title,
         "source": sweep.source,
         "kind": "machine",
-        "parameters": [{"key": axis.key, "start": json_number(axis.values[0]),
-                        "stop": json_number(axis.values[-1]), "count": len(axis.values),
-                        "file_value": sweep.file_values.get(axis.key),
-                        "linked": [{"key": path.text, "start": json_number(values[0]),
-                                    "stop": json_number(values[-1]),
-                                    "file_value": sweep.file_values.get(path.text)}
-                                   for path, values in axis.linked]}
-                       for axis in sweep.axes],
+        "parameters": parameter_entries(sweep.axes, sweep.file_values),
         "target_life_h": sweep.target_life_h,
         "governing_life": sweep.results[0].governing.symbol,
         "points": [{"values": values, **point_document(result)}

@@ -34,19 +34,25 @@ def crossing_entries(found, sweep: Sweep) -> list[dict]:
             for where, crossings in found for c in crossings]
 
 
+def parameter_entries(axes, file_values: dict) -> list[dict]:
+    """``parameters[]``: each axis's key, range and the file's value, with its linked keys
+    (load-case and machine sweeps alike)."""
+    return [{"key": axis.key, "start": json_number(axis.values[0]),
+             "stop": json_number(axis.values[-1]), "count": len(axis.values),
+             "file_value": file_values.get(axis.key),
+             "linked": [{"key": path.text, "start": json_number(values[0]),
+                         "stop": json_number(values[-1]),
+                         "file_value": file_values.get(path.text)}
+                        for path, values in axis.linked]}
+            for axis in axes]
+
+
 def sweep_document(sweep: Sweep) -> dict:
     """``points[]`` with ``values`` and the check's per-point objects (bearings, system, ...)."""
     return {
         "title": sweep.title,
         "source": sweep.source,
-        "parameters": [{"key": axis.key, "start": json_number(axis.values[0]),
-                        "stop": json_number(axis.values[-1]), "count": len(axis.values),
-                        "file_value": sweep.file_values.get(axis.key),
-                        "linked": [{"key": path.text, "start": json_number(values[0]),
-                                    "stop": json_number(values[-1]),
-                                    "file_value": sweep.file_values.get(path.text)}
-                                   for path, values in axis.linked]}
-                       for axis in sweep.axes],
+        "parameters": parameter_entries(sweep.axes, sweep.file_values),
         "target_life_h": sweep.target_life_h,
         "governing_life": sweep.first.governing.symbol,
         "points_detail": "summary" if summarised(sweep) else "full",
