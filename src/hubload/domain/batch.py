@@ -108,6 +108,30 @@ def pick(batched: Any, index: int, count: int, studies: Sequence[Study]) -> Any:
     return batched if take is None else take(index)
 
 
+def rebuilder(instance: Any) -> Callable[[dict], Any]:
+    """A function changes -> a copy of the dataclass ``instance`` with those fields changed.
+
+    ``dataclasses.replace`` runs ``__init__`` with every field, the bulk of taking a point out
+    of a batched result; a frozen dataclass whose fields are all set by ``__init__`` and
+    that checks nothing after it is copied field by field instead (cached properties of the
+    batch are left behind, as a fresh instance would have them)."""
+    kind = type(instance)
+    fields = dataclasses.fields(instance)
+    plain = (not hasattr(kind, "__post_init__") and not hasattr(kind, "__slots__")
+             and all(field.init for field in fields))
+    if not plain:
+        return lambda changes: dataclasses.replace(instance, **changes)
+    shared = {field.name: getattr(instance, field.name) for field in fields}
+
+    def rebuild(changes: dict) -> Any:
+        copy = object.__new__(kind)
+        copy.__dict__.update(shared)
+        copy.__dict__.update(changes)
+        return copy
+
+    return rebuild
+
+
 def picker(batched: Any, count: int, studies: Sequence[Study]) -> Callable[[int], Any] | None:
     """A function index -> that point of ``batched``; None when nothing depends on the point.
 
@@ -124,7 +148,8 @@ def picker(batched: Any, count: int, studies: Sequence[Study]) -> Callable[[int]
         varying = {name: take for name, take in parts.items() if take is not None}
         if not varying:
             return None
-        return lambda i: dataclasses.replace(batched, **{n: t(i) for n, t in varying.items()})
+        rebuild = rebuilder(batched)
+        return lambda i: rebuild({n: t(i) for n, t in varying.items()})
     if isinstance(batched, dict):
         parts = {key: picker(value, count, studies) for key, value in batched.items()}
         if all(take is None for take in parts.values()):
