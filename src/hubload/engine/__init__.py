@@ -145,9 +145,9 @@ def shaft_result(study: Study, mean_rpm):
 def geometry_ratings(study: Study) -> dict:
     if all(bearing.geometry is None for bearing in study.pair.bearings().values()):
         return {}
-    from hubload.engine import refined_method
+    from hubload.engine.geometry import geometry_ratings as from_geometry
 
-    return refined_method.geometry_ratings(study)
+    return from_geometry(study)
 
 
 def friction_of(study: Study, lives: MethodLives):

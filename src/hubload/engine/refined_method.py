@@ -16,21 +16,12 @@ from dataclasses import dataclass
 import numpy as np
 
 from hubload.domain.study import Bearing, Study
-from hubload.engine.modified_life import per_study
+from hubload.engine.geometry import geometry_ratings
 from hubload.model import iso281
-from hubload.model.refined import ratings
 from hubload.model.refined.life import life_factor_of_rating_factor, reference_equivalent_load_n
 from hubload.progress import in_parts
 
 LABELS = ("outboard", "inboard")
-
-
-@dataclass(frozen=True)
-class GeometryRatings:
-    """C [N] (ISO 281) and C0 [N] (ISO 76) from a bearing's internal geometry."""
-
-    dynamic_n: np.ndarray
-    static_n: np.ndarray
 
 
 @dataclass(frozen=True)
@@ -58,21 +49,6 @@ class RefinedPair:
     def unsolved_cases(self) -> list[int]:
         """Indices of the cases without equilibrium (single studies)."""
         return [int(i) for i in np.flatnonzero(~self.converged)]
-
-
-def geometry_ratings(study: Study) -> dict[str, GeometryRatings]:
-    """C and C0 from the geometry of each bearing that gives its geometry."""
-    found = {}
-    for label, bearing in study.pair.bearings().items():
-        g = bearing.geometry
-        if g is None:
-            continue
-        args = (g.rollers, g.roller_diameter_m, g.roller_length_m, g.contact_angle_rad,
-                g.pitch_diameter_m)
-        found[label] = GeometryRatings(
-            per_study(ratings.dynamic_rating_n(*args) * bearing.geometry_rating_factor),
-            per_study(ratings.static_rating_n(*args)))
-    return found
 
 
 def uniform(value) -> bool:

@@ -124,10 +124,13 @@ def reliability_factor(reliability_percent):
     za is the standard normal quantile; the standard library's (Wichura's algorithm AS 241)
     keeps scipy.special out of the CLI's start-up.
     """
-    from statistics import NormalDist  # only a reliability factor needs it
+    reliability = np.asarray(reliability_percent, dtype=float) / 100.0
+    if np.all(reliability == 0.5):  # the median endurance limit: za = 0, ke = 1
+        return np.ones_like(reliability)
+    from statistics import NormalDist  # loaded only for a reliability above the median
 
     quantile = np.vectorize(NormalDist().inv_cdf, otypes=[float])
-    return 1.0 - RELIABILITY_SLOPE * quantile(np.asarray(reliability_percent, dtype=float) / 100.0)
+    return 1.0 - RELIABILITY_SLOPE * quantile(reliability)
 
 
 @dataclass(frozen=True)
