@@ -87,6 +87,23 @@ class OverallVerdict:
         """The item with the smallest load margin (single study)."""
         return self.items[int(self.worst_index)]
 
+    def point(self, index: int, count: int) -> "OverallVerdict":
+        """Point ``index`` of a verdict batched over ``count`` points: every value, margin and
+        pass taken from the batch's arrays, computed once for all points."""
+        def take(value):
+            array = np.asarray(value)
+            return array[index] if array.ndim >= 1 and array.shape[0] == count else value
+
+        items = []
+        for item in self.items:
+            picked = CheckItem(item.kind, item.name, take(item.value), take(item.limit),
+                               item.unit, item.at_most, take(item.life_exponent), item.subject)
+            picked.__dict__.update(margin=take(item.margin), passed=take(item.passed))
+            items.append(picked)
+        found = OverallVerdict(tuple(items))
+        found.__dict__["worst_index"] = take(self.worst_index)
+        return found
+
 
 def life_exponent(governing: GoverningLife) -> float:
     """Life-load exponent of the governing life: 10/3 (ISO 281) or 4 (ISO/TS 16281)."""

@@ -82,7 +82,19 @@ class SweepChunk:
         length one cannot be told from a case axis of length one."""
         if len(self.studies) == 1:
             return evaluate(self.studies[0])
-        return with_findings(self.take(index))
+        result = with_findings(self.take(index))
+        if self.shared_overall is not None:
+            result.__dict__["overall"] = self.shared_overall.point(index, len(self.studies))
+        return result
+
+    @cached_property
+    def shared_overall(self):
+        """The chunk's overall verdict, computed once, where every point judges the same kind
+        of life (the items' names follow it); else None, each point's own is computed."""
+        chosen = np.asarray(self.result.governing.chosen)
+        if chosen.size > 1 and not np.all(chosen == chosen.flat[0]):
+            return None
+        return self.result.overall
 
 
 @dataclass(frozen=True)
