@@ -6,9 +6,8 @@ import shutil
 from pathlib import Path
 
 import tomli_w
-from click.testing import CliRunner
 
-from hubload.cli import main
+from clisupport import run
 
 ROOT = Path(__file__).parent.parent
 MACHINES = ROOT / "load_cases" / "machines"
@@ -42,10 +41,6 @@ def write_machine(folder: Path, document) -> Path:
     path = folder / "machine.toml"
     path.write_text(tomli_w.dumps(document))
     return path
-
-
-def run(*args):
-    return CliRunner().invoke(main, [str(a) for a in args])
 
 
 def machine_json(folder: Path, document) -> dict:

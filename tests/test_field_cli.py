@@ -5,32 +5,20 @@ likelihood), Lieblein & Zelen's (1956) bearing data as fitted by Lawless (2003),
 own JSON for the predicted lives, Nelson (1985) for the zero-failure Weibayes bound.
 """
 
-import json
 import math
 import warnings
 from pathlib import Path
 
 import numpy as np
 import pytest
-from click.testing import CliRunner
 
-from hubload.cli import main
+from clisupport import run, run_json
 
 ROOT = Path(__file__).resolve().parents[1]
 FIELD_RETURNS = ROOT / "load_cases" / "field_returns.csv"
 SITE_DUMPER = ROOT / "load_cases" / "site_dumper.toml"
 LIEBLEIN_ZELEN = ROOT / "tests" / "data" / "lieblein_zelen_1956.csv"
 LN_090 = math.log(1 / 0.9)
-
-
-def run(*arguments):
-    return CliRunner().invoke(main, [str(a) for a in arguments])
-
-
-def run_json(*arguments):
-    result = run(*arguments, "--json")
-    assert result.exit_code == 0, result.output
-    return json.loads(result.output)
 
 
 def write_rows(path, rows, header="hours,status"):

@@ -6,32 +6,20 @@ stand on), ISO 281:2007 table 12 (a1), the closed form of Weibull units in serie
 Monte Carlo simulations of the same fleet (tolerance from their standard error).
 """
 
-import json
 import math
 from pathlib import Path
 
 import numpy as np
 import pytest
-from click.testing import CliRunner
 from scipy import stats
 
-from hubload.cli import main
+from clisupport import run, run_json
 
 ROOT = Path(__file__).resolve().parents[1]
 SITE_DUMPER = ROOT / "load_cases" / "site_dumper.toml"
 LN_090 = math.log(1 / 0.9)
 FLEET = {"machines": 300, "wheel_ends_per_machine": 2, "hours_per_year_median": 900,
          "hours_per_year_spread": 0.5, "years": 4, "warranty_years": 2}
-
-
-def run(*arguments):
-    return CliRunner().invoke(main, [str(a) for a in arguments])
-
-
-def run_json(*arguments):
-    result = run(*arguments, "--json")
-    assert result.exit_code == 0, result.output
-    return json.loads(result.output)
 
 
 def bearing_lives_of_check(path):

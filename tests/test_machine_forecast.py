@@ -9,7 +9,6 @@ the sum of its probabilities (linearity of expectation); a seeded Monte Carlo si
 the fleet, tolerance from its own standard error (common practice).
 """
 
-import json
 import math
 
 import numpy as np
@@ -18,18 +17,13 @@ from hypothesis import assume, given, settings, strategies as st
 from scipy import optimize, stats
 
 from machinesupport import MACHINES, machine_document, operation, run, write_machine
+from clisupport import run_json
 
 BUNDLED = MACHINES / "yard_loader_machine.toml"
 WHEEL_ENDS = ("front left", "front right", "rear left", "rear right")
 LN_090 = math.log(1 / 0.9)
 FLEET = {"machines": 250, "hours_per_year_median": 1100, "hours_per_year_spread": 0.5,
          "years": 3, "warranty_years": 2}
-
-
-def run_json(*arguments):
-    result = run(*arguments, "--json")
-    assert result.exit_code == 0, result.output
-    return json.loads(result.output)
 
 
 def iso281(l10_h):
