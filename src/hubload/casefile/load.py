@@ -86,11 +86,14 @@ def study_from_document(document: dict, source: str = "<document>") -> Study:
         raise (error if table is None else table.relocated(error)) from None
 
 
-def study_from_validated(data: dict, source: str = "<document>", finite: bool = True) -> Study:
+def study_from_validated(data: dict, source: str = "<document>", finite: bool = True,
+                         cases_memo: dict | None = None) -> Study:
     """Convert a document already checked by validate_document (defaults filled in).
 
     ``finite=False`` leaves the check after conversion to the caller (a sweep checks its
-    points together, casefile.variation)."""
+    points together, casefile.variation). ``cases_memo``, shared by the variants of one
+    document, reuses their cases where the blocks and what the cases read of the other
+    tables are the same (see :func:`memo_cases`)."""
     wheel = read_wheel(data["wheel"])
     pair = read_pair(data["pair"])
     project = data.get("project", {})
@@ -105,7 +108,7 @@ def study_from_validated(data: dict, source: str = "<document>", finite: bool = 
         target_life_h=project.get("target_life_h"),
         wheel=wheel,
         pair=pair,
-        cases=read_cases(data["case"], wheel, motor, vehicle),
+        cases=memo_cases(cases_memo, data["case"], wheel, motor, vehicle),
         motor=motor,
         vehicle=vehicle,
         lubrication=lubrication,
@@ -160,6 +163,20 @@ def read_bearing(data: dict, label: str) -> Bearing:
 
 def optional_scaled(data: dict, key: str, factor: float) -> float | None:
     return data[key] * factor if key in data else None
+
+
+def memo_cases(memo: dict | None, blocks: list[dict], wheel: Wheel, motor: Motor | None,
+               vehicle: Vehicle | None) -> Cases:
+    """read_cases, or the Cases already read from the same blocks with the same wheel radius,
+    adhesion, motor and vehicle (all the cases read of the other tables): a sweep's variants
+    share their unchanged [[case]] list, and deriving its operating points is the bulk of
+    building a variant. The memo keeps the blocks it saw, so their ids stay unique."""
+    key = (id(blocks), wheel.rolling_radius_m, wheel.adhesion_mu, motor, vehicle)
+    if memo is None:
+        return read_cases(blocks, wheel, motor, vehicle)
+    if key not in memo:
+        memo[key] = (blocks, read_cases(blocks, wheel, motor, vehicle))
+    return memo[key][1]
 
 
 def read_cases(blocks: list[dict], wheel: Wheel, motor: Motor | None = None,

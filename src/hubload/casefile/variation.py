@@ -201,7 +201,8 @@ def unchecked_variants(document: Mapping, points: list[dict[KeyPath, float]],
         data = validate_document(with_values(document, points[0]), FORMAT)
     except InputError as error:
         raise at_point(error, points[0], source) from None
-    return [variant_from_validated(data, values, source) for values in points]
+    cases_memo: dict = {}
+    return [variant_from_validated(data, values, source, cases_memo) for values in points]
 
 
 def finite_at_point(study: Study, values: dict[KeyPath, float], source: str) -> None:
@@ -211,7 +212,8 @@ def finite_at_point(study: Study, values: dict[KeyPath, float], source: str) -> 
         raise at_point(error, values, source) from None
 
 
-def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str) -> Study:
+def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str,
+                           cases_memo: dict | None = None) -> Study:
     try:
         for path, value in values.items():
             if path.field.kind == "number-list":
@@ -219,7 +221,8 @@ def variant_from_validated(data: dict, values: dict[KeyPath, float], source: str
             else:
                 validate_value(int(value) if path.integer else float(value), path.field,
                                path.text)
-        return study_from_validated(with_values(data, values), source=source, finite=False)
+        return study_from_validated(with_values(data, values), source=source, finite=False,
+                                    cases_memo=cases_memo)
     except InputError as error:
         raise at_point(error, values, source) from None
 

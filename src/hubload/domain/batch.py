@@ -74,13 +74,14 @@ def stack_values(values: list, name: str) -> Any:
 
 
 def stack_arrays(values: list, name: str) -> Any:
-    arrays = [np.asarray(value) for value in values]
-    if all(array.shape == arrays[0].shape and np.array_equal(array, arrays[0])
-           for array in arrays):
+    if all(value is values[0] for value in values):     # one array shared by the studies
         return values[0]
+    arrays = [np.asarray(value) for value in values]
     if any(array.shape != arrays[0].shape for array in arrays):
         raise StackError(f"{name}: different shapes")
     stacked = np.stack(arrays)
+    if np.all(stacked == stacked[:1]):      # alike at every point (NaN never is): shared
+        return values[0]
     return stacked[:, None] if stacked.ndim == 1 else stacked
 
 
