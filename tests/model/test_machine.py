@@ -244,6 +244,26 @@ def test_a_slipping_wheel_is_held_at_mu_w_and_the_others_keep_their_share():
         [0.3 * load[0], asked, asked, asked], rel=1e-12)
 
 
+@pytest.mark.parametrize("machine", [rigid_machine(), rigid_machine(front_driven=False),
+                                     rigid_machine(radii=(0.45, 0.5, 0.55, 0.6), cog_height=1.3)])
+def test_a_wheel_held_at_adhesion_leaves_the_machine_in_yaw_and_lateral_balance(machine):
+    # Yaw balance about the CoG of the forces the tyres give (Gillespie 1992, ch. 6;
+    # Meriam & Kraige, Statics): sum x_i F_y,i - y_i F_x,i = 0 with the capped wheel's force,
+    # not the share it asked for; the lateral forces still add to m a_y. A steady turn has no
+    # yaw acceleration whatever the drive does.
+    result = mm.wheel_forces(machine, operations(
+        longitudinal_accel_g=0.25, lateral_accel_g=0.3, adhesion_mu=0.3, rolling_resistance=0.03))
+    assert result.capped[:, 0].any()
+    behind = machine.cog_behind_front_m
+    x = np.array([behind, behind, behind - machine.wheelbase_m, behind - machine.wheelbase_m])
+    y = np.array([machine.front.track_m, -machine.front.track_m,
+                  machine.rear.track_m, -machine.rear.track_m]) / 2
+    lateral_left = result.side_force_n[:, 0] * np.array([-1, 1, -1, 1])   # + left
+    yaw_nm = np.sum(x * lateral_left - y * result.longitudinal_force_n[:, 0])
+    assert abs(yaw_nm) < 1e-9 * machine.mass_kg * G
+    assert lateral_left.sum() == pytest.approx(machine.mass_kg * G * 0.3, rel=1e-12)
+
+
 def test_braking_in_a_gentle_turn_unloads_the_rear_outside_wheel_more_with_a_higher_cog():
     # Longitudinal transfer m a_x g h / L (Gillespie 1992, ch. 2) outweighs the lateral one
     # F_y,rear h / t (ch. 9) at 0.4 g braking and 0.05 g lateral: the rear outside wheel

@@ -333,6 +333,33 @@ def wheel_speeds_ms(speed_ms, lateral_accel_g, front_track_m, rear_track_m):
     return speeds, 2.0 * speed_ms**2 < np.abs(accel_ms2) * wider_m
 
 
+def balanced_with_the_tyres(machine: Machine, wheels_at, yaw_terms, iterations: int = 200):
+    """The wheels of ``wheels_at(yaw_terms)`` with the yaw moment of the tractive forces the
+    tyres give [1, ch. 6; 4].
+
+    By load every driven wheel reaches adhesion at once, which :func:`drive_yaw_terms`
+    already holds. With equal torque a wheel held at mu W gives less than its share, and the
+    yaw moment sum Y_i F_i of the forces given shifts lateral force between the axles, so
+    the loads and their limits: a fixed point, found by iterating (each step changes the
+    moment by at most about mu h / L of the last change, where h / L < 1 / mu keeps the
+    wheels on the ground in a capped turn). Where it does not settle within ``iterations``
+    the last step stands: such an operation is flagged as capped all the same.
+    """
+    found = wheels_at(yaw_terms)
+    if machine.drive != "equal-torque":
+        return found
+    arms_m = (0.5 * machine.front.track_m, -0.5 * machine.front.track_m,
+              0.5 * machine.rear.track_m, -0.5 * machine.rear.track_m)
+    constant_nm, kappa = yaw_terms
+    for _ in range(iterations):
+        moment_nm = sum(arm_m * force_n for arm_m, force_n in zip(arms_m, found[3]))
+        if np.allclose(moment_nm, constant_nm, rtol=1e-13, atol=1e-9):
+            break
+        constant_nm = moment_nm
+        found = wheels_at((constant_nm, kappa))
+    return found
+
+
 def stacked(per_wheel):
     """Wheel arrays stacked on a new first axis, broadcast to one shape."""
     return np.stack(np.broadcast_arrays(*per_wheel))
@@ -367,12 +394,17 @@ def wheel_forces(machine: Machine, operations: Operations) -> WheelForces:
     demand_n = tractive_demand_n(longitudinal_n, normal_n, ops)
     axle_n = axle_loads_n(longitudinal_n, normal_n, behind_m, height_m, machine.wheelbase_m)
     levers_m = roll_levers_m(machine, height_m)
-    yaw_terms = drive_yaw_terms(machine, demand_n, axle_n, ops.adhesion_mu)
-    axle_side_n = axle_side_forces_n(
-        lateral_n, behind_m, height_m, machine.wheelbase_m, ops.rolling_resistance,
-        yaw_terms, levers_m, (machine.front.driven, machine.rear.driven))
-    wheel_n, lateral_wheel_n = wheels_of_axles(axle_n, axle_side_n, levers_m, machine)
-    tractive_n, capped = wheel_tractive_n(machine, demand_n, wheel_n, ops.adhesion_mu)
+
+    def wheels_at(yaw_terms):
+        axle_side_n = axle_side_forces_n(
+            lateral_n, behind_m, height_m, machine.wheelbase_m, ops.rolling_resistance,
+            yaw_terms, levers_m, (machine.front.driven, machine.rear.driven))
+        wheel_n, lateral_wheel_n = wheels_of_axles(axle_n, axle_side_n, levers_m, machine)
+        return (axle_side_n, wheel_n, lateral_wheel_n,
+                *wheel_tractive_n(machine, demand_n, wheel_n, ops.adhesion_mu))
+
+    axle_side_n, wheel_n, lateral_wheel_n, tractive_n, capped = balanced_with_the_tyres(
+        machine, wheels_at, drive_yaw_terms(machine, demand_n, axle_n, ops.adhesion_mu))
     speeds, too_tight = wheel_speeds_ms(ops.speed_ms, ops.lateral_accel_g,
                                         machine.front.track_m, machine.rear.track_m)
     wheel_loads_n = stacked(wheel_n)
