@@ -62,6 +62,20 @@ def test_unmounted_cone_fits_take_up_the_thick_cylinder_closing(tmp_path):
         assert case["setting_loss_um"]["fit_take_up"] == pytest.approx(take_up, rel=1e-9)
 
 
+def test_seat_diameters_change_nothing_where_no_fit_can_act(tmp_path):
+    # Steel shaft and housing (expanding as the rings do) without interference: the fits stay
+    # line-to-line at every temperature, so the seat diameters cannot matter (thick-cylinder
+    # pressure is zero without interference; Shigley 10th ed. 3-16).
+    document, plain = with_setting(tmp_path, shaft_temperature_C=75, housing_temperature_C=50)
+    for label, (bore, outside) in {"outboard": (60, 120), "inboard": (55, 110)}.items():
+        document["pair"][label].update(bore_mm=bore, outside_diameter_mm=outside)
+    seated = write_toml(document, tmp_path / "seated.toml")
+    settings = [[c["operating_setting_um"] for c in check(path)["cases"]]
+                for path in (plain, seated)]
+    assert settings[0] == settings[1]
+    assert settings[0] != pytest.approx([40.0] * 7)      # the temperatures did change them
+
+
 def test_a_hotter_shaft_takes_more_end_play_face_to_face_than_back_to_back(tmp_path):
     # The shaft's axial growth over the spread adds to the radial growth face-to-face and
     # opposes it back-to-back (cone geometry of a tapered pair, property).
@@ -110,7 +124,15 @@ def test_power_loss_is_friction_torque_times_angular_speed(tmp_path):
     (lambda d: d["pair"]["setting"].update(tolerance_um=-5), "pair.setting.tolerance_um",
      ">= 0"),
     (lambda d: d["pair"]["setting"].update(basis="unmounted", cone_interference_um=20),
-     "pair.outboard.bore_mm", "seat diameter"),
+     "pair.outboard.bore_mm", "bore"),
+    # a seat whose fit changes with temperature needs its own diameter (the thermal change
+    # of the fit is (a - a_ring) dT d; Shigley 10th ed. 3-16 for the fit it makes)
+    (lambda d: d["pair"]["setting"].update(shaft_material="aluminium"),
+     "pair.outboard.bore_mm", "expands"),
+    (lambda d: d["pair"]["setting"].update(housing_material="cast-iron"),
+     "pair.outboard.outside_diameter_mm", "expands"),
+    (lambda d: d["pair"]["setting"].update(housing_outside_diameter_mm=90),
+     "pair.outboard.outside_diameter_mm", "measured against"),
     (lambda d: d["pair"]["outboard"].pop("rollers"), "pair.outboard.rollers",
      "internal geometry"),
     (lambda d: d["pair"]["setting"].update(housing_material="brass"),

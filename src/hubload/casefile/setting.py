@@ -15,14 +15,15 @@ import numpy as np
 
 from hubload.domain.study import AssemblySetting, Bearing, Pair
 from hubload.errors import InputError
-from hubload.model.materials import material
+from hubload.model.materials import BEARING_RING, material
 from hubload.model.setting import PairMounting, SeatedBearing, raceway_spread_m
 from hubload.units import CELSIUS_ZERO_K, GPA, MM, UM
 
 PATH = "pair.setting"
-# Placeholders where a seat diameter is not given: used only where no fit acts (zero
-# interference), so they never change a result; kept inside the ring so the thick-cylinder
-# ratios stay finite.
+# Placeholders where a seat diameter is not given: used only where no fit can act (no
+# interference, and a shaft or housing that expands as the rings do: its fit stays
+# line-to-line at every temperature), so they never change a result; kept inside the ring
+# so the thick-cylinder ratios stay finite.
 BORE_PLACEHOLDER = 0.8
 OUTSIDE_PLACEHOLDER = 1.25
 
@@ -47,11 +48,9 @@ def seated(bearing: Bearing, data: dict, bearing_data: dict, label: str) -> Seat
     radial = geometry.roller_diameter_m * np.cos(geometry.contact_angle_rad)
     cup, cone = geometry.pitch_diameter_m + radial, geometry.pitch_diameter_m - radial
     cone_fit, cup_fit = data.get("cone_interference_um", 0.0), data.get("cup_interference_um", 0.0)
-    for key, fit, needed in (("bore_mm", cone_fit, "cone_interference_um"),
-                             ("outside_diameter_mm", cup_fit, "cup_interference_um")):
-        if fit > 0 and key not in bearing_data:
-            raise InputError(f"{needed} needs the seat diameter of each bearing [mm]",
-                             key_path=f"pair.{label}.{key}")
+    for key, why in seat_needs(data, cone_fit, cup_fit):
+        if key not in bearing_data:
+            raise InputError(why, key_path=f"pair.{label}.{key}")
     bore = bearing_data.get("bore_mm", 0.0) * MM or BORE_PLACEHOLDER * cone
     outside = bearing_data.get("outside_diameter_mm", 0.0) * MM or OUTSIDE_PLACEHOLDER * cup
     if not bore < cone < cup < outside:
@@ -72,6 +71,31 @@ def seated(bearing: Bearing, data: dict, bearing_data: dict, label: str) -> Seat
         shaft_interference_m=cone_fit * UM, housing_interference_m=cup_fit * UM,
         shaft_bore_m=shaft_bore,
         housing_outside_diameter_m=np.inf if housing is None else housing * MM)
+
+
+def seat_needs(data: dict, cone_fit_um: float, cup_fit_um: float) -> list[tuple[str, str]]:
+    """(seat diameter key, why it is needed) for each seat whose fit can act in operation:
+    one with an interference, or whose shaft or housing expands otherwise than the rings
+    (the fit then changes by (a - a_ring) dT d, d the seat's own diameter), and the seats a
+    given shaft bore or housing outside diameter is measured against."""
+    ring = BEARING_RING.expansion_per_k
+    needs = []
+    for key, part, fit_um, wall_key, seat in (
+            ("bore_mm", "shaft", cone_fit_um, "shaft_bore_mm", "bore"),
+            ("outside_diameter_mm", "housing", cup_fit_um, "housing_outside_diameter_mm",
+             "outside diameter")):
+        expansion = chosen_material(data, part).expansion_per_k
+        if fit_um > 0:
+            needs.append((key, f"{'cone' if part == 'shaft' else 'cup'}_interference_um needs "
+                               f"each bearing's {seat} [mm]"))
+        elif expansion != ring:
+            needs.append((key, f"the {part} expands {expansion:g} 1/K, the rings {ring:g} 1/K: "
+                               f"its fit changes with temperature in proportion to the seat "
+                               f"diameter; give each bearing's {seat} [mm]"))
+        elif data.get(wall_key, 0.0) > 0:
+            needs.append((key, f"{wall_key} is measured against each bearing's {seat}; "
+                               f"give it [mm]"))
+    return needs
 
 
 def case_temperatures_k(data: dict, case_blocks: list[dict], part: str, bearing_c) -> np.ndarray:

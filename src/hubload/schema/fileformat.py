@@ -159,11 +159,13 @@ BEARING_FIELDS = (
     Field("crown_drop_um", "number", "Drop of the logarithmic profile at the ends of the "
           "effective length [um] (both contacts together).", exclusive_minimum=0,
           maximum=MAX_CROWN_DROP_UM),
-    Field("bore_mm", "number", "Bore d of the cone [mm] (shaft seat); needed by the fits of a "
-          "[pair.setting] on the unmounted basis.", exclusive_minimum=0,
+    Field("bore_mm", "number", "Bore d of the cone [mm] (shaft seat); needed by a "
+          "[pair.setting] whose cone fit can act: an interference, a shaft that expands "
+          "otherwise than the rings, or a hollow shaft.", exclusive_minimum=0,
           maximum=MAX_POSITION_MM),
     Field("outside_diameter_mm", "number", "Outside diameter D of the cup [mm] (housing seat); "
-          "needed by the cup fit of a [pair.setting].", exclusive_minimum=0,
+          "needed by a [pair.setting] whose cup fit can act: an interference, a housing that "
+          "expands otherwise than the rings, or a given housing wall.", exclusive_minimum=0,
           maximum=MAX_POSITION_MM),
 )
 
