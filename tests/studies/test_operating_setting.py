@@ -76,6 +76,20 @@ def test_seat_diameters_change_nothing_where_no_fit_can_act(tmp_path):
     assert settings[0] != pytest.approx([40.0] * 7)      # the temperatures did change them
 
 
+def test_a_preload_that_turns_into_end_play_is_warned_of(tmp_path):
+    # Steel throughout, housing 70 K warmer than the shaft: the cup raceways grow about
+    # 11.7e-6 x 70 x 47 mm = 39 um more in radius than the cones, some 130 um of end play per
+    # bearing through cot(16 deg) (cone geometry), far more than the housing's axial growth
+    # over the spread (about 65 um) can take back: the 40 um preload becomes end play.
+    _, path = with_setting(tmp_path, assembly_um=-40.0, shaft_temperature_C=20,
+                           housing_temperature_C=90)
+    found = check(path)
+    assert all(case["operating_setting_um"] > 0 for case in found["cases"])
+    kinds = [record["kind"] for record in found["warning_records"]]
+    assert kinds.count("setting_loses_preload") == len(found["cases"])
+    assert "setting_becomes_preload" not in kinds
+
+
 def test_a_hotter_shaft_takes_more_end_play_face_to_face_than_back_to_back(tmp_path):
     # The shaft's axial growth over the spread adds to the radial growth face-to-face and
     # opposes it back-to-back (cone geometry of a tapered pair, property).

@@ -185,18 +185,20 @@ PRELOAD_FRICTION_RATIO = 1.25   # load friction this much above the external loa
 
 
 def setting_findings(result) -> list[Finding]:
-    """An end play that turns into preload in operation; a tight cup that comes loose; a
-    preload that drives the bearings' load friction well above the external load's."""
+    """An end play that turns into preload in operation, or a preload into end play; a tight
+    cup that comes loose; a preload that drives the bearings' load friction well above the
+    external load's."""
     setting = result.setting
     if setting is None or setting.assembly_m is None:
         return []
     found = []
     operating = np.asarray(setting.operating_m)
-    if float(setting.assembly_m) > 0:
-        for index in np.flatnonzero(operating < 0):
-            found.append(Finding("setting_becomes_preload", int(index),
-                                 values={"assembly_m": float(setting.assembly_m),
-                                         "operating_m": float(operating[index])}))
+    assembly_m = float(setting.assembly_m)
+    changed = operating < 0 if assembly_m > 0 else operating > 0 if assembly_m < 0 else None
+    kind = "setting_becomes_preload" if assembly_m > 0 else "setting_loses_preload"
+    for index in [] if changed is None else np.flatnonzero(changed):
+        found.append(Finding(kind, int(index), values={
+            "assembly_m": assembly_m, "operating_m": float(operating[index])}))
     for label, lost in setting.cup_fit_lost.items():
         cases = np.flatnonzero(np.broadcast_to(lost, operating.shape))
         if cases.size:

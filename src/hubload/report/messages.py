@@ -186,6 +186,7 @@ KIND_NAMES = {
     "no_equilibrium": "no equilibrium in the refined model (life counted as zero)",
     "permissible_exceeded": "radial wheel force above the supplier's permissible load",
     "setting_becomes_preload": "assembly end play turned into preload in operation",
+    "setting_loses_preload": "assembly preload turned into end play in operation",
 }
 WORST_SHOWN = 3
 LISTED_CASES = 5      # a kind concerning more cases is summarised on the terminal
@@ -267,6 +268,17 @@ def setting_becomes_preload(found: list[Finding], names) -> list[str]:
             f"bearing supplier."]
 
 
+def setting_loses_preload(found: list[Finding], names) -> list[str]:
+    where = ", ".join(f"{quoted(names, f.case)} ({f.values['operating_m'] / UM:+.0f} um)"
+                      for f in found)
+    return [f"The assembly preload of {-found[0].values['assembly_m'] / UM:g} um turns into end "
+            f"play in operation in {where}: housing and cups grow more than shaft and cones "
+            f"(a light-alloy housing, or a housing warmer than the shaft; "
+            f"docs/operating-setting.md). The pair then runs with a narrower load zone and less "
+            f"stiffness than it was set for. Check the temperatures and the setting with the "
+            f"bearing supplier."]
+
+
 def cup_fit_lost(found: list[Finding], names) -> list[str]:
     return [f"The {f.subject} cup's interference fit is lost in {f.values['cases']:.0f} "
             f"case(s), first in {quoted(names, f.case)}: the housing expands more than the cup "
@@ -299,6 +311,7 @@ STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "log_static_safety_low": log_static_safety_low, "log_flag_time": log_flag_time,
     "log_shaft_safety_low": log_shaft_safety_low,
     "log_permissible_exceeded": log_permissible_exceeded,
-    "setting_becomes_preload": setting_becomes_preload, "cup_fit_lost": cup_fit_lost,
+    "setting_becomes_preload": setting_becomes_preload,
+    "setting_loses_preload": setting_loses_preload, "cup_fit_lost": cup_fit_lost,
     "preload_raises_friction": preload_raises_friction,
     "one_sided_side_force": one_sided_side_force}
