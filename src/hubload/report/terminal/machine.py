@@ -74,6 +74,10 @@ def warning_lines(machine: MachineResult, show_all: bool = False) -> list[Text]:
             for line, wheels in wheels_of.items()]
 
 
+def counted(number: int, one: str, many: str | None = None) -> str:
+    return f"{number} {one if number == 1 else many or one + 's'}"
+
+
 def render_machine(machine: MachineResult, console: Console, show_cases: bool = False,
                    show_all: bool = False) -> None:
     """The wheel ends, the machine's life, the verdict; ``show_cases`` each wheel end's
@@ -81,9 +85,10 @@ def render_machine(machine: MachineResult, console: Console, show_cases: bool = 
     study = machine.study
     console.print(Text.assemble((plain(study.title), "bold"), f"  ({plain(study.source)})"))
     mirrored = int(study.case_mirrored.sum())
-    console.print(Text(f"{len(study.operation_names)} operations, {len(study.case_names)} "
-                       f"cases per wheel end ({mirrored} mirrored halves: turns and slopes "
-                       f"both ways)."))
+    halves = (f" ({counted(mirrored, 'mirrored half', 'mirrored halves')}: turns and slopes "
+              f"both ways)" if mirrored else "")
+    console.print(Text(f"{counted(len(study.operation_names), 'operation')}, "
+                       f"{counted(len(study.case_names), 'case')} per wheel end{halves}."))
     if show_cases:
         for wheel in machine.wheel_ends:
             render(cases_table(wheel, None if show_all else CASE_ROWS_SHOWN), console)
