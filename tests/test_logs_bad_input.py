@@ -91,7 +91,8 @@ def test_missing_column_suggests_the_closest_header(tmp_path):
     (["--column", "wheel_load_kN=Fz"], "column 'Fz' (mapped to wheel_load_kN) is not in the log"),
     (["--classes", "1"], "from 2 to 1024"),
     (["--classes", "wheel_kN=8"], "unknown channel"),
-    (["--max-gap-s", "0"], "expected a positive time"),
+    (["--max-gap-s", "0"], "expected a positive, finite time"),
+    (["--max-gap-s", "inf"], "expected a positive, finite time"),
 ])
 def test_bad_options(tmp_path, options, expected):
     log = write_csv_text(tmp_path / "log.csv", rows_with({}))

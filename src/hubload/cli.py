@@ -31,7 +31,7 @@ OPTION_NAMES = {"required_s0": "--s0", "start_um": "--from", "stop_um": "--to",
 
 def one_line(text: str) -> str:
     """``text`` as one terminal line: line breaks become spaces, control characters go."""
-    from hubload.report.terminal.tables import plain
+    from hubload.report.usertext import plain
 
     return plain(" ".join(str(text).split("\n")))
 
@@ -60,6 +60,11 @@ def reports_input_errors(command):
         except MemoryError:
             fail("not enough memory for this input; use a smaller file, grid or log",
                  INPUT_ERROR_STATUS)
+        except BrokenPipeError:      # the reader (head, less) has what it wanted
+            from hubload.commands import quiet_standard_output
+
+            quiet_standard_output()
+            sys.exit(0)
         except Exception as error:  # a bug: one line, never a traceback (unless asked)
             if os.environ.get(TRACEBACK_VARIABLE):
                 raise
@@ -73,6 +78,9 @@ class OneLineGroup(click.Group):
 
     def main(self, *args, **kwargs):
         kwargs.pop("standalone_mode", None)
+        for stream in (sys.stdout, sys.stderr):   # a terminal that cannot show a character
+            if hasattr(stream, "reconfigure"):    # (a legacy code page) gets a '?' for it
+                stream.reconfigure(errors="replace")
         previous = signal.signal(signal.SIGTERM, stopped)
         try:
             return super().main(*args, standalone_mode=False, **kwargs)

@@ -139,6 +139,8 @@ def cell_value(cell, kind: str, decimal_comma: bool):
         text = cell.strip()
         if decimal_comma:
             text = text.replace(",", ".")
+        if "_" in text:      # Python's 1_1 (= 11) is no number a spreadsheet writes
+            return cell.strip()
         try:
             return float(text)
         except ValueError:

@@ -111,17 +111,24 @@ def cell_of(cells, index: int) -> object:
     return cells[index] if index < len(cells) else ""
 
 
+# A unit's hours below 36 s of operation are a slip of the keyboard (a fit to them spans
+# hundreds of decades); common practice.
+MIN_UNIT_HOURS = 0.01
+
+
 def hours_of(value, where: str) -> float:
     text = str(value).strip()
     try:
+        if "_" in text:      # Python's 1_000 is no number a spreadsheet writes
+            raise ValueError(text)
         hours = float(value) if isinstance(value, (int, float)) and not isinstance(value, bool) \
             else float(text)
     except ValueError:
         raise InputError(f"expected a number of operating hours, got {text[:60]!r}",
                          key_path=where) from None
-    if not math.isfinite(hours) or hours <= 0 or hours > MAX_TARGET_LIFE_H:
-        raise InputError(f"expected operating hours > 0 and <= {MAX_TARGET_LIFE_H:,.0f}, "
-                         f"got {text[:60]}", key_path=where)
+    if not math.isfinite(hours) or not MIN_UNIT_HOURS <= hours <= MAX_TARGET_LIFE_H:
+        raise InputError(f"expected operating hours from {MIN_UNIT_HOURS:g} to "
+                         f"{MAX_TARGET_LIFE_H:,.0f}, got {text[:60]}", key_path=where)
     return hours
 
 

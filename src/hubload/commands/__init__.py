@@ -7,6 +7,9 @@ the result, so a command works from a notebook too.
 
 from __future__ import annotations
 
+import os
+import sys
+
 import click
 
 from hubload import api
@@ -25,15 +28,30 @@ def checked(path: str | None, force: bool, suffixes: tuple[str, ...] = (),
 
 
 def console(stderr: bool = False):
-    """A rich console, imported only when a command prints tables (--json does not)."""
+    """A rich console, imported only when a command prints tables (--json does not); a
+    reader that closes the pipe early (head, less) ends the run quietly with status 0."""
     from rich.console import Console
 
-    return Console(stderr=stderr)
+    class PipedConsole(Console):
+        def on_broken_pipe(self) -> None:
+            quiet_standard_output()
+            raise SystemExit(0)
+
+    return PipedConsole(stderr=stderr)
+
+
+def quiet_standard_output() -> None:
+    """Standard output to the null device, so that the interpreter's last flush into a
+    closed pipe stays silent."""
+    try:
+        os.dup2(os.open(os.devnull, os.O_WRONLY), sys.stdout.fileno())
+    except (OSError, ValueError):      # no file descriptor (an in-process runner)
+        pass
 
 
 def written(kind: str, path: str, as_json: bool = False) -> None:
     """Name every file written (on stderr with --json: stdout stays one JSON document)."""
-    from hubload.report.terminal.tables import plain
+    from hubload.report.usertext import plain
 
     console(stderr=as_json).print(f"{kind} written to {plain(path)}", highlight=False,
                                   markup=False)

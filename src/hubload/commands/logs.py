@@ -7,9 +7,9 @@ from dataclasses import dataclass
 from pathlib import Path
 
 import click
-from rich.console import Console
 
 from hubload import api
+from hubload.commands import console
 from hubload.errors import InputError
 from hubload.report.json.text import document_text
 from hubload.logs.analysis import COMBINED_NAME, LogRun, log_paths
@@ -77,9 +77,9 @@ def spectrum(request: Request) -> api.LogsResult:
         from hubload.report.terminal.spectrum import render, render_fleet
 
         if folder:
-            render_fleet(run, Console(), files)
+            render_fleet(run, console(), files)
         else:
-            render(run.single, Console(), files.get(run.single.summary.name))
+            render(run.single, console(), files.get(run.single.summary.name))
     return found
 
 

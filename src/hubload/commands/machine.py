@@ -69,7 +69,7 @@ def write_files(result, file: str, folder: Path, force: bool, as_json: bool) -> 
 
     from hubload.commands import written
     from hubload.report.files import checked_output, write_text
-    from hubload.report.terminal.tables import plain
+    from hubload.report.usertext import plain
 
     if folder.exists() and not folder.is_dir():
         raise InputError("is not a folder; expected the folder for the wheel end files",

@@ -103,7 +103,7 @@ def brief(file: str, out: str | None = None, force: bool = False,
 
     checked(out, force, (".md", ".markdown", ".html", ".htm") if out is not None else (),
             inputs=(file,))
-    from hubload.report.terminal.tables import plain
+    from hubload.report.usertext import plain
 
     html = out is not None and out.lower().endswith((".html", ".htm"))
     with LateProgress("searching the required ratings") as progress:

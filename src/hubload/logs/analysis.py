@@ -6,6 +6,8 @@ writes the spectra and hands the :class:`LogRun` to the report layer.
 
 from __future__ import annotations
 
+import math
+
 from collections.abc import Callable
 from dataclasses import dataclass
 from pathlib import Path
@@ -75,8 +77,9 @@ def damage_rate(result: SpectrumResult) -> float:
 def log_options(columns=(), classes=(), gaps: str = "error",
                 max_gap_s: float | None = None) -> LogOptions:
     """How to read and class a log, from the command's words (column maps, class counts)."""
-    if max_gap_s is not None and not max_gap_s > 0:
-        raise InputError(f"expected a positive time, got {max_gap_s:g}", key_path="max_gap_s")
+    if max_gap_s is not None and not 0 < max_gap_s < math.inf:
+        raise InputError(f"expected a positive, finite time [s], got {max_gap_s:g}",
+                         key_path="--max-gap-s")
     return LogOptions(mapping=parse_column_options(tuple(columns)), gaps=gaps,
                       max_gap_s=max_gap_s, classes=parse_classes(tuple(classes)))
 
@@ -104,6 +107,9 @@ def analyse(log: str | Path, case_file: str | Path, options: LogOptions,
         raise error.located(str(case_file)) from None
     paths = log_paths(log)
     folder = Path(log).is_dir()
+    if weights is not None and not folder:
+        raise InputError("--weights mixes the logs of a folder; give a folder of logs, or "
+                         "leave it out for one log", file=str(log), key_path="--weights")
     mix = read_weights(weights, paths) if folder and weights is not None else None
     done = on_log_done or (lambda _path: None)
     if cluster:

@@ -18,6 +18,9 @@ from hubload.errors import InputError
 from hubload.logs.pipeline import LogSummary
 
 COLUMNS = ("log", "share")
+# A share is a fraction, a percentage or a count of machines: a million covers any fleet,
+# and the shares' sum stays finite.
+MAX_SHARE = 1e6
 
 
 def read_weights(path: str | Path, logs: list[str]) -> dict[str, float]:
@@ -46,9 +49,9 @@ def read_weights(path: str | Path, logs: list[str]) -> dict[str, float]:
             share = float(text)
         except ValueError:
             share = math.nan
-        if not (math.isfinite(share) and share >= 0):
-            raise InputError(f"expected a share >= 0, got {text!r}", file=file,
-                             key_path=f"row {number}, column 2")
+        if not (math.isfinite(share) and 0 <= share <= MAX_SHARE):
+            raise InputError(f"expected a share from 0 to {MAX_SHARE:g}, got {text!r}",
+                             file=file, key_path=f"row {number}, column 2")
         if names[name] in shares:
             raise InputError(f"log {name!r} given twice", file=file, key_path=f"row {number}")
         shares[names[name]] = share

@@ -11,6 +11,8 @@ import html
 import re
 from dataclasses import dataclass
 
+from hubload.report.usertext import plain
+
 INLINE = re.compile(r"\*\*(.+?)\*\*|`([^`]+)`")
 
 
@@ -73,8 +75,8 @@ def to_markdown(blocks: list[Block]) -> str:
 
 
 def inline_html(text: str) -> str:
-    """Escaped text with **bold** and `code` spans as HTML."""
-    parts, last = [], 0
+    """Escaped text with **bold** and `code` spans as HTML (control characters out)."""
+    text, parts, last = plain(text), [], 0
     for match in INLINE.finditer(text):
         parts.append(html.escape(text[last:match.start()]))
         bold, code = match.groups()

@@ -6,7 +6,7 @@ import tomli_w
 
 from hubload.casefile.validate import MAX_STRING_CHARS
 from hubload.domain.study import Cases
-from hubload.report.terminal.tables import plain
+from hubload.report.usertext import plain
 from hubload.units import KN
 
 SIGNIFICANT = 10

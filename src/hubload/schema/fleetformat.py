@@ -13,6 +13,9 @@ from hubload.schema.spec import Field, Table
 # forecast's quadrature is converged to it (model/fleet_forecast.py); 50 years outlast any
 # machine.
 MAX_MACHINES, MAX_WHEEL_ENDS, HOURS_PER_YEAR = 100_000, 16, 8784.0
+# A machine in service runs at least an hour a year; below it the forecast's times underflow
+# (common practice).
+MIN_HOURS_PER_YEAR = 1.0
 MAX_USAGE_SIGMA, MAX_FORECAST_YEARS = 1.2, 50
 # Weibull slopes of rolling-bearing fatigue lie near 1.1 to 1.5 (ISO 281's distribution: 1.5);
 # 0.3 to 10 covers early failures to wear-out (common practice). A calibration factor from
@@ -33,7 +36,8 @@ FLEET = Table(
               "(all on the same duty; not in a machine file, whose machine has its own).", default=1, minimum=1, maximum=MAX_WHEEL_ENDS,
               example=4),
         Field("hours_per_year_median", "number", "Median operating hours per machine and year "
-              "[h] (half the fleet runs less, half more).", required=True, exclusive_minimum=0,
+              "[h] (half the fleet runs less, half more).", required=True,
+              minimum=MIN_HOURS_PER_YEAR,
               maximum=HOURS_PER_YEAR, example=1200),
         Field("hours_per_year_spread", "number", "Spread of the yearly hours over the fleet: "
               "the standard deviation sigma of ln(hours per year), lognormal (0: every machine "
@@ -47,7 +51,7 @@ FLEET = Table(
               "[h] (optional).", exclusive_minimum=0, maximum=MAX_TARGET_LIFE_H, example=3000),
         Field("calibration_factor", "number", "Multiplies every predicted life (field B10 / "
               "predicted B10, from `hubload field --against`; default 1).", default=1.0,
-              exclusive_minimum=0, maximum=MAX_CALIBRATION, example=1.0),
+              minimum=1.0 / MAX_CALIBRATION, maximum=MAX_CALIBRATION, example=1.0),
     ),
 )
 

@@ -14,12 +14,15 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.columns import TableSpec
 from hubload.report.html.style import STYLE
 from hubload.report.plots import svg_text
+from hubload.report.usertext import plain
 
 POLICY = "default-src 'none'; style-src 'unsafe-inline'; img-src data:"
 
 
 def escape(text) -> str:
-    return html.escape(str(text), quote=True)
+    """User text for HTML: control characters and escape sequences out (HTML 5 does not
+    allow them in text), markup characters escaped."""
+    return html.escape(plain(text), quote=True)
 
 
 def spec_table(spec: TableSpec, caption: str | None = None) -> str:

@@ -7,9 +7,11 @@ HTML report. Every chart carries the cautions in its footer.
 
 from __future__ import annotations
 
+import contextlib
 import functools
 import io
 import textwrap
+import warnings
 from collections.abc import Iterable
 from pathlib import Path
 
@@ -17,9 +19,12 @@ import matplotlib
 import numpy as np
 from matplotlib.backends.backend_agg import FigureCanvasAgg
 from matplotlib.figure import Figure
+from matplotlib.text import Text
+from matplotlib.ticker import FixedFormatter, FuncFormatter
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.files import write_with
+from hubload.report.usertext import plain
 
 PLOT_SUFFIXES = (".png", ".svg")
 STYLE = {"svg.fonttype": "path", "svg.hashsalt": "hubload", "font.size": 9,
@@ -64,14 +69,42 @@ def add_caution(figure: Figure) -> None:
                 va="bottom")
 
 
+def printable(figure: Figure) -> Figure:
+    """``figure`` with control characters and escape sequences taken out of every text (names
+    and titles come from the user's file; a font has no glyph for them)."""
+    def cleaned(shown: str) -> str:
+        return plain(shown).replace("\t", " ")
+
+    for text in figure.findobj(Text):
+        if cleaned(text.get_text()) != text.get_text():
+            text.set_text(cleaned(text.get_text()))
+    for axis in (axis for axes in figure.axes for axis in (axes.xaxis, axes.yaxis)):
+        labels = axis.get_major_formatter()    # tick labels are drawn from it later
+        if isinstance(labels, FixedFormatter):
+            labels.seq = [cleaned(str(label)) for label in labels.seq]
+        elif isinstance(labels, FuncFormatter):   # what set_ticks(..., labels) makes
+            labels.func = functools.partial(lambda given, *args: cleaned(str(given(*args))),
+                                            labels.func)
+    return figure
+
+
+@contextlib.contextmanager
+def missing_glyphs_unreported():
+    """A name in a script the plot font lacks (CJK, emoji) is drawn as boxes, without the
+    font's warning on stderr: the terminal and the JSON show it as given."""
+    with warnings.catch_warnings():
+        warnings.filterwarnings("ignore", message="Glyph .* missing from font")
+        yield
+
+
 def save(figure: Figure, path: str, force: bool, inputs: Iterable[str] = ()) -> None:
     """Write ``figure`` as PNG or SVG (by extension), atomically; never over a file without
     ``force``, never over one of the run's ``inputs``."""
     kind = Path(path).suffix.lower().lstrip(".")
 
     def draw(temporary: Path) -> None:
-        with matplotlib.rc_context(STYLE):
-            figure.savefig(temporary, format=kind)
+        with matplotlib.rc_context(STYLE), missing_glyphs_unreported():
+            printable(figure).savefig(temporary, format=kind)
 
     write_with(path, draw, force, PLOT_SUFFIXES, inputs)
 
@@ -79,7 +112,7 @@ def save(figure: Figure, path: str, force: bool, inputs: Iterable[str] = ()) -> 
 def svg_text(figure: Figure) -> str:
     """The figure as an inline <svg> element (no XML prolog, text drawn as paths)."""
     buffer = io.StringIO()
-    with matplotlib.rc_context(STYLE):
-        figure.savefig(buffer, format="svg")
+    with matplotlib.rc_context(STYLE), missing_glyphs_unreported():
+        printable(figure).savefig(buffer, format="svg")
     text = buffer.getvalue()
     return text[text.index("<svg"):]

@@ -23,6 +23,7 @@ import numpy as np
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.files import checked_output, write_text, write_with
+from hubload.report.usertext import plain
 
 SUFFIXES = (".xlsx", ".csv")
 INFINITE = "inf"
@@ -115,6 +116,12 @@ def write_sheets(path: str, sheets: Sequence[Sheet], force: bool,
     return files
 
 
+def workbook_value(value):
+    """User text without escape sequences and control characters: a workbook's XML holds
+    none of C0 but tab and line breaks (Office Open XML, ECMA-376, takes XML 1.0's Char)."""
+    return plain(value) if isinstance(value, str) else value
+
+
 def save_workbook(target: Path, sheets: Sequence[Sheet]) -> None:
     from openpyxl import Workbook    # only a run that writes a workbook pays for it
     from openpyxl.styles import Font
@@ -123,10 +130,10 @@ def save_workbook(target: Path, sheets: Sequence[Sheet]) -> None:
     workbook = Workbook()
     workbook.remove(workbook.active)
     for sheet in sheets:
-        worksheet = workbook.create_sheet(sheet.name[:MAX_SHEET_NAME])
+        worksheet = workbook.create_sheet(workbook_value(sheet.name)[:MAX_SHEET_NAME])
         for note in sheet.note_rows():
-            worksheet.append([note])
-        worksheet.append(list(sheet.header))
+            worksheet.append([workbook_value(note)])
+        worksheet.append([workbook_value(heading) for heading in sheet.header])
         header_row = worksheet.max_row
         for column, heading in enumerate(sheet.header, start=1):
             worksheet.cell(row=header_row, column=column).font = Font(bold=True)
@@ -135,7 +142,7 @@ def save_workbook(target: Path, sheets: Sequence[Sheet]) -> None:
                 min(MAX_WIDTH, max([MIN_WIDTH, len(heading) + 2, *(len(t) + 1 for t in texts)]))
         worksheet.freeze_panes = f"A{header_row + 1}"   # the header stays in view
         for row in sheet.rows:
-            worksheet.append([cell(value) for value in row])
+            worksheet.append([workbook_value(cell(value)) for value in row])
     with target.open("wb") as stream:   # openpyxl would pick the format from the suffix
         workbook.save(stream)
 

@@ -21,7 +21,8 @@ from hubload.report.specs.operating import operating_table
 from hubload.report.specs.refined import displacement_table, distribution_table
 from hubload.report.specs.shaft import cases_table, checks_table, item_limit, item_value, \
     sections_table
-from hubload.report.terminal.tables import plain, render
+from hubload.report.terminal.tables import render
+from hubload.report.usertext import plain
 
 SECONDARY_ROWS = 10     # rows of the further case tables of a large spectrum
 

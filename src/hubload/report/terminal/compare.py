@@ -12,7 +12,7 @@ from hubload.report.columns import CASE_ROWS_SHOWN, most_damaging
 from hubload.report.messages import summary_lines
 from hubload.report.numbers import hours, safety, share
 from hubload.report.quantities import ratios_to_first, shared_life_quantities
-from hubload.report.terminal.tables import plain
+from hubload.report.usertext import plain
 from hubload.studies.compare import Comparison
 
 

@@ -9,7 +9,8 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours_with_unit
 from hubload.report.reliability_notes import field_notes
 from hubload.report.specs.field import fits_table
-from hubload.report.terminal.tables import plain, render
+from hubload.report.terminal.tables import render
+from hubload.report.usertext import plain
 from hubload.studies.field import FieldStudy
 
 

@@ -9,7 +9,8 @@ from hubload.report.cautions import CAUTIONS
 from hubload.report.numbers import hours_with_unit
 from hubload.report.reliability_notes import forecast_notes
 from hubload.report.specs.forecast import per_year_table, units_table
-from hubload.report.terminal.tables import plain, render
+from hubload.report.terminal.tables import render
+from hubload.report.usertext import plain
 from hubload.studies.forecast import Forecast
 
 

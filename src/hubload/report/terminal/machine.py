@@ -18,7 +18,8 @@ from hubload.report.numbers import hours, hours_with_unit, share
 from hubload.report.messages import summary_lines, warning_texts
 from hubload.report.specs.machine import cases_table, wheel_end_table
 from hubload.report.specs.shaft import item_limit, item_value
-from hubload.report.terminal.tables import plain, render
+from hubload.report.terminal.tables import render
+from hubload.report.usertext import plain
 
 
 def machine_lines(machine: MachineResult) -> list[Text]:

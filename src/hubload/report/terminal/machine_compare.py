@@ -12,7 +12,8 @@ from hubload.engine.machine import MachineResult
 from hubload.report.cautions import CAUTIONS
 from hubload.report.columns import Column, TableSpec
 from hubload.report.numbers import hours, safety
-from hubload.report.terminal.tables import plain, render as render_table
+from hubload.report.terminal.tables import render as render_table
+from hubload.report.usertext import plain
 from hubload.report.terminal.compare import ratio_text
 
 

@@ -8,7 +8,8 @@ from rich.text import Text
 
 from hubload.report.cautions import CAUTIONS
 from hubload.report.specs.machine_sweep import point_table
-from hubload.report.terminal.tables import plain, render as render_table
+from hubload.report.terminal.tables import render as render_table
+from hubload.report.usertext import plain
 from hubload.studies.machine_sweep import MachineSweep
 
 

@@ -11,7 +11,8 @@ from hubload.report.columns import Column, TableSpec
 from hubload.report.messages import setting_warnings
 from hubload.report.numbers import fixed, hours, hours_with_unit
 from hubload.report.specs.check import SHORT
-from hubload.report.terminal.tables import plain, render
+from hubload.report.terminal.tables import render
+from hubload.report.usertext import plain
 from hubload.studies.setting import BEST_RANGE_TEXT, SettingSweep
 from hubload.units import UM
 

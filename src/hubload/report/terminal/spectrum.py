@@ -15,7 +15,8 @@ from hubload.report.messages import warning_texts
 from hubload.report.numbers import hours, safety, share
 from hubload.report.specs.fleet import fleet_table
 from hubload.report.specs.logs import lives_table
-from hubload.report.terminal.tables import plain, render as render_spec
+from hubload.report.terminal.tables import render as render_spec
+from hubload.report.usertext import plain
 from hubload.units import KN
 
 TOP_CASES = 10

@@ -13,7 +13,8 @@ from rich.text import Text
 from hubload.report.cautions import CAUTIONS
 from hubload.report.keywords import key_words
 from hubload.report.specs.sweep import point_table
-from hubload.report.terminal.tables import plain, render as render_spec
+from hubload.report.terminal.tables import render as render_spec
+from hubload.report.usertext import plain
 from hubload.studies.sweep import Sweep
 
 MAP_MAX_COLUMNS = 7

@@ -8,28 +8,16 @@ Text with control characters removed, never as markup.
 
 from __future__ import annotations
 
-import re
 import textwrap
 
 from rich.console import Console
 from rich.text import Text
 
 from hubload.report.columns import Column, TableSpec
+from hubload.report.usertext import plain
 
-# Terminal escape sequences whole (ECMA-48: CSI ... final byte, OSC ... BEL or ST, and the
-# two-byte ones), so that no remnant like "[31m" stays behind; then any control character.
-ESCAPE_SEQUENCE = re.compile(r"(\x1b\[|\x9b)[0-?]*[ -/]*[@-~]?"
-                             r"|(\x1b[\]PX^_]|[\x90\x98\x9d\x9e\x9f]).*?(\x07|\x1b\\|\x9c|$)"
-                             r"|\x1b[ -/]*[0-~]?", re.DOTALL)
-CONTROL = re.compile(r"[\x00-\x08\x0b-\x1f\x7f-\x9f]")
 NAME_MIN_WIDTH = 12
 GAP = "   "              # between columns
-
-
-def plain(text: str) -> str:
-    """User text for the terminal: escape sequences and control characters removed (line
-    breaks and tabs stay)."""
-    return CONTROL.sub("", ESCAPE_SEQUENCE.sub("", str(text)))
 
 
 def heading_lines(column: Column, width: int = 0) -> list[str]:
