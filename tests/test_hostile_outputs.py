@@ -108,3 +108,20 @@ def test_a_terminal_without_the_table_characters_still_gets_the_tables():
                                                          "PYTHONIOENCODING": "cp1252"})
     assert completed.returncode == 0, completed.stderr
     assert b"L10" in completed.stdout
+
+
+def test_a_key_path_through_a_value_says_so():
+    message = refused("sweep", YARD, "--vary", "pair.outboard.C_kN.x=1:2:2")
+    assert "'C_kN' is a value" in message and "did you mean" not in message
+
+
+def test_a_case_table_with_a_csv_syntax_error_names_the_row(tmp_path):
+    (tmp_path / "duty.csv").write_text('name,time_percent\n"travel" x,100\n', encoding="utf-8")
+    case_file = tmp_path / "table.toml"
+    text = (LOAD_CASES / "yard_loader_from_table.toml").read_text(encoding="utf-8")
+    case_file.write_text(text.replace('"yard_loader_duty.csv"', '"duty.csv"'), encoding="utf-8")
+    assert "row 2: CSV syntax error" in refused("check", case_file)
+
+
+def test_an_empty_file_name_is_named_as_such():
+    assert "got an empty one" in refused("check", "")

@@ -53,6 +53,8 @@ def read_document(path: str | Path) -> dict:
 def read_toml(path: str | Path) -> dict:
     """The parsed TOML of the file at ``path`` as written; InputError naming it."""
     file = str(path)
+    if not file:
+        raise InputError("expected the name of a TOML file, got an empty one", file="''")
     try:
         text = Path(path).read_text(encoding="utf-8")
     except FileNotFoundError:

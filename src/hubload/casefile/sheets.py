@@ -55,10 +55,12 @@ def csv_grid(text: str, file: str) -> Grid:
     lines = text.splitlines()
     first = next((line for line in lines if line.strip() and not is_comment(line)), "")
     delimiter = SEMICOLON if SEMICOLON in first and "," not in first else ","
+    reader = csv.reader(io.StringIO(text), delimiter=delimiter, strict=True)
     try:
-        records = list(csv.reader(io.StringIO(text), delimiter=delimiter, strict=True))
+        records = list(reader)
     except csv.Error as error:
-        raise InputError(f"CSV syntax error ({error})", file=file) from None
+        raise InputError(f"CSV syntax error ({error})", file=file,
+                         key_path=f"row {reader.line_num}") from None
     numbered = [(index + 1, tuple(cell.strip() for cell in record))
                 for index, record in enumerate(records)]
     return split_header(numbered, file, decimal_comma=delimiter == SEMICOLON)

@@ -69,7 +69,11 @@ def resolve(segments: list, document: Mapping, table: Table, text: str) -> Field
             table = sub
             continue
         field = table.field_named(name)
-        if field is None or not last:
+        if field is not None and not last:
+            raise InputError(f"'{name}' is a value, not a table: the key path ends there "
+                             f"(e.g. {'.'.join(s for s, _ in segments[:position + 1])})",
+                             key_path=text)
+        if field is None:
             raise unknown_key(name, table, text)
         check_numeric(field, index, node, text)
         check_choice_free(table, name, node, text)

@@ -131,9 +131,11 @@ def fleet_forecast(units, *, machines: int, usage_median_h_per_year: float, usag
     hours = np.minimum(usage * calendar[:, None], cap[:, None])
     first = np.stack([life.failure_probability(hours) for life in lives])  # (units, rows, nodes)
     renewals = _renewals_per_unit(lives, hours)
-    first_cumulative = machines * np.einsum("jrq,rq->r", first, weight)
+    # the quadrature weights add to 1 within rounding: no more units fail than there are
+    first_cumulative = np.minimum(machines * np.einsum("jrq,rq->r", first, weight),
+                                  machines * len(lives))
     all_cumulative = machines * np.einsum("jrq,rq->r", renewals, weight)
-    any_claim = float(weight[-1] @ series_failure_probability(lives, hours[-1]))
+    any_claim = min(1.0, float(weight[-1] @ series_failure_probability(lives, hours[-1])))
     low, high = fleet_count_quantiles(first[:, -1], weight[-1], machines, BAND_QUANTILES)
     return FleetForecast(
         year=np.arange(1, years + 1),
