@@ -125,3 +125,22 @@ def test_a_case_table_with_a_csv_syntax_error_names_the_row(tmp_path):
 
 def test_an_empty_file_name_is_named_as_such():
     assert "got an empty one" in refused("check", "")
+
+
+def test_a_name_with_a_line_break_stays_on_its_table_row(document, write_case_file):
+    path = with_case_name(document, write_case_file, "travel\nloaded")
+    result = run("check", path)
+    assert result.exit_code == 0, result.output
+    assert "travel loaded" in result.output
+
+
+def test_a_brief_in_markdown_keeps_names_on_one_line_and_tags_inert(document, write_case_file,
+                                                                   tmp_path):
+    # CommonMark 0.31, 4.6 (HTML blocks) and 6.6 (raw HTML): a tag in text passes through
+    brief = tmp_path / "brief.md"
+    path = with_case_name(document, write_case_file, "travel\n# heading <script>x</script>")
+    result = run("brief", path, "--out", brief)
+    assert result.exit_code == 0, result.output
+    text = brief.read_text(encoding="utf-8")
+    assert "<script>" not in text and "\n# heading" not in text
+    assert "travel # heading &lt;script>" in text

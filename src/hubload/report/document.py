@@ -11,8 +11,9 @@ import html
 import re
 from dataclasses import dataclass
 
-from hubload.report.usertext import plain
+from hubload.report.usertext import one_line, plain
 
+HTML_TAG_START = re.compile(r"<(?=[A-Za-z/!?])")     # "kappa < 0.1" stays as written
 INLINE = re.compile(r"\*\*(.+?)\*\*|`([^`]+)`")
 
 
@@ -48,25 +49,32 @@ class Caution:
 Block = Heading | Paragraph | Table | Items | Caution
 
 
+def markdown_text(text: str) -> str:
+    """User text in Markdown: one line (a line break in a name would end a heading or start
+    one), and no raw HTML (a renderer would pass a tag through)."""
+    return HTML_TAG_START.sub("&lt;", one_line(text))
+
+
 def markdown_cell(text: str) -> str:
-    return str(text).replace("|", "\\|").replace("\n", " ")
+    return markdown_text(text).replace("|", "\\|")
 
 
 def to_markdown(blocks: list[Block]) -> str:
     lines: list[str] = []
     for block in blocks:
         if isinstance(block, Heading):
-            lines += ["#" * block.level + " " + block.text, ""]
+            lines += ["#" * block.level + " " + markdown_text(block.text), ""]
         elif isinstance(block, Paragraph):
-            lines += [block.text, ""]
+            lines += [markdown_text(block.text), ""]
         elif isinstance(block, Caution):
-            lines += [f"> **Caution.** {block.text}", ""]
+            lines += [f"> **Caution.** {markdown_text(block.text)}", ""]
         elif isinstance(block, Items):
-            lines += [f"{index}. {item}" if block.numbered else f"- {item}"
+            lines += [f"{index}. {markdown_text(item)}" if block.numbered
+                      else f"- {markdown_text(item)}"
                       for index, item in enumerate(block.items, start=1)] + [""]
         else:
             if block.caption:
-                lines += [block.caption, ""]
+                lines += [markdown_text(block.caption), ""]
             lines += ["| " + " | ".join(map(markdown_cell, block.headers)) + " |",
                       "|" + " --- |" * len(block.headers)]
             lines += ["| " + " | ".join(map(markdown_cell, row)) + " |" for row in block.rows]

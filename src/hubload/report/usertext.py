@@ -11,6 +11,7 @@ ESCAPE_SEQUENCE = re.compile(r"(\x1b\[|\x9b)[0-?]*[ -/]*[@-~]?"
                              r"|(\x1b[\]PX^_]|[\x90\x98\x9d\x9e\x9f]).*?(\x07|\x1b\\|\x9c|$)"
                              r"|\x1b[ -/]*[0-~]?", re.DOTALL)
 CONTROL = re.compile(r"[\x00-\x08\x0b-\x1f\x7f-\x9f]")
+LINE_BREAKS = re.compile(r"[\r\n\t]+")
 
 
 def plain(text: str) -> str:
@@ -21,3 +22,13 @@ def plain(text: str) -> str:
     'wheel red'
     """
     return CONTROL.sub("", ESCAPE_SEQUENCE.sub("", str(text)))
+
+
+def one_line(text: str) -> str:
+    """:func:`plain` text on one line: line breaks and tabs become spaces (a name that
+    breaks would split a table row, a Markdown heading or an error line).
+
+    >>> one_line("front\\r\\nleft\\twheel")
+    'front left wheel'
+    """
+    return LINE_BREAKS.sub(" ", plain(text))

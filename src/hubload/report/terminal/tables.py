@@ -14,7 +14,7 @@ from rich.console import Console
 from rich.text import Text
 
 from hubload.report.columns import Column, TableSpec
-from hubload.report.usertext import plain
+from hubload.report.usertext import one_line, plain
 
 NAME_MIN_WIDTH = 12
 GAP = "   "              # between columns
@@ -29,7 +29,7 @@ def heading_lines(column: Column, width: int = 0) -> list[str]:
 def column_width(spec: TableSpec, column: Column, wrap: bool) -> int:
     """The narrowest a column can be without cutting a number or a word (a name column
     keeps at least NAME_MIN_WIDTH, or its longest name when shorter)."""
-    cells = [plain(column.cell(row)) for row in range(spec.row_count)]
+    cells = [one_line(column.cell(row)) for row in range(spec.row_count)]
     if column.name:
         words = [word for text in cells + [column.label, column.unit] for word in text.split()]
         shortest = min(NAME_MIN_WIDTH, max((len(cell) for cell in cells), default=1))
@@ -74,7 +74,7 @@ def widths_for(spec: TableSpec, columns: list[Column], wrap: bool, width: int) -
     spare = width - sum(widths) - len(GAP) * (len(widths) - 1)
     for index, column in enumerate(columns):
         if column.name and spare > 0:
-            longest = max([len(plain(column.cell(row))) for row in range(spec.row_count)]
+            longest = max([len(one_line(column.cell(row))) for row in range(spec.row_count)]
                           + [len(line) for line in heading_lines(column)])
             grown = min(longest, widths[index] + spare)
             spare -= grown - widths[index]
@@ -100,7 +100,7 @@ def table_text(spec: TableSpec, columns: list[Column], title: str, wrap: bool,
                                columns, widths, lambda _column: "bold"))
     text.append("─" * (sum(widths) + len(GAP) * (len(widths) - 1)) + "\n")
     for row in range(spec.row_count):
-        cells = [cell_lines(plain(c.cell(row)), w, c.name) for c, w in zip(columns, widths)]
+        cells = [cell_lines(one_line(c.cell(row)), w, c.name) for c, w in zip(columns, widths)]
         height = max(map(len, cells))
         text.append_text(rows_text([cell + [""] * (height - len(cell)) for cell in cells],
                                    columns, widths,
