@@ -26,6 +26,9 @@ def distance_km(life_h, mean_speed_rpm, rolling_radius_m):
 
     An infinite life is an infinite distance, even at a mean speed of zero.
     """
+    # the speed's factor first: a creeping wheel's long life times its small speed stays
+    # finite where the life times 60 would overflow
+    km_per_hour = mean_speed_rpm * 60.0 * 2.0 * np.pi * rolling_radius_m / 1000.0
     with np.errstate(invalid="ignore"):
-        km = life_h * 60.0 * mean_speed_rpm * 2.0 * np.pi * rolling_radius_m / 1000.0
+        km = km_per_hour * life_h
     return np.where(np.isinf(life_h), np.inf, km)
