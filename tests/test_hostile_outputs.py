@@ -144,3 +144,9 @@ def test_a_brief_in_markdown_keeps_names_on_one_line_and_tags_inert(document, wr
     text = brief.read_text(encoding="utf-8")
     assert "<script>" not in text and "\n# heading" not in text
     assert "travel # heading &lt;script>" in text
+
+
+def test_a_spectrum_file_is_a_toml_file(tmp_path):
+    log = tmp_path / "log.csv"
+    log.write_text("time_s,wheel_load_kN,speed_rpm\n0,10,50\n1,10,50\n", encoding="utf-8")
+    assert ".toml" in refused("spectrum", log, "--case-file", YARD, "--out", tmp_path / "s.csv")

@@ -46,7 +46,7 @@ def spectrum(request: Request) -> api.LogsResult:
     inputs = (*paths, request.case_file)
     targets = fleet_targets(request, paths, inputs) if folder else {}
     if request.out and not folder:  # before the log is read: a refusal should not wait
-        checked_output(request.out, request.force, inputs=inputs)
+        checked_output(request.out, request.force, (".toml",), inputs=inputs)
     if request.table:
         from hubload.commands import checked_table
         from hubload.report.spreadsheet.spectrum import FOLDER_SHEETS, LOG_SHEETS
@@ -104,8 +104,9 @@ def fleet_targets(request: Request, paths: list[str],
     if not request.out:
         return {}
     folder = Path(request.out)
-    if folder.exists() and not folder.is_dir():
-        raise InputError("expected a folder for the spectra of a folder of logs",
+    if (folder.exists() and not folder.is_dir()) or folder.suffix.lower() == ".toml":
+        raise InputError("expected a folder for the spectra of a folder of logs (one "
+                         f"load-case file per log and {COMBINED_NAME}.toml)",
                          file=str(folder), key_path="--out")
     targets = {path: folder / f"{Path(path).stem}.toml" for path in paths}
     targets[COMBINED_NAME] = folder / f"{COMBINED_NAME}.toml"
