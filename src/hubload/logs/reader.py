@@ -153,7 +153,9 @@ def numeric(column: pa.Array, key: str, header: str, path: Path) -> np.ndarray:
     if not (pa.types.is_integer(column.type) or pa.types.is_floating(column.type)):
         raise InputError(f"expected numbers, got {column.type} values", file=str(path),
                          key_path=f"column {header!r}")
-    values = pc.cast(column, pa.float64()).to_numpy(zero_copy_only=False)
+    # an integer beyond 2^53 has no exact float: unsafe casting rounds it (it is absurd as a
+    # sample anyway, and the plausibility limits then judge it)
+    values = pc.cast(column, pa.float64(), safe=False).to_numpy(zero_copy_only=False)
     # an infinite sample is as unusable as an empty one: the cleaner's policy applies
     return np.where(np.isinf(values), np.nan, values)
 
