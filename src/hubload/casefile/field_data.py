@@ -65,23 +65,12 @@ def csv_rows(path):
 
 
 def xlsx_rows(path):
-    """(row number, cells) of the first worksheet of an XLSX workbook."""
-    try:
-        from openpyxl import load_workbook
-    except ImportError:
-        raise InputError("reading .xlsx needs openpyxl (pip install openpyxl), or save the "
-                         "sheet as CSV", file=str(path)) from None
-    try:
-        workbook = load_workbook(path, read_only=True, data_only=True)
-    except Exception as error:  # openpyxl raises many kinds for a damaged workbook
-        raise InputError(f"cannot read the workbook ({type(error).__name__}: {error})",
-                         file=str(path)) from None
-    try:
-        sheet = workbook.worksheets[0]
-        for number, cells in enumerate(sheet.iter_rows(values_only=True), start=1):
-            yield number, ["" if cell is None else cell for cell in cells]
-    finally:
-        workbook.close()
+    """(row number, cells) of the first worksheet of an XLSX workbook (casefile.sheets:
+    formulas by their saved values)."""
+    from hubload.casefile.sheets import saved_values
+
+    for number, cells in saved_values(Path(path), str(path)):
+        yield number, ["" if cell is None else cell for cell in cells]
 
 
 def column_names(cells) -> dict[str, int]:

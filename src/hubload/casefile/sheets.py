@@ -89,14 +89,19 @@ def is_empty(cells) -> bool:
 def xlsx_grid(path: Path, file: str, sheet: str | None) -> Grid:
     if not path.exists():
         raise InputError("file not found", file=file)
+    return split_header(saved_values(path, file, sheet), file)
+
+
+def saved_values(path: Path, file: str, sheet: str | None = None) -> list:
+    """(row number, cell values) of the sheet (the first without ``sheet``), a formula by
+    the value the spreadsheet program saved with it; InputError where none was saved."""
     values = sheet_values(path, file, sheet, computed=False)
     if any(is_formula(cell) for _, cells in values for cell in cells):
-        # a formula's value is the one the spreadsheet program saved with the file
         computed = sheet_values(path, file, sheet, computed=True)
         values = [(number, tuple(uncomputed(file, number, column, formula, value)
                                  for column, (formula, value) in enumerate(zip(cells, saved))))
                   for (number, cells), (_, saved) in zip(values, computed)]
-    return split_header(values, file)
+    return values
 
 
 def is_formula(cell) -> bool:
