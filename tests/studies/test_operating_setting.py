@@ -166,3 +166,13 @@ def test_case_temperatures_of_shaft_and_housing_need_a_setting_table(tmp_path):
     document["case"][0]["shaft_temperature_C"] = 70
     found = run("check", write_toml(document, tmp_path / "stray.toml"))
     assert found.exit_code == 2 and "case[0].shaft_temperature_C" in found.output
+
+
+def test_lives_by_the_iso_rule_say_the_setting_does_not_enter_them(tmp_path):
+    # ISO 281 (the rule for a pair) takes the bearings at zero clearance: a [pair.setting]
+    # given with that method changes nothing in the lives, which the user must be told
+    _, path = with_setting(tmp_path, shaft_temperature_C=60, housing_temperature_C=50)
+    kinds = {method: [r["kind"] for r in check(path, "--method", method)["warning_records"]]
+             for method in ("iso281", "refined")}
+    assert kinds["iso281"].count("setting_outside_the_rule") == 1
+    assert "setting_outside_the_rule" not in kinds["refined"]

@@ -204,7 +204,17 @@ def setting_findings(result) -> list[Finding]:
         if cases.size:
             found.append(Finding("cup_fit_lost", int(cases[0]), label,
                                  {"cases": float(cases.size)}))
-    return found + preload_friction_findings(result)
+    return found + rule_setting_findings(result, operating) + preload_friction_findings(result)
+
+
+def rule_setting_findings(result, operating_m) -> list[Finding]:
+    """Lives by the ISO 281 rule alone: it takes the pair at zero clearance, so the file's
+    operating setting (the reason a [pair.setting] is given) does not enter them."""
+    if result.refined is not None or operating_m.size == 0:
+        return []
+    worst = int(np.argmax(np.abs(operating_m)))
+    return [Finding("setting_outside_the_rule", worst, values={
+        "low_m": float(np.min(operating_m)), "high_m": float(np.max(operating_m))})]
 
 
 def preload_friction_findings(result) -> list[Finding]:

@@ -279,6 +279,14 @@ def setting_loses_preload(found: list[Finding], names) -> list[str]:
             f"bearing supplier."]
 
 
+def setting_outside_the_rule(found: list[Finding], names) -> list[str]:
+    low, high = (f"{found[0].values[key] / UM:+.0f}" for key in ("low_m", "high_m"))
+    span = low if low == high else f"{low} to {high}"
+    return [f"The lives follow the ISO 281 rule, which takes the pair at zero clearance: the "
+            f"operating setting of {span} um (docs/operating-setting.md) does not enter them. A preload or a wide end play "
+            f"shortens the lives; run --method refined for them at each case's setting."]
+
+
 def cup_fit_lost(found: list[Finding], names) -> list[str]:
     return [f"The {f.subject} cup's interference fit is lost in {f.values['cases']:.0f} "
             f"case(s), first in {quoted(names, f.case)}: the housing expands more than the cup "
@@ -312,6 +320,7 @@ STUDY_TEXTS: dict[str, Callable[[list[Finding], Sequence[str]], list[str]]] = {
     "log_shaft_safety_low": log_shaft_safety_low,
     "log_permissible_exceeded": log_permissible_exceeded,
     "setting_becomes_preload": setting_becomes_preload,
-    "setting_loses_preload": setting_loses_preload, "cup_fit_lost": cup_fit_lost,
+    "setting_loses_preload": setting_loses_preload,
+    "setting_outside_the_rule": setting_outside_the_rule, "cup_fit_lost": cup_fit_lost,
     "preload_raises_friction": preload_raises_friction,
     "one_sided_side_force": one_sided_side_force}
