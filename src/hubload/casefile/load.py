@@ -173,9 +173,9 @@ def memo_cases(memo: dict | None, blocks: list[dict], wheel: Wheel, motor: Motor
     adhesion, motor and vehicle (all the cases read of the other tables): a sweep's variants
     share their unchanged [[case]] list, and deriving its operating points is the bulk of
     building a variant. The memo keeps the blocks it saw, so their ids stay unique."""
-    key = (id(blocks), wheel.rolling_radius_m, wheel.adhesion_mu, motor, vehicle)
     if memo is None:
         return read_cases(blocks, wheel, motor, vehicle)
+    key = (id(blocks), wheel.rolling_radius_m, wheel.adhesion_mu, motor, vehicle)
     if key not in memo:
         memo[key] = (blocks, read_cases(blocks, wheel, motor, vehicle))
     return memo[key][1]

@@ -259,32 +259,35 @@ def log_permissible_exceeded(found: list[Finding], names) -> list[str]:
             f"the supplier's permissible load in the log."]
 
 
+def operating_settings(found: list[Finding], names) -> str:
+    """The cases of a setting finding with their operating settings: 'a' (+12 um), ..."""
+    return ", ".join(f"{quoted(names, f.case)} ({f.values['operating_m'] / UM:+.0f} um)"
+                     for f in found)
+
+
 def setting_becomes_preload(found: list[Finding], names) -> list[str]:
-    where = ", ".join(f"{quoted(names, f.case)} ({f.values['operating_m'] / UM:+.0f} um)"
-                      for f in found)
     return [f"The assembly end play of {found[0].values['assembly_m'] / UM:g} um turns into a "
-            f"preload in operation in {where}: shaft and cones run warmer than housing and cups "
-            f"(docs/operating-setting.md). Check the temperatures and the setting with the "
-            f"bearing supplier."]
+            f"preload in operation in {operating_settings(found, names)}: shaft and cones run "
+            f"warmer than housing and cups (docs/operating-setting.md). Check the temperatures "
+            f"and the setting with the bearing supplier."]
 
 
 def setting_loses_preload(found: list[Finding], names) -> list[str]:
-    where = ", ".join(f"{quoted(names, f.case)} ({f.values['operating_m'] / UM:+.0f} um)"
-                      for f in found)
     return [f"The assembly preload of {-found[0].values['assembly_m'] / UM:g} um turns into end "
-            f"play in operation in {where}: housing and cups grow more than shaft and cones "
-            f"(a light-alloy housing, or a housing warmer than the shaft; "
-            f"docs/operating-setting.md). The pair then runs with a narrower load zone and less "
-            f"stiffness than it was set for. Check the temperatures and the setting with the "
-            f"bearing supplier."]
+            f"play in operation in {operating_settings(found, names)}: housing and cups grow "
+            f"more than shaft and cones (a light-alloy housing, or a housing warmer than the "
+            f"shaft; docs/operating-setting.md). The pair then runs with a narrower load zone "
+            f"and less stiffness than it was set for. Check the temperatures and the setting "
+            f"with the bearing supplier."]
 
 
 def setting_outside_the_rule(found: list[Finding], names) -> list[str]:
     low, high = (f"{found[0].values[key] / UM:+.0f}" for key in ("low_m", "high_m"))
     span = low if low == high else f"{low} to {high}"
     return [f"The lives follow the ISO 281 rule, which takes the pair at zero clearance: the "
-            f"operating setting of {span} um (docs/operating-setting.md) does not enter them. A preload or a wide end play "
-            f"shortens the lives; run --method refined for them at each case's setting."]
+            f"operating setting of {span} um (docs/operating-setting.md) does not enter them. "
+            f"A preload or a wide end play shortens the lives; run --method refined for them "
+            f"at each case's setting."]
 
 
 def cup_fit_lost(found: list[Finding], names) -> list[str]:
